@@ -1,0 +1,14 @@
+package dev.changeling.cli;
+
+import picocli.CommandLine.Command;
+
+/** The root command; it only lists the subcommands. */
+@Command(name = "changeling",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = "Mutation analysis for code review: would your tests notice if this code were subtly wrong?",
+        subcommands = {
+            MutantsCommand.class,
+        })
+final class ChangelingCommand {
+}

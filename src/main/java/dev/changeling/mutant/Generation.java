@@ -1,0 +1,48 @@
+package dev.changeling.mutant;
+
+import dev.changeling.source.JavaSources;
+import dev.changeling.source.ParseProblem;
+import dev.changeling.source.SourceFile;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Parses files and makes the mutants a request asks for; files that do not parse are reported and skipped. */
+public final class Generation {
+
+    /** The mutants of a set of files, the files they were made from, and the files that were skipped. */
+    public record Generated(List<Mutant> mutants, Map<String, SourceFile> files, List<ParseProblem> problems,
+                            long lines) {
+    }
+
+    private Generation() {
+    }
+
+    public static Generated generate(List<SourceFile> sources, MutantRequest request) {
+        PointFinder finder = new PointFinder(request.operators());
+        List<Point> points = new ArrayList<>();
+        Map<String, SourceFile> files = new LinkedHashMap<>();
+        List<ParseProblem> problems = new ArrayList<>();
+        long lines = 0;
+        for (SourceFile source : sources) {
+            lines += source.lines().lineCount();
+            JavaSources.Parsed parsed = JavaSources.parse(source);
+            if (!parsed.ok()) {
+                problems.add(parsed.problem());
+                continue;
+            }
+            files.put(source.path(), source);
+            finder.find(parsed).stream().filter(request.pointFilter()).forEach(points::add);
+        }
+        List<Mutant> mutants = new ArrayList<>();
+        for (int order : request.orders()) {
+            if (order == 1) {
+                points.stream().map(Mutant::firstOrder).forEach(mutants::add);
+            } else {
+                mutants.addAll(HigherOrder.combine(points, order, request.scope(), request.seed()));
+            }
+        }
+        return new Generated(mutants, files, problems, lines);
+    }
+}

@@ -1,0 +1,36 @@
+package dev.changeling.mutant;
+
+import dev.changeling.operator.MutationOperator;
+import java.util.List;
+import java.util.function.Predicate;
+
+/**
+ * Which mutants to make.
+ *
+ * @param operators   the operators to apply
+ * @param orders      the orders wanted: 1 for first-order, 2..5 for k-order
+ * @param scope       where the points of one k-order mutant come from
+ * @param seed        the seed of k-order combination
+ * @param pointFilter which points are in scope (files, operators, changed lines)
+ */
+public record MutantRequest(
+        List<MutationOperator> operators,
+        List<Integer> orders,
+        HigherOrder.Scope scope,
+        long seed,
+        Predicate<Point> pointFilter) {
+
+    public MutantRequest {
+        operators = List.copyOf(operators);
+        orders = List.copyOf(orders);
+        for (int order : orders) {
+            if (order < 1 || order > HigherOrder.MAX_ORDER) {
+                throw new IllegalArgumentException("an order must be from 1 to " + HigherOrder.MAX_ORDER + ", not " + order);
+            }
+        }
+    }
+
+    public static MutantRequest firstOrder(List<MutationOperator> operators) {
+        return new MutantRequest(operators, List.of(1), HigherOrder.Scope.METHOD, 1L, point -> true);
+    }
+}

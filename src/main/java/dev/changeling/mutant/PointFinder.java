@@ -1,0 +1,70 @@
+package dev.changeling.mutant;
+
+import com.github.javaparser.ast.Node;
+import com.github.javaparser.ast.stmt.ExpressionStmt;
+import com.github.javaparser.ast.stmt.ForStmt;
+import com.github.javaparser.ast.stmt.Statement;
+import dev.changeling.operator.MutationOperator;
+import dev.changeling.operator.Proposal;
+import dev.changeling.operator.Proposals;
+import dev.changeling.source.JavaSources;
+import dev.changeling.source.SourceFile;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Finds every mutation point of a parsed file: each operator visits each node that may be mutated. */
+public final class PointFinder {
+
+    private final List<MutationOperator> operators;
+
+    public PointFinder(List<MutationOperator> operators) {
+        this.operators = List.copyOf(operators);
+    }
+
+    public List<Point> find(JavaSources.Parsed parsed) {
+        SourceFile file = parsed.file();
+        Proposals proposals = new Proposals(file);
+        parsed.unit().walk(Node.TreeTraversal.PREORDER, node -> {
+            if (!Eligibility.excluded(node)) {
+                for (MutationOperator operator : operators) {
+                    proposals.from(operator);
+                    operator.visit(node, proposals);
+                }
+            }
+        });
+        return toPoints(file, proposals.collected());
+    }
+
+    private static List<Point> toPoints(SourceFile file, List<Proposal> proposals) {
+        Map<String, Integer> ordinals = new HashMap<>();
+        List<Point> points = new ArrayList<>(proposals.size());
+        for (Proposal proposal : proposals) {
+            Node host = proposal.host();
+            String type = Members.typeOf(host);
+            String member = Members.memberOf(host);
+            String snippet = Snippets.normalise(file.textOf(host));
+            String replacement = Snippets.normalise(proposal.replacement());
+            String key = Fingerprint.tupleKey(file.path(), type, member, proposal.operator(), snippet, replacement);
+            int ordinal = ordinals.merge(key, 1, Integer::sum) - 1;
+            points.add(new Point(file.path(), type, member, proposal.operator(), kindOf(host),
+                    file.spanOf(host), proposal.edit(), proposal.replacement(), snippet, proposal.description(),
+                    file.lines().line(proposal.edit().begin()), Eligibility.oncePerJvm(host),
+                    Fingerprint.of(file.path(), type, member, proposal.operator(), snippet, replacement, ordinal)));
+        }
+        return points;
+    }
+
+    private static HostKind kindOf(Node host) {
+        if (host instanceof Statement) {
+            return HostKind.STATEMENT;
+        }
+        Node parent = host.getParentNode().orElse(null);
+        boolean standsAlone = parent instanceof ExpressionStmt
+                || (parent instanceof ForStmt loop
+                    && (loop.getInitialization().stream().anyMatch(init -> init == host)
+                        || loop.getUpdate().stream().anyMatch(update -> update == host)));
+        return standsAlone ? HostKind.STATEMENT_EXPRESSION : HostKind.EXPRESSION;
+    }
+}

@@ -1,0 +1,59 @@
+package dev.changeling.mutant;
+
+import dev.changeling.UserError;
+import dev.changeling.project.ProjectLayout;
+import dev.changeling.source.JavaSources;
+import dev.changeling.source.SourceFile;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The mutants a command works on: those of the project's main sources (or of the paths named), as
+ * the request makes them, then sampled when a sample is asked for.
+ *
+ * @param request    which mutants to make
+ * @param sampleSize how many to keep, or null for all
+ * @param margin     alternatively, the ±margin at 95% the sample should give (Cochran), or null
+ * @param sampleSeed the seed of the sample
+ */
+public record Selection(MutantRequest request, Integer sampleSize, Double margin, long sampleSeed) {
+
+    /** The chosen mutants, the population they were drawn from, and the generation they came from. */
+    public record Chosen(List<Mutant> mutants, int population, boolean sampled, Generation.Generated generated) {
+    }
+
+    public Chosen choose(ProjectLayout layout, List<Path> only) {
+        Generation.Generated generated = Generation.generate(read(layout, only), request);
+        List<Mutant> all = generated.mutants();
+        Integer size = sampleSize;
+        if (size == null && margin != null) {
+            size = Sampling.sizeForMargin(margin, 0.5, all.size());
+        }
+        if (size == null || size >= all.size()) {
+            return new Chosen(all, all.size(), false, generated);
+        }
+        return new Chosen(Sampling.pick(all, size, sampleSeed), all.size(), true, generated);
+    }
+
+    private static List<SourceFile> read(ProjectLayout layout, List<Path> only) {
+        List<SourceFile> files = new ArrayList<>();
+        for (Path path : layout.mainSources()) {
+            if (only.isEmpty() || only.stream().anyMatch(wanted -> path.startsWith(wanted.toAbsolutePath().normalize()))) {
+                try {
+                    files.add(JavaSources.read(layout.root(), path));
+                } catch (IOException e) {
+                    throw new UserError(layout.relative(path) + ": cannot read (" + e.getMessage() + ")");
+                }
+            }
+        }
+        for (Path wanted : only) {
+            if (!Files.exists(wanted)) {
+                throw new UserError(wanted + ": no such file or folder");
+            }
+        }
+        return files;
+    }
+}

@@ -1,0 +1,36 @@
+package dev.changeling.operator;
+
+import com.github.javaparser.ast.expr.BinaryExpr;
+import com.github.javaparser.ast.expr.BooleanLiteralExpr;
+import com.github.javaparser.ast.expr.Expression;
+import com.github.javaparser.ast.expr.NullLiteralExpr;
+import com.github.javaparser.ast.expr.StringLiteralExpr;
+import com.github.javaparser.ast.expr.TextBlockLiteralExpr;
+import java.util.List;
+
+/** What the relational operators share: the six comparisons, and which of them can be ordered. */
+final class Comparisons {
+
+    static final List<BinaryExpr.Operator> RELATIONAL = List.of(
+            BinaryExpr.Operator.LESS, BinaryExpr.Operator.LESS_EQUALS,
+            BinaryExpr.Operator.GREATER, BinaryExpr.Operator.GREATER_EQUALS,
+            BinaryExpr.Operator.EQUALS, BinaryExpr.Operator.NOT_EQUALS);
+
+    private Comparisons() {
+    }
+
+    /**
+     * Whether swapping in another comparison can compile: not when either side is evidently not a
+     * number ({@code null}, a boolean or a string literal).
+     */
+    static boolean ordered(BinaryExpr comparison) {
+        return !evidentlyUnordered(comparison.getLeft()) && !evidentlyUnordered(comparison.getRight());
+    }
+
+    private static boolean evidentlyUnordered(Expression side) {
+        return side instanceof NullLiteralExpr
+                || side instanceof BooleanLiteralExpr
+                || side instanceof StringLiteralExpr
+                || side instanceof TextBlockLiteralExpr;
+    }
+}

@@ -1,0 +1,29 @@
+package dev.changeling.operator;
+
+import com.github.javaparser.ast.Node;
+import com.github.javaparser.ast.expr.BinaryExpr;
+
+/** Replaces a comparison by each of the other five comparisons, by {@code true} and by {@code false}. */
+public final class RelationalAll implements MutationOperator {
+
+    @Override
+    public String id() {
+        return "relational-all";
+    }
+
+    @Override
+    public void visit(Node node, Proposals out) {
+        if (!(node instanceof BinaryExpr comparison) || !Comparisons.RELATIONAL.contains(comparison.getOperator())) {
+            return;
+        }
+        if (Comparisons.ordered(comparison)) {
+            for (BinaryExpr.Operator to : Comparisons.RELATIONAL) {
+                if (to != comparison.getOperator()) {
+                    OperatorRewrite.swap(comparison, to, out);
+                }
+            }
+        }
+        out.replaceWhole(comparison, "true", "replaced the comparison with true");
+        out.replaceWhole(comparison, "false", "replaced the comparison with false");
+    }
+}

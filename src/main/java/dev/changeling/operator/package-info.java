@@ -1,0 +1,2 @@
+/** The mutation operators, one small class each, and the one registry that lists them. */
+package dev.changeling.operator;

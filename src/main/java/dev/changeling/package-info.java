@@ -1,0 +1,2 @@
+/** Changeling: mutation analysis for code review. The packages below split it by feature. */
+package dev.changeling;

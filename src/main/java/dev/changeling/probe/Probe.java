@@ -1,0 +1,102 @@
+package dev.changeling.probe;
+
+/**
+ * The switch that schema-rewritten code calls: {@code Probe.on(17)} is true while mutation point 17
+ * is switched on, and records that point 17 was reached. JDK only, and tiny, because it sits on the
+ * hot path of every mutated expression.
+ */
+public final class Probe {
+
+    private static boolean[] active = new boolean[0];
+    private static boolean[] seen = new boolean[0];
+    private static int[] reached = new int[16];
+    private static int reachedCount;
+    private static boolean recording;
+    private static final Object LOCK = new Object();
+
+    private Probe() {
+    }
+
+    /** Whether point {@code id} is switched on; records the reach while recording. */
+    public static boolean on(int id) {
+        if (recording) {
+            reach(id);
+        }
+        boolean[] now = active;
+        return id < now.length && now[id];
+    }
+
+    /** Sizes the tables for {@code points} mutation points and switches everything off. */
+    public static void prepare(int points) {
+        synchronized (LOCK) {
+            active = new boolean[points];
+            seen = new boolean[points];
+            reachedCount = 0;
+        }
+    }
+
+    /** Switches exactly the given points on (none for the unmutated program). */
+    public static void activate(int... ids) {
+        boolean[] next = new boolean[active.length];
+        for (int id : ids) {
+            next[id] = true;
+        }
+        active = next;
+    }
+
+    public static void record(boolean on) {
+        recording = on;
+    }
+
+    /** The points reached since the last drain, each once, and forgets them. */
+    public static int[] drainReached() {
+        synchronized (LOCK) {
+            int[] out = java.util.Arrays.copyOf(reached, reachedCount);
+            for (int id : out) {
+                seen[id] = false;
+            }
+            reachedCount = 0;
+            return out;
+        }
+    }
+
+    private static void reach(int id) {
+        if (id >= seen.length || seen[id]) {
+            return;
+        }
+        synchronized (LOCK) {
+            if (!seen[id]) {
+                seen[id] = true;
+                if (reachedCount == reached.length) {
+                    reached = java.util.Arrays.copyOf(reached, reachedCount * 2);
+                }
+                reached[reachedCount++] = id;
+            }
+        }
+    }
+
+    /** Lets a value-producing expression stand as a statement in a schema ({@code i++;}, a for-loop update). */
+    public static void discard(boolean value) {
+        // the expression was evaluated for its side effect; nothing to keep
+    }
+
+    public static void discard(int value) {
+        // as above
+    }
+
+    public static void discard(long value) {
+        // as above
+    }
+
+    public static void discard(float value) {
+        // as above
+    }
+
+    public static void discard(double value) {
+        // as above
+    }
+
+    public static void discard(Object value) {
+        // as above
+    }
+}

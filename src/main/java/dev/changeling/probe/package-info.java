@@ -1,0 +1,2 @@
+/** The switch that schema-rewritten code calls, recording which mutation points were reached. JDK only. */
+package dev.changeling.probe;

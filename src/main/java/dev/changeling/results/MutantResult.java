@@ -1,0 +1,46 @@
+package dev.changeling.results;
+
+import java.util.List;
+
+/**
+ * One mutant and what became of it.
+ *
+ * @param id        the fingerprint, full length
+ * @param file      project-relative path
+ * @param order     how many points it has (1 for first-order)
+ * @param points    its changes, in file order
+ * @param verdict   what became of it
+ * @param killedBy  the test that failed, for killed mutants
+ * @param detail    the failure message, the reason it was skipped, or the compiler's error
+ * @param testsRun  the tests run against it, in the order they ran
+ * @param reachedBy every test that reaches its points in the baseline
+ * @param millis    the time spent running its tests
+ * @param diff      the unified diff of exactly what was run
+ */
+public record MutantResult(
+        String id,
+        String file,
+        int order,
+        List<PointRecord> points,
+        Verdict verdict,
+        String killedBy,
+        String detail,
+        List<String> testsRun,
+        List<String> reachedBy,
+        double millis,
+        String diff) {
+
+    public String shortId() {
+        return id.substring(0, Math.min(8, id.length()));
+    }
+
+    public PointRecord first() {
+        return points.get(0);
+    }
+
+    public MutantResult withVerdict(Verdict newVerdict, String newKilledBy, String newDetail,
+                                    List<String> newTestsRun, double newMillis) {
+        return new MutantResult(id, file, order, points, newVerdict, newKilledBy, newDetail, newTestsRun,
+                reachedBy, newMillis, diff);
+    }
+}

@@ -1,0 +1,30 @@
+package dev.changeling.results;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Everything one run found: the single source every view reads (summary, triage, exports,
+ * analysis). Documented field by field in {@code docs/results-format.md}.
+ *
+ * @param format    the version of this layout
+ * @param complete  false when the run was interrupted and only part of the mutants have verdicts
+ * @param settings  how the run was asked for
+ * @param tests     the unmutated suite, as run in the baseline
+ * @param timings   where the time went, in milliseconds by phase
+ * @param mutants   every mutant in scope, with its verdict
+ * @param problems  files skipped and other warnings, one line each
+ * @param sourceHashes SHA-256 of each mutated file's text when the run began, by path
+ */
+public record RunResults(
+        int format,
+        boolean complete,
+        RunSettings settings,
+        List<TestRecord> tests,
+        Map<String, Double> timings,
+        List<MutantResult> mutants,
+        List<String> problems,
+        Map<String, String> sourceHashes) {
+
+    public static final int FORMAT = 1;
+}

@@ -1,0 +1,32 @@
+package dev.changeling.results;
+
+import java.util.List;
+
+/**
+ * How a run was asked for, kept so that its figures can be read correctly later.
+ *
+ * @param project     the project directory, absolute
+ * @param operators   the operator ids used
+ * @param orders      the mutant orders generated (1 = first-order)
+ * @param scope       where the points of one k-order mutant come from
+ * @param seed        the seed of k-order combination and sampling
+ * @param sampled     whether the mutants are a sample of a larger population
+ * @param population  how many mutants there were before sampling
+ * @param changeScope the change the run was limited to, or null for the whole project
+ * @param workers     worker JVMs
+ * @param timeFactor  deadline factor over the baseline time of the tests run
+ * @param timeExtraMillis constant added to every deadline
+ */
+public record RunSettings(
+        String project,
+        List<String> operators,
+        List<Integer> orders,
+        String scope,
+        long seed,
+        boolean sampled,
+        int population,
+        String changeScope,
+        int workers,
+        double timeFactor,
+        long timeExtraMillis) {
+}

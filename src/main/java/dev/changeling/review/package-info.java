@@ -1,0 +1,2 @@
+/** Code review: scope to a change, triage decisions, the equivalents list and the attachments for the review. */
+package dev.changeling.review;

@@ -1,0 +1,59 @@
+package dev.changeling.source;
+
+import com.github.javaparser.JavaParser;
+import com.github.javaparser.ParseResult;
+import com.github.javaparser.ParserConfiguration;
+import com.github.javaparser.Problem;
+import com.github.javaparser.ast.CompilationUnit;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+
+/** Reads and parses Java files at language level 17 with the tab size fixed at 1 for offset arithmetic. */
+public final class JavaSources {
+
+    private JavaSources() {
+    }
+
+    /** The outcome of parsing one file: a tree or a problem, never both. */
+    public record Parsed(SourceFile file, CompilationUnit unit, ParseProblem problem) {
+        public boolean ok() {
+            return unit != null;
+        }
+    }
+
+    public static SourceFile read(Path projectRoot, Path file) throws IOException {
+        String text = Files.readString(file, StandardCharsets.UTF_8);
+        return SourceFile.of(projectRoot.relativize(file).toString(), text);
+    }
+
+    public static Parsed parse(SourceFile file) {
+        JavaParser parser = new JavaParser(configuration());
+        ParseResult<CompilationUnit> result = parser.parse(file.text());
+        Optional<CompilationUnit> unit = result.getResult();
+        if (result.isSuccessful() && unit.isPresent()) {
+            return new Parsed(file, unit.get(), null);
+        }
+        Problem first = result.getProblems().isEmpty() ? null : result.getProblems().get(0);
+        int line = first == null ? 1 : first.getLocation()
+                .flatMap(location -> location.getBegin().getRange())
+                .map(range -> range.begin.line)
+                .orElse(1);
+        String message = first == null ? "does not parse" : firstLine(first.getMessage());
+        return new Parsed(file, null, new ParseProblem(file.path(), line, message));
+    }
+
+    private static ParserConfiguration configuration() {
+        return new ParserConfiguration()
+                .setLanguageLevel(ParserConfiguration.LanguageLevel.JAVA_17)
+                .setTabSize(1)
+                .setAttributeComments(false);
+    }
+
+    private static String firstLine(String message) {
+        int newline = message.indexOf('\n');
+        return (newline < 0 ? message : message.substring(0, newline)).trim();
+    }
+}

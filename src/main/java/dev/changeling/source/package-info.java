@@ -1,0 +1,2 @@
+/** Java files as text and trees: parsing, spans, offsets and line numbers. */
+package dev.changeling.source;

@@ -1,0 +1,2 @@
+/** The terminal: colours, progress and diff rendering. */
+package dev.changeling.terminal;
