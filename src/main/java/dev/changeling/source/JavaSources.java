@@ -1,6 +1,7 @@
 package dev.changeling.source;
 
 import com.github.javaparser.JavaParser;
+import com.github.javaparser.JavaToken;
 import com.github.javaparser.ParseResult;
 import com.github.javaparser.ParserConfiguration;
 import com.github.javaparser.Problem;
@@ -37,12 +38,24 @@ public final class JavaSources {
             return new Parsed(file, unit.get(), null);
         }
         Problem first = result.getProblems().isEmpty() ? null : result.getProblems().get(0);
-        int line = first == null ? 1 : first.getLocation()
-                .flatMap(location -> location.getBegin().getRange())
-                .map(range -> range.begin.line)
-                .orElse(1);
-        String message = first == null ? "does not parse" : firstLine(first.getMessage());
+        int line = first == null ? 1 : first.getLocation().map(location -> offendingLine(location.getBegin())).orElse(1);
+        String message = first == null ? "does not parse" : shortened(first.getMessage());
         return new Parsed(file, null, new ParseProblem(file.path(), line, message));
+    }
+
+    /** The problem's range begins at the last good token; the offending one is the next real token. */
+    private static int offendingLine(JavaToken lastGood) {
+        JavaToken at = lastGood.getNextToken().orElse(lastGood);
+        while (at.getCategory().isWhitespaceOrComment() && at.getNextToken().isPresent()) {
+            at = at.getNextToken().get();
+        }
+        return at.getRange().map(range -> range.begin.line).orElse(1);
+    }
+
+    private static String shortened(String message) {
+        String line = firstLine(message);
+        int list = line.indexOf(", expected one of");
+        return list < 0 ? line : line.substring(0, list);
     }
 
     private static ParserConfiguration configuration() {
