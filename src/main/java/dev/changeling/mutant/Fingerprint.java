@@ -1,9 +1,6 @@
 package dev.changeling.mutant;
 
-import java.nio.charset.StandardCharsets;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
+import dev.changeling.source.SourceHash;
 import java.util.List;
 
 /**
@@ -37,11 +34,6 @@ public final class Fingerprint {
     }
 
     private static String sha256(String text) {
-        try {
-            byte[] digest = MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
-            return HexFormat.of().formatHex(digest);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is required by every Java runtime", e);
-        }
+        return SourceHash.sha256(text);
     }
 }

@@ -25,6 +25,13 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
     public record Chosen(List<Mutant> mutants, int population, boolean sampled, Generation.Generated generated) {
     }
 
+    /** The same selection, keeping only the points {@code filter} also keeps (e.g. those on changed lines). */
+    public Selection narrowedTo(java.util.function.Predicate<Point> filter) {
+        MutantRequest narrowed = new MutantRequest(request.operators(), request.orders(), request.scope(), request.seed(),
+                request.pointFilter().and(filter));
+        return new Selection(narrowed, sampleSize, margin, sampleSeed);
+    }
+
     public Chosen choose(ProjectLayout layout, List<Path> only) {
         Generation.Generated generated = Generation.generate(read(layout, only), request);
         List<Mutant> all = generated.mutants();

@@ -1,0 +1,22 @@
+package dev.changeling.source;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+
+/** SHA-256 of text as lower-case hex: identities of mutants and of the files they were made from. */
+public final class SourceHash {
+
+    private SourceHash() {
+    }
+
+    public static String sha256(String text) {
+        try {
+            byte[] digest = MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
+            return HexFormat.of().formatHex(digest);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required by every Java runtime", e);
+        }
+    }
+}
