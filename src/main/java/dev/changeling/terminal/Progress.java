@@ -29,9 +29,9 @@ public final class Progress {
         this.total = total;
     }
 
-    /** Progress for {@code total} mutants on the process's standard error. */
-    public static Progress onStandardError(int total) {
-        return new Progress(System.err, standardErrorIsTerminal(), total);
+    /** Progress for {@code total} mutants on the process's standard error; {@code plain} asks for lines, not a bar. */
+    public static Progress onStandardError(int total, boolean plain) {
+        return new Progress(System.err, !plain && standardErrorIsTerminal(), total);
     }
 
     /** One more mutant finished; {@code counts} says whether it counts in the score, {@code caught} whether it was detected. */
