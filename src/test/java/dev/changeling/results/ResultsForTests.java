@@ -1,8 +1,12 @@
 package dev.changeling.results;
 
+import dev.changeling.mutant.Generation;
+import dev.changeling.mutant.HigherOrder;
 import dev.changeling.mutant.Mutant;
+import dev.changeling.mutant.MutantRequest;
 import dev.changeling.mutant.MutantDiff;
 import dev.changeling.mutant.Point;
+import dev.changeling.operator.Operators;
 import dev.changeling.source.LineMap;
 import dev.changeling.source.SourceFile;
 import java.util.ArrayList;
@@ -41,6 +45,18 @@ public final class ResultsForTests {
         }
         return new MutantResult(mutant.fingerprint(), mutant.file(), mutant.order(), points, verdict, null, null,
                 List.of(), List.of(), 0.0, MutantDiff.unified(mutant, file.text()));
+    }
+
+    /** Every mutant the real generator makes of these files at these orders (default operators), all as survivors. */
+    public static List<MutantResult> survivorsOf(List<SourceFile> files, List<Integer> orders) {
+        MutantRequest request = new MutantRequest(Operators.defaults(), orders, HigherOrder.Scope.METHOD, 7L, point -> true);
+        Generation.Generated generated = Generation.generate(files, request);
+        if (!generated.problems().isEmpty()) {
+            throw new IllegalArgumentException("sample does not parse: " + generated.problems());
+        }
+        return generated.mutants().stream()
+                .map(mutant -> of(mutant, generated.files().get(mutant.file()), Verdict.SURVIVED))
+                .toList();
     }
 
     /** A complete run over these results. */
