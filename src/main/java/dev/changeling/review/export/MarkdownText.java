@@ -6,8 +6,12 @@ package dev.changeling.review.export;
  */
 final class MarkdownText {
 
-    /** Characters that can open inline markup (or GitHub's strikethrough, tables, math) mid-line. */
-    private static final String INLINE_MARKUP = "\\`*_[]<>!&~|$";
+    /**
+     * Characters that can open markup mid-line: code, emphasis, links and images, raw HTML and
+     * autolinks, entities, and GitHub's strikethrough, tables and math. Our text never starts a
+     * line, so block markup ({@code >}, {@code #}, list markers) needs no escape.
+     */
+    private static final String INLINE_MARKUP = "\\`*_[]<&~|$";
 
     private MarkdownText() {
     }
