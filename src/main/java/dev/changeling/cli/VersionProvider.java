@@ -7,7 +7,12 @@ final class VersionProvider implements CommandLine.IVersionProvider {
 
     @Override
     public String[] getVersion() {
+        return new String[] {"changeling " + number()};
+    }
+
+    /** The bare version, as tools that read our output want it. */
+    static String number() {
         String version = VersionProvider.class.getPackage().getImplementationVersion();
-        return new String[] {"changeling " + (version == null ? "development" : version)};
+        return version == null ? "development" : version;
     }
 }

@@ -1,0 +1,76 @@
+package dev.changeling.review.export;
+
+import dev.changeling.analysis.Interval;
+import dev.changeling.analysis.Tally;
+import dev.changeling.results.RunResults;
+import dev.changeling.results.Verdict;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The one-line summary of a run in plain text: score, interval for a sample, counts. Figures are
+ * rounded so they never flatter: the score and the interval's lower end down, its upper end up.
+ */
+public final class Summary {
+
+    private static final String DOT = " · ";
+
+    private Summary() {
+    }
+
+    /**
+     * @param overall    the figures of every mutant in view
+     * @param unresolved how many survivors are still to look at
+     */
+    public static String line(RunResults results, Tally overall, int unresolved) {
+        StringBuilder line = new StringBuilder("mutation score ");
+        if (overall.score().isPresent()) {
+            line.append(down(overall.score().getAsDouble()))
+                    .append(" (").append(overall.detected()).append(" of ").append(overall.denominator()).append(" detected");
+            if (sampled(results) && overall.interval95().isPresent()) {
+                Interval interval = overall.interval95().get();
+                line.append("; 95% interval ").append(down(interval.lower())).append('–').append(up(interval.upper()))
+                        .append(", a sample of ").append(results.mutants().size())
+                        .append(" from ").append(results.settings().population());
+            }
+            line.append(')');
+        } else {
+            line.append("n/a (no mutant counts)");
+        }
+        line.append(DOT).append(String.join(DOT, counts(overall)));
+        line.append(DOT).append(unresolved).append(unresolved == 1 ? " survivor" : " survivors").append(" to look at");
+        if (!results.complete()) {
+            line.append(DOT).append("partial run: it was interrupted");
+        }
+        return line.toString();
+    }
+
+    static boolean sampled(RunResults results) {
+        return results.settings() != null && results.settings().sampled();
+    }
+
+    private static List<String> counts(Tally overall) {
+        List<String> counts = new ArrayList<>();
+        counts.add(overall.all() + (overall.all() == 1 ? " mutant" : " mutants"));
+        for (Verdict verdict : Verdict.values()) {
+            int count = overall.count(verdict);
+            if (count > 0 || verdict == Verdict.KILLED || verdict == Verdict.SURVIVED) {
+                counts.add(verdict.word() + " " + count);
+            }
+        }
+        if (overall.equivalent() > 0) {
+            counts.add("equivalent " + overall.equivalent());
+        }
+        return counts;
+    }
+
+    private static String down(double value) {
+        return BigDecimal.valueOf(value).setScale(2, RoundingMode.FLOOR).toPlainString();
+    }
+
+    private static String up(double value) {
+        return BigDecimal.valueOf(value).setScale(2, RoundingMode.CEILING).toPlainString();
+    }
+}

@@ -1,0 +1,76 @@
+package dev.changeling.review.export;
+
+import static dev.changeling.results.ResultsForTests.result;
+import static dev.changeling.results.ResultsForTests.run;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.changeling.analysis.Score;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.Verdict;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+
+class SummaryTest {
+
+    private static List<MutantResult> detectedOf(int detected, int total) {
+        List<MutantResult> mutants = new ArrayList<>();
+        for (int i = 0; i < total; i++) {
+            mutants.add(result("m" + i, "A.java", "op", 1, i < detected ? Verdict.KILLED : Verdict.SURVIVED));
+        }
+        return mutants;
+    }
+
+    private static String line(List<MutantResult> mutants, boolean sampled, Set<String> equivalent) {
+        return Summary.line(run(mutants, sampled, 1000), Score.of(mutants, equivalent).overall(),
+                Survivors.unresolved(mutants, m -> equivalent.contains(m.id())).size());
+    }
+
+    @Nested
+    class Rounding {
+
+        @Test
+        void scoreRoundsDown_soOnlyAPerfectScoreShowsOne() {
+            assertTrue(line(detectedOf(999, 1000), false, Set.of()).startsWith("mutation score 0.99 (999 of 1000 detected)"));
+            assertTrue(line(detectedOf(2, 3), false, Set.of()).startsWith("mutation score 0.66 "));
+            assertTrue(line(detectedOf(4, 4), false, Set.of()).startsWith("mutation score 1.00 "));
+        }
+
+        @Test
+        void intervalRoundsOutward() {
+            // 15 of 20: Wilson 95% interval 0.5313 to 0.8881 (recomputed with the formula).
+            assertTrue(line(detectedOf(15, 20), true, Set.of()).contains("95% interval 0.53–0.89"));
+        }
+    }
+
+    @Nested
+    class Content {
+
+        @Test
+        void fullRun_hasNoInterval() {
+            assertFalse(line(detectedOf(15, 20), false, Set.of()).contains("interval"));
+        }
+
+        @Test
+        void countsEveryVerdictPresent_andTheEquivalents() {
+            List<MutantResult> mutants = new ArrayList<>(detectedOf(2, 4));
+            mutants.add(result("x", "A.java", "op", 1, Verdict.TIMED_OUT));
+            mutants.add(result("y", "A.java", "op", 1, Verdict.STILLBORN));
+
+            String line = line(mutants, false, Set.of("m3"));
+
+            assertEquals("mutation score 0.75 (3 of 4 detected) · 6 mutants · killed 2 · survived 2 · timed out 1"
+                    + " · stillborn 1 · equivalent 1 · 1 survivor to look at", line);
+        }
+
+        @Test
+        void noCountedMutant_saysSo() {
+            assertEquals("mutation score n/a (no mutant counts) · 0 mutants · killed 0 · survived 0 · 0 survivors to look at",
+                    line(List.of(), false, Set.of()));
+        }
+    }
+}
