@@ -36,4 +36,17 @@ final class ChangelingFolder {
         AtomicFiles.writeString(folder.resolve(".gitattributes"), EquivalentsList.FILE_NAME + " merge=union\n");
         return folder;
     }
+
+    /**
+     * Makes {@code local/}; where the folder was made by hand without a {@code .gitignore}, adds one
+     * first, so that machine-local state is not committed by accident.
+     */
+    static Path ensureLocal(Path projectRoot) throws IOException {
+        Path folder = ensure(projectRoot);
+        Path ignore = folder.resolve(".gitignore");
+        if (!Files.exists(ignore)) {
+            AtomicFiles.writeString(ignore, LOCAL + "/\n");
+        }
+        return Files.createDirectories(folder.resolve(LOCAL));
+    }
 }

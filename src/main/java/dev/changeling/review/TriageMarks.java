@@ -161,7 +161,7 @@ public final class TriageMarks {
             throw new IllegalStateException("the triage marks would not read back as written; nothing was written");
         }
         try {
-            ChangelingFolder.ensure(projectRoot);
+            ChangelingFolder.ensureLocal(projectRoot);
             AtomicFiles.write(file, out -> out.write(bytes));
         } catch (IOException e) {
             throw new UserError(shown() + ": cannot write (" + e.getMessage() + "); the marks on disk are unchanged");

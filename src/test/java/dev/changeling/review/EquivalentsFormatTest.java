@@ -46,6 +46,18 @@ class EquivalentsFormatTest {
         }
 
         @Test
+        void theExampleInTheFormatDocumentReadsAndWritesBackUnchanged() throws java.io.IOException {
+            String doc = java.nio.file.Files.readString(java.nio.file.Path.of("docs/equivalents-format.md"));
+            int start = doc.indexOf("```\n") + 4;
+            String example = doc.substring(start, doc.indexOf("```", start));
+            EquivalentsFormat.Parsed parsed = parse(example);
+
+            assertEquals(2, parsed.entries().size());
+            assertEquals(EquivalentsFormat.DEFAULT_HEADER, parsed.header());
+            assertEquals(example, EquivalentsFormat.render(parsed.header(), parsed.entries()));
+        }
+
+        @Test
         void keepsTheHeaderAsWritten() {
             EquivalentsFormat.Parsed parsed = parse("# ours\n# and a note of the team\n\n" + EXAMPLE + "\n");
 

@@ -17,21 +17,21 @@ import java.util.Map;
 import java.util.stream.Collectors;
 
 /** Mutants made by the real generator, and results files built from them, for tests of the review package. */
-final class RunFixtures {
+public final class RunFixtures {
 
     private RunFixtures() {
     }
 
-    static Generation.Generated generate(SourceFile... files) {
+    public static Generation.Generated generate(SourceFile... files) {
         return Generation.generate(List.of(files), MutantRequest.firstOrder(Operators.all()));
     }
 
     /** A complete, unsampled run over the whole project in which every mutant survived. */
-    static RunResults runOf(Generation.Generated generated) {
+    public static RunResults runOf(Generation.Generated generated) {
         return runOf(generated, settings(false, null));
     }
 
-    static RunResults runOf(Generation.Generated generated, RunSettings settings) {
+    public static RunResults runOf(Generation.Generated generated, RunSettings settings) {
         List<MutantResult> mutants = generated.mutants().stream()
                 .map(mutant -> result(mutant, generated.files().get(mutant.file()).text())).toList();
         Map<String, String> hashes = generated.files().keySet().stream()
@@ -39,12 +39,12 @@ final class RunFixtures {
         return new RunResults(RunResults.FORMAT, true, settings, List.of(), Map.of(), mutants, List.of(), hashes);
     }
 
-    static RunSettings settings(boolean sampled, String changeScope) {
+    public static RunSettings settings(boolean sampled, String changeScope) {
         return new RunSettings("/project", Operators.all().stream().map(MutationOperator::id).toList(), List.of(1),
                 "method", 1L, sampled, 0, changeScope, 1, 2.0, 1000L);
     }
 
-    static MutantResult result(Mutant mutant, String fileText) {
+    public static MutantResult result(Mutant mutant, String fileText) {
         List<PointRecord> points = mutant.points().stream().map(point -> record(point, fileText)).toList();
         return new MutantResult(mutant.fingerprint(), mutant.file(), mutant.order(), points, Verdict.SURVIVED, null, null,
                 List.of(), List.of(), 0.0, "");

@@ -91,6 +91,14 @@ class TriageMarksTest {
         }
     }
 
+    @Test
+    void handMadeFolderWithoutIgnoreFileGetsOneBeforeLocalStateIsWritten() throws IOException {
+        Files.createDirectories(root.resolve(".changeling"));
+        open().mark(FP_A, TriageMarks.Kind.FIXED, null);
+
+        assertEquals("local/\n", Files.readString(root.resolve(".changeling/.gitignore")));
+    }
+
     @Nested
     class Refusing {
 
