@@ -30,6 +30,9 @@ final class Git {
         }
     }
 
+    /** A pathspec: git's wildcards cross folder boundaries, so this is every Java file below the folder. */
+    private static final String JAVA_FILES = "*.java";
+
     private final Path folder;
 
     private Git(Path folder) {
@@ -78,17 +81,17 @@ final class Git {
 
     /**
      * The working tree against a commit or tree: only changed lines (no context), renames found,
-     * paths relative to the project folder and limited to it, whatever the user's git settings.
+     * Java files only, paths relative to the project folder and limited to it, whatever the user's git settings.
      */
     byte[] diffAgainst(String base) {
         return check(run("-c", "core.quotePath=true", "diff", "--no-color", "--no-ext-diff", "--no-textconv",
                 "--unified=0", "--find-renames", "--relative", "--src-prefix=a/", "--dst-prefix=b/",
-                base, "--"), "diff").out();
+                base, "--", JAVA_FILES), "diff").out();
     }
 
-    /** New files git does not track and does not ignore, relative to the project folder. */
+    /** New Java files git does not track and does not ignore, relative to the project folder. */
     List<String> untracked() {
-        byte[] out = check(run("ls-files", "--others", "--exclude-standard", "-z", "--", "."), "ls-files").out();
+        byte[] out = check(run("ls-files", "--others", "--exclude-standard", "-z", "--", JAVA_FILES), "ls-files").out();
         List<String> paths = new ArrayList<>();
         for (String path : new String(out, StandardCharsets.UTF_8).split("\0")) {
             if (!path.isEmpty()) {
