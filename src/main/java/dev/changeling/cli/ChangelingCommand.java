@@ -10,6 +10,7 @@ import picocli.CommandLine.Command;
         subcommands = {
             MutantsCommand.class,
             ExportCommand.class,
+            EquivalentsCommand.class,
         })
 final class ChangelingCommand {
 }

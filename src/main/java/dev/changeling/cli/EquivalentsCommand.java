@@ -1,0 +1,282 @@
+package dev.changeling.cli;
+
+import dev.changeling.ExitCode;
+import dev.changeling.UserError;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.ResultsFile;
+import dev.changeling.results.RunResults;
+import dev.changeling.results.Verdict;
+import dev.changeling.review.EquivalentEntry;
+import dev.changeling.review.EquivalentsList;
+import dev.changeling.review.Staleness;
+import java.io.Console;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** Shows and maintains the project's committed list of mutants judged equivalent. */
+@Command(name = "equivalents", mixinStandardHelpOptions = true,
+        description = {"The project's list of mutants judged equivalent (.changeling/equivalent-mutants.txt).",
+            "Without a subcommand, lists it for the current folder."},
+        subcommands = {
+            EquivalentsCommand.Show.class,
+            EquivalentsCommand.Stale.class,
+            EquivalentsCommand.Prune.class,
+            EquivalentsCommand.Add.class,
+            EquivalentsCommand.Drop.class,
+        })
+final class EquivalentsCommand implements Callable<Integer> {
+
+    private static final int MIN_ID_LENGTH = 4;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        return show(new ProjectOptions().layout().root(), spec.commandLine().getOut());
+    }
+
+    @Command(name = "show", mixinStandardHelpOptions = true, description = "List every entry with its change and reason.")
+    static final class Show implements Callable<Integer> {
+
+        @Mixin
+        ProjectOptions project = new ProjectOptions();
+
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            return show(project.layout().root(), spec.commandLine().getOut());
+        }
+    }
+
+    @Command(name = "stale", mixinStandardHelpOptions = true,
+            description = "List the entries whose mutant the last run no longer made: the code they judged has changed.")
+    static final class Stale implements Callable<Integer> {
+
+        @Mixin
+        ProjectOptions project = new ProjectOptions();
+
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            Path root = project.layout().root();
+            PrintWriter out = spec.commandLine().getOut();
+            EquivalentsList list = EquivalentsList.load(root);
+            Staleness staleness = list.stale(ResultsFile.read(ResultsFile.in(root)));
+            report(out, root, list, staleness);
+            if (!staleness.stale().isEmpty()) {
+                out.println("remove them with: changeling equivalents prune");
+            }
+            out.flush();
+            return ExitCode.OK;
+        }
+    }
+
+    @Command(name = "prune", mixinStandardHelpOptions = true,
+            description = "Show the stale entries, then remove them once confirmed.")
+    static final class Prune implements Callable<Integer> {
+
+        @Mixin
+        ProjectOptions project = new ProjectOptions();
+
+        @Option(names = "--yes", description = "Remove them without asking (for scripts and CI).")
+        boolean yes;
+
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            Path root = project.layout().root();
+            PrintWriter out = spec.commandLine().getOut();
+            EquivalentsList list = EquivalentsList.load(root);
+            Staleness staleness = list.stale(ResultsFile.read(ResultsFile.in(root)));
+            report(out, root, list, staleness);
+            List<EquivalentEntry> stale = staleness.stale();
+            if (stale.isEmpty()) {
+                out.flush();
+                return ExitCode.OK;
+            }
+            if (!yes && !confirmed(out, stale.size(), shown(root, list))) {
+                out.println("nothing removed");
+                out.flush();
+                return ExitCode.OK;
+            }
+            list.removeAll(stale.stream().map(EquivalentEntry::fingerprint).toList());
+            list.save();
+            out.println("removed " + count(stale.size(), "stale entry", "stale entries") + " from " + shown(root, list));
+            out.flush();
+            return ExitCode.OK;
+        }
+
+        private static boolean confirmed(PrintWriter out, int count, String file) {
+            out.flush();
+            Console console = System.console();
+            if (console == null) {
+                throw new UserError("not removing the " + count(count, "stale entry", "stale entries")
+                        + " above without a terminal to confirm; add --yes to remove them", ExitCode.NO_TERMINAL);
+            }
+            String answer = console.readLine("remove %s from %s? [y/N] ", count(count, "entry", "entries"), file);
+            return answer != null && List.of("y", "yes").contains(answer.strip().toLowerCase(Locale.ROOT));
+        }
+    }
+
+    @Command(name = "add", mixinStandardHelpOptions = true,
+            description = "List a mutant of the last run as equivalent, with the reason (replaces an earlier entry for it).")
+    static final class Add implements Callable<Integer> {
+
+        @Parameters(paramLabel = "ID", description = "The mutant's id from the last run (at least " + MIN_ID_LENGTH + " hex digits).")
+        String id;
+
+        @Option(names = "--reason", required = true, paramLabel = "TEXT", description = "Why the tests cannot tell it from the original.")
+        String reason;
+
+        @Option(names = "--project", paramLabel = "DIR", description = "The project folder (default: the current folder).")
+        Path projectFolder;
+
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            Path root = root(projectFolder);
+            RunResults run = ResultsFile.read(ResultsFile.in(root));
+            MutantResult mutant = single(id, run.mutants().stream().filter(m -> m.id().startsWith(lower(id))).toList(),
+                    MutantResult::id, "in the last run");
+            if (mutant.verdict() == Verdict.STILLBORN) {
+                throw new UserError("mutant " + mutant.shortId() + " does not compile, so it is not counted: there is nothing to list");
+            }
+            if (mutant.verdict().detected()) {
+                throw new UserError("mutant " + mutant.shortId() + " was " + mutant.verdict().word()
+                        + (mutant.killedBy() == null ? "" : " by " + mutant.killedBy())
+                        + ", so a test tells it from the original: it is not equivalent");
+            }
+            EquivalentsList list = EquivalentsList.load(root);
+            boolean replaced = list.put(EquivalentEntry.of(mutant, reason)).isPresent();
+            list.save();
+            PrintWriter out = spec.commandLine().getOut();
+            out.println((replaced ? "updated " : "listed ") + mutant.shortId() + " as equivalent in " + shown(root, list));
+            out.flush();
+            return ExitCode.OK;
+        }
+    }
+
+    @Command(name = "drop", mixinStandardHelpOptions = true, description = "Remove entries from the list by mutant id.")
+    static final class Drop implements Callable<Integer> {
+
+        @Parameters(arity = "1..*", paramLabel = "ID", description = "Ids of listed mutants (at least " + MIN_ID_LENGTH + " hex digits).")
+        List<String> ids = new ArrayList<>();
+
+        @Option(names = "--project", paramLabel = "DIR", description = "The project folder (default: the current folder).")
+        Path projectFolder;
+
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            Path root = root(projectFolder);
+            EquivalentsList list = EquivalentsList.load(root);
+            List<String> fingerprints = new ArrayList<>();
+            for (String id : ids) {
+                fingerprints.add(single(id, list.startingWith(lower(id)), EquivalentEntry::fingerprint, "in " + shown(root, list))
+                        .fingerprint());
+            }
+            list.removeAll(fingerprints);
+            list.save();
+            PrintWriter out = spec.commandLine().getOut();
+            out.println("removed " + count(fingerprints.size(), "entry", "entries") + " from " + shown(root, list));
+            out.flush();
+            return ExitCode.OK;
+        }
+    }
+
+    private static int show(Path root, PrintWriter out) {
+        EquivalentsList list = EquivalentsList.load(root);
+        List<EquivalentEntry> entries = list.entries();
+        entries.forEach(entry -> print(out, entry));
+        out.println(entries.isEmpty()
+                ? "no equivalent mutants listed in " + shown(root, list)
+                : count(entries.size(), "equivalent mutant", "equivalent mutants") + " in " + shown(root, list));
+        out.flush();
+        return ExitCode.OK;
+    }
+
+    private static void report(PrintWriter out, Path root, EquivalentsList list, Staleness staleness) {
+        List<EquivalentEntry> stale = staleness.stale();
+        if (stale.isEmpty()) {
+            out.println("no stale entries in " + shown(root, list));
+        } else {
+            out.println(count(stale.size(), "stale entry", "stale entries")
+                    + " (the last run no longer makes these mutants, or their file is gone):");
+            stale.forEach(entry -> print(out, entry));
+        }
+        if (!staleness.unchecked().isEmpty()) {
+            out.println(count(staleness.unchecked().size(), "entry", "entries")
+                    + " not checked: the last run did not cover their file, operator or order");
+        }
+    }
+
+    private static void print(PrintWriter out, EquivalentEntry entry) {
+        out.println("  " + entry.shortId() + "  " + entry.file() + "  " + entry.type() + "#" + entry.member()
+                + "  " + entry.operator());
+        out.println("            " + oneLine(entry.original()) + " → " + oneLine(entry.mutated()));
+        if (!entry.reason().isEmpty()) {
+            out.println("            why: " + oneLine(entry.reason()));
+        }
+    }
+
+    private static <T> T single(String id, List<T> matches, java.util.function.Function<T, String> fingerprint, String where) {
+        if (id.length() < MIN_ID_LENGTH || !id.matches("[0-9a-fA-F]+")) {
+            throw new UserError("'" + id + "' is not a mutant id; give at least " + MIN_ID_LENGTH + " of its hex digits");
+        }
+        if (matches.isEmpty()) {
+            throw new UserError("no mutant " + id + " " + where + "; copy the id from 'changeling equivalents' or the run's report");
+        }
+        if (matches.size() > 1) {
+            throw new UserError("id " + id + " fits " + matches.size() + " mutants ("
+                    + matches.stream().map(m -> fingerprint.apply(m).substring(0, 12)).collect(Collectors.joining(", "))
+                    + "); give more digits");
+        }
+        return matches.get(0);
+    }
+
+    private static Path root(Path projectFolder) {
+        ProjectOptions options = new ProjectOptions();
+        if (projectFolder != null) {
+            options.paths = List.of(projectFolder);
+        }
+        return options.layout().root();
+    }
+
+    private static String shown(Path root, EquivalentsList list) {
+        return root.relativize(list.file()).toString().replace('\\', '/');
+    }
+
+    private static String oneLine(String text) {
+        return text.replace("\n", "\\n").replace("\r", "\\r");
+    }
+
+    private static String lower(String id) {
+        return id.toLowerCase(Locale.ROOT);
+    }
+
+    private static String count(int n, String one, String many) {
+        return n + " " + (n == 1 ? one : many);
+    }
+}
