@@ -10,6 +10,7 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Supplier;
 import java.util.stream.Collectors;
 
 /**
@@ -20,10 +21,11 @@ final class CachedMavenResolver implements ArtifactResolver {
 
     static final String DEPENDENCY_PLUGIN = "org.apache.maven.plugins:maven-dependency-plugin:3.8.1";
 
-    private final Maven maven;
+    private final Supplier<Maven> maven;
     private final Path cache;
 
-    CachedMavenResolver(Maven maven, Path cache) {
+    /** The mvn is asked for only when the cache cannot answer. */
+    CachedMavenResolver(Supplier<Maven> maven, Path cache) {
         this.maven = maven;
         this.cache = cache;
     }
@@ -44,7 +46,7 @@ final class CachedMavenResolver implements ArtifactResolver {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        Maven.Run run = maven.run(folder, List.of("-f", pom.toString(),
+        Maven.Run run = maven.get().run(folder, List.of("-f", pom.toString(),
                 DEPENDENCY_PLUGIN + ":build-classpath", "-Dmdep.outputFile=" + answer), folder.resolve("maven.log"));
         if (!run.succeeded() || !Files.isRegularFile(answer)) {
             throw run.failure("mvn could not resolve " + String.join(", ", coordinates) + " from Maven Central");

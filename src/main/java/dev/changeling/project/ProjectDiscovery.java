@@ -67,8 +67,7 @@ public final class ProjectDiscovery {
         testClasspath.add(testClasses);
         testClasspath.add(classes);
         testClasspath.addAll(dependencies);
-        ArtifactResolver resolver = coordinates ->
-                new CachedMavenResolver(maven.get(), layout.changelingDirectory().resolve("launcher")).resolve(coordinates);
+        ArtifactResolver resolver = new CachedMavenResolver(maven::get, layout.changelingDirectory().resolve("launcher"));
         JUnitAlignment.Aligned aligned = JUnitAlignment.align(testClasspath, resolver, layout.root());
         return new DiscoveredProject(layout, classes, List.of(testClasses), compileClasspath, aligned.classpath(),
                 ClassNames.below(classes), maven.time(), aligned.platformVersion(), aligned.description());

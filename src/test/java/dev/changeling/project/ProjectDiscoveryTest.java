@@ -111,12 +111,12 @@ class ProjectDiscoveryTest {
 
         @Test
         void theNextRun_takesTheLauncherFromTheCache_withoutMvn() {
-            Path compileOnlyMaven = failingMaven(folder);
+            Path mustNotRun = failingMaven(folder);
             ExplicitProject sameProject = new ExplicitProject(List.of(root.resolve("src/main/java")), List.of(),
                     root.resolve("target/classes"), root.resolve("target/test-classes"), project.compileClasspath().subList(1, project.compileClasspath().size()));
 
             DiscoveredProject again = ProjectDiscovery.discover(root,
-                    DiscoveryOptions.defaults().withMavenExecutable(compileOnlyMaven).withExplicitProject(sameProject));
+                    DiscoveryOptions.defaults().withMavenExecutable(mustNotRun).withExplicitProject(sameProject));
 
             assertEquals(project.testClasspath(), again.testClasspath());
             assertEquals(Duration.ZERO, again.mavenTime());
