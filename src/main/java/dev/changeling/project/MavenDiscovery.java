@@ -1,0 +1,105 @@
+package dev.changeling.project;
+
+import dev.changeling.AtomicFiles;
+import dev.changeling.UserError;
+import java.io.File;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.stream.Stream;
+
+/** Compiles a Maven module's main and test code and writes its test classpath, in one mvn call. */
+final class MavenDiscovery {
+
+    /** Words in Maven's log that mean a dependency could not be had, such as a sibling module never installed. */
+    private static final List<String> UNRESOLVED = List.of("Could not resolve dependencies", "Could not find artifact",
+            "Failed to collect dependencies", "Failed to read artifact descriptor", "Non-resolvable parent POM");
+
+    /** What the mvn call left behind, before the JUnit launcher is aligned. */
+    record Compiled(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies) {
+    }
+
+    private MavenDiscovery() {
+    }
+
+    /**
+     * Runs {@code mvn test-compile dependency:build-classpath} in the module; when the module needs siblings
+     * that are not installed, runs it again from the outermost aggregator with {@code -pl module -am}, and
+     * remembers that for the next run.
+     */
+    static Compiled compile(Path given, Path module, Maven maven) {
+        PomFile pom = PomFile.read(module.resolve("pom.xml"));
+        if (pom.isAggregator()) {
+            String first = given.resolve(pom.modules().get(0)).toString().replace('\\', '/');
+            throw new UserError(given + ": this pom.xml only groups the modules " + String.join(", ", pom.modules())
+                    + "; give one module folder, e.g. `changeling run " + first + "`");
+        }
+        PomFile.BuildFolders folders = pom.folders();
+        Path work = folders.directory().resolve("changeling");
+        Path classpathFile = work.resolve("classpath.txt");
+        Path log = work.resolve("maven.log");
+        Path reactorMarker = work.resolve("maven-reactor.txt");
+        try {
+            Files.createDirectories(work);
+            Files.deleteIfExists(classpathFile);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        List<String> build = List.of("test-compile", CachedMavenResolver.DEPENDENCY_PLUGIN + ":build-classpath",
+                "-Dmdep.outputFile=" + classpathFile, "-Dmdep.includeScope=test");
+        Optional<Reactor> reactor = Reactor.around(module);
+        Maven.Run run;
+        if (reactor.isPresent() && Files.isRegularFile(reactorMarker)) {
+            run = inReactor(reactor.get(), build, log, maven);
+        } else {
+            run = maven.run(module, build, log);
+            if (!run.succeeded() && reactor.isPresent() && UNRESOLVED.stream().anyMatch(run::logMentions)) {
+                run = inReactor(reactor.get(), build, log, maven);
+                if (run.succeeded()) {
+                    remember(reactorMarker, reactor.get());
+                }
+            }
+        }
+        if (!run.succeeded()) {
+            throw run.failure("mvn could not compile " + module);
+        }
+        if (!Files.isRegularFile(classpathFile)) {
+            throw run.failure("mvn finished but wrote no test classpath to " + classpathFile);
+        }
+        if (!Files.isDirectory(folders.testClasses())) {
+            throw new UserError(module + ": mvn compiled no tests (there is no " + folders.testClasses()
+                    + "); changeling needs the project's own tests, in " + folders.testSources());
+        }
+        ProjectLayout layout = new ProjectLayout(module, List.of(folders.sources()), List.of(folders.testSources()), folders.directory());
+        return new Compiled(layout, folders.classes(), folders.testClasses(), read(classpathFile));
+    }
+
+    private static Maven.Run inReactor(Reactor reactor, List<String> build, Path log, Maven maven) {
+        List<String> arguments = new ArrayList<>(List.of("-pl", reactor.modulePath(), "-am"));
+        arguments.addAll(build);
+        return maven.run(reactor.root(), arguments, log);
+    }
+
+    private static void remember(Path marker, Reactor reactor) {
+        try {
+            AtomicFiles.writeString(marker, "This module is built from " + reactor.root() + " with -pl " + reactor.modulePath()
+                    + " -am, because it needs sibling modules that are not installed. Delete this file to try the module alone.\n");
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private static List<Path> read(Path classpathFile) {
+        try {
+            String text = Files.readString(classpathFile, StandardCharsets.UTF_8).strip();
+            return text.isEmpty() ? List.of() : Stream.of(text.split(File.pathSeparator)).map(Path::of).toList();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

@@ -1,0 +1,155 @@
+package dev.changeling.project;
+
+import dev.changeling.UserError;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javax.xml.XMLConstants;
+import javax.xml.parsers.DocumentBuilder;
+import javax.xml.parsers.DocumentBuilderFactory;
+import javax.xml.parsers.ParserConfigurationException;
+import org.w3c.dom.Element;
+import org.w3c.dom.Node;
+import org.xml.sax.ErrorHandler;
+import org.xml.sax.SAXException;
+import org.xml.sax.SAXParseException;
+
+/**
+ * What the tool needs to know of one pom.xml before running mvn: its packaging, its modules and its
+ * build folders. Only the file itself is read; values inherited from a parent fall back to Maven's defaults.
+ */
+record PomFile(Path file, String packaging, List<String> modules, Map<String, String> build, Map<String, String> properties) {
+
+    private static final Pattern EXPRESSION = Pattern.compile("\\$\\{([^}]+)}");
+
+    /** The folders a Maven build reads and writes, as absolute paths. */
+    record BuildFolders(Path directory, Path classes, Path testClasses, Path sources, Path testSources) {
+    }
+
+    static PomFile read(Path file) {
+        Element project;
+        try {
+            project = parser().parse(file.toFile()).getDocumentElement();
+        } catch (SAXException | IOException e) {
+            throw new UserError(file + ": not a readable pom.xml (" + e.getMessage() + "); fix the file or give another folder");
+        }
+        Map<String, String> build = new LinkedHashMap<>();
+        child(project, "build").ifPresent(element -> children(element).forEach(setting -> build.put(setting.getTagName(), text(setting))));
+        Map<String, String> properties = new LinkedHashMap<>();
+        child(project, "properties").ifPresent(element -> children(element).forEach(property -> properties.put(property.getTagName(), text(property))));
+        List<String> modules = child(project, "modules")
+                .map(element -> children(element).stream().filter(module -> module.getTagName().equals("module")).map(PomFile::text).toList())
+                .orElse(List.of());
+        String packaging = child(project, "packaging").map(PomFile::text).orElse("jar");
+        return new PomFile(file, packaging, modules, build, properties);
+    }
+
+    /** A pom that only lists modules and has no code of its own. */
+    boolean isAggregator() {
+        return packaging.equals("pom") && !modules.isEmpty();
+    }
+
+    /** The folders of the modules this pom lists, normalised. */
+    List<Path> moduleFolders() {
+        Path base = file.toAbsolutePath().getParent();
+        return modules.stream().map(module -> {
+            Path resolved = base.resolve(module).normalize();
+            return resolved.toString().endsWith(".xml") ? resolved.getParent() : resolved;
+        }).toList();
+    }
+
+    BuildFolders folders() {
+        Path base = file.toAbsolutePath().normalize().getParent();
+        Map<String, String> known = new LinkedHashMap<>(properties);
+        known.put("basedir", base.toString());
+        known.put("project.basedir", base.toString());
+        Path directory = folder(base, "directory", "target", known);
+        known.put("project.build.directory", directory.toString());
+        return new BuildFolders(directory,
+                folder(base, "outputDirectory", directory.resolve("classes").toString(), known),
+                folder(base, "testOutputDirectory", directory.resolve("test-classes").toString(), known),
+                folder(base, "sourceDirectory", "src/main/java", known),
+                folder(base, "testSourceDirectory", "src/test/java", known));
+    }
+
+    private Path folder(Path base, String setting, String standard, Map<String, String> known) {
+        String value = build.get(setting);
+        String resolved = value == null ? null : interpolated(value, known);
+        return base.resolve(resolved == null ? standard : resolved).normalize();
+    }
+
+    /** The value with every ${name} filled in, or null when one cannot be (it is inherited or computed). */
+    private static String interpolated(String value, Map<String, String> known) {
+        String current = value;
+        for (int round = 0; round < 10 && current.contains("${"); round++) {
+            Matcher matcher = EXPRESSION.matcher(current);
+            StringBuilder filled = new StringBuilder();
+            while (matcher.find()) {
+                String replacement = known.get(matcher.group(1));
+                if (replacement == null) {
+                    return null;
+                }
+                matcher.appendReplacement(filled, Matcher.quoteReplacement(replacement));
+            }
+            matcher.appendTail(filled);
+            current = filled.toString();
+        }
+        return current.contains("${") ? null : current;
+    }
+
+    private static DocumentBuilder parser() {
+        try {
+            DocumentBuilderFactory factory = DocumentBuilderFactory.newInstance();
+            factory.setFeature(XMLConstants.FEATURE_SECURE_PROCESSING, true);
+            factory.setFeature("http://apache.org/xml/features/disallow-doctype-decl", true);
+            factory.setExpandEntityReferences(false);
+            DocumentBuilder builder = factory.newDocumentBuilder();
+            builder.setErrorHandler(new QuietErrors());
+            return builder;
+        } catch (ParserConfigurationException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** Lets a parse error become the exception the caller reports, instead of also being printed to stderr. */
+    private static final class QuietErrors implements ErrorHandler {
+
+        @Override
+        public void warning(SAXParseException exception) {
+        }
+
+        @Override
+        public void error(SAXParseException exception) throws SAXParseException {
+            throw exception;
+        }
+
+        @Override
+        public void fatalError(SAXParseException exception) throws SAXParseException {
+            throw exception;
+        }
+    }
+
+    private static Optional<Element> child(Element parent, String name) {
+        return children(parent).stream().filter(element -> element.getTagName().equals(name)).findFirst();
+    }
+
+    private static List<Element> children(Element parent) {
+        List<Element> elements = new ArrayList<>();
+        for (Node node = parent.getFirstChild(); node != null; node = node.getNextSibling()) {
+            if (node instanceof Element element) {
+                elements.add(element);
+            }
+        }
+        return elements;
+    }
+
+    private static String text(Element element) {
+        return element.getTextContent().strip();
+    }
+}

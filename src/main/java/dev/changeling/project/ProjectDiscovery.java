@@ -1,0 +1,109 @@
+package dev.changeling.project;
+
+import dev.changeling.UserError;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Finds what a run needs to know of a project: it compiles a Maven project through the real mvn (one call)
+ * or takes the folders given by hand, and makes the test classpath ready for JUnit workers.
+ */
+public final class ProjectDiscovery {
+
+    private ProjectDiscovery() {
+    }
+
+    /**
+     * Discovers the project in a folder.
+     *
+     * @throws UserError when the folder is no project, the build fails (the message names mvn's log and the
+     *                   command to run it again), or the tests cannot be run on the JUnit Platform
+     */
+    public static DiscoveredProject discover(Path folder, DiscoveryOptions options) {
+        Path root = folder.toAbsolutePath().normalize();
+        if (!Files.isDirectory(root)) {
+            throw new UserError(folder + ": no such folder; give the project folder (the one with pom.xml)");
+        }
+        LazyMaven maven = new LazyMaven(options);
+        if (options.explicitProject().isPresent()) {
+            return explicit(root, options.explicitProject().get(), maven);
+        }
+        if (!Files.isRegularFile(root.resolve("pom.xml"))) {
+            throw new UserError(folder + ": no pom.xml here; give a Maven project folder, or name the source folders,"
+                    + " classes, test classes and classpath by hand");
+        }
+        MavenDiscovery.Compiled compiled = MavenDiscovery.compile(folder, root, maven.get());
+        List<Path> compileClasspath = new ArrayList<>();
+        compileClasspath.add(compiled.classes());
+        compileClasspath.addAll(compiled.dependencies());
+        return finish(compiled.layout(), compiled.classes(), compiled.testClasses(), compiled.dependencies(), compileClasspath, maven);
+    }
+
+    private static DiscoveredProject explicit(Path root, ExplicitProject given, LazyMaven maven) {
+        given.sourceRoots().forEach(path -> mustExist(path, "source folder", true));
+        given.testSourceRoots().forEach(path -> mustExist(path, "test source folder", true));
+        Path classes = mustExist(given.classesDirectory(), "classes folder", true);
+        Path testClasses = mustExist(given.testClassesDirectory(), "test classes folder", true);
+        List<Path> dependencies = new ArrayList<>();
+        for (Path entry : given.classpath()) {
+            Path absolute = mustExist(entry, "classpath entry", false);
+            if (!absolute.equals(classes) && !absolute.equals(testClasses) && !dependencies.contains(absolute)) {
+                dependencies.add(absolute);
+            }
+        }
+        ProjectLayout layout = new ProjectLayout(root, absolute(given.sourceRoots()), absolute(given.testSourceRoots()), root.resolve("target"));
+        List<Path> compileClasspath = new ArrayList<>();
+        compileClasspath.add(classes);
+        compileClasspath.addAll(dependencies);
+        return finish(layout, classes, testClasses, dependencies, compileClasspath, maven);
+    }
+
+    private static DiscoveredProject finish(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies,
+                                            List<Path> compileClasspath, LazyMaven maven) {
+        List<Path> testClasspath = new ArrayList<>();
+        testClasspath.add(testClasses);
+        testClasspath.add(classes);
+        testClasspath.addAll(dependencies);
+        ArtifactResolver resolver = new CachedMavenResolver(maven::get, layout.changelingDirectory().resolve("launcher"));
+        JUnitAlignment.Aligned aligned = JUnitAlignment.align(testClasspath, resolver, layout.root());
+        return new DiscoveredProject(layout, classes, List.of(testClasses), compileClasspath, aligned.classpath(),
+                ClassNames.below(classes), maven.time(), aligned.platformVersion(), aligned.description());
+    }
+
+    private static Path mustExist(Path given, String what, boolean folder) {
+        Path absolute = given.toAbsolutePath().normalize();
+        if (folder ? !Files.isDirectory(absolute) : !Files.exists(absolute)) {
+            throw new UserError(given + ": no such " + (folder ? "folder" : "file or folder") + " (given as " + what + "); check the path");
+        }
+        return absolute;
+    }
+
+    private static List<Path> absolute(List<Path> paths) {
+        return paths.stream().map(path -> path.toAbsolutePath().normalize()).toList();
+    }
+
+    /** Finds mvn only when something needs it, so a project given by hand with a launcher never looks for one. */
+    private static final class LazyMaven {
+
+        private final DiscoveryOptions options;
+        private Maven maven;
+
+        LazyMaven(DiscoveryOptions options) {
+            this.options = options;
+        }
+
+        Maven get() {
+            if (maven == null) {
+                maven = new Maven(MavenExecutable.find(options.mavenExecutable(), System.getenv()), options.mavenArguments());
+            }
+            return maven;
+        }
+
+        Duration time() {
+            return maven == null ? Duration.ZERO : maven.totalTime();
+        }
+    }
+}
