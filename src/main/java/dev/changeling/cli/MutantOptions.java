@@ -43,7 +43,7 @@ final class MutantOptions {
     Integer sample;
 
     @Option(names = "--sample-for-margin", paramLabel = "E",
-            description = "Pick as many mutants as give a score within ±E at 95% (Cochran), e.g. 0.05.")
+            description = "Pick as many mutants as give a score within ±E at 95%% (Cochran), e.g. 0.05.")
     Double margin;
 
     Selection selection(Predicate<Point> extraFilter) {
