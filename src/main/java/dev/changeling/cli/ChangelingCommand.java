@@ -11,6 +11,7 @@ import picocli.CommandLine.Command;
             MutantsCommand.class,
             ExportCommand.class,
             EquivalentsCommand.class,
+            TriageCommand.class,
         })
 final class ChangelingCommand {
 }

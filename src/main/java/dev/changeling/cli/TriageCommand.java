@@ -1,0 +1,122 @@
+package dev.changeling.cli;
+
+import dev.changeling.ExitCode;
+import dev.changeling.UserError;
+import dev.changeling.project.ProjectLayout;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.ResultsFile;
+import dev.changeling.results.RunResults;
+import dev.changeling.review.triage.Answers;
+import dev.changeling.review.triage.MutantRerun;
+import dev.changeling.review.triage.Triage;
+import dev.changeling.terminal.Style;
+import java.io.Console;
+import java.io.InputStreamReader;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** Walks the unresolved survivors of the last run one at a time and records a decision for each. */
+@Command(name = "triage", mixinStandardHelpOptions = true,
+        description = {
+            "Go through the unresolved survivors of the last run (" + ResultsFile.RELATIVE_PATH + ") one at a time:"
+                    + " see the change and the tests that missed it, then decide. Answer with a letter and Enter"
+                    + " (? lists them): e equivalent, t needs a test, f fixed (runs it again first), s skip, b back,"
+                    + " c more context, q quit.",
+            "Every decision is saved the moment it is made; the next triage starts at the first survivor without one."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {
+            "0:Done, quit, or nothing to triage.",
+            "1:A mistake to fix: no results yet, an unreadable equivalents list or triage file.",
+            "2:The command line is wrong.",
+            "6:No terminal to ask in, and --scripted was not given.",
+            "130:Stopped by Ctrl-C; every decision made so far is saved."},
+        footerHeading = "%nSee also:%n",
+        footer = "  docs/triage.md for the keys and the flow")
+final class TriageCommand implements Callable<Integer> {
+
+    @Mixin
+    ProjectOptions project = new ProjectOptions();
+
+    @Option(names = "--scripted",
+            description = "Read the answers line by line from standard input instead of a terminal (for scripts and tests);"
+                    + " the end of the input stops like q.")
+    boolean scripted;
+
+    @Option(names = "--revisit",
+            description = "Start at the first unresolved survivor and stop at every one, including those already marked needs a test.")
+    boolean revisit;
+
+    @Option(names = "--plain", description = "No colours, even on a terminal.")
+    boolean plain;
+
+    @Spec
+    CommandSpec spec;
+
+    /**
+     * WIRING POINT: the one place where triage gets the engine, to run a mutant again when the developer
+     * says it is fixed. Until the engine is wired here, answering f says so and records nothing.
+     */
+    static MutantRerun rerun(ProjectLayout layout, RunResults results) {
+        return mutant -> {
+            throw new UserError("running a mutant again is not available yet in this build"
+                    + " (mark it t, needs a test, until it is)");
+        };
+    }
+
+    @Override
+    public Integer call() {
+        Console console = System.console();
+        if (console == null && !scripted) {
+            throw new UserError("triage asks questions but standard input or output is not a terminal;"
+                    + " run it in a terminal, or give --scripted to read the answers line by line from standard input",
+                    ExitCode.NO_TERMINAL);
+        }
+        ProjectLayout layout = project.layout();
+        RunResults results = limited(ResultsFile.read(ResultsFile.in(layout.root())), layout, project.limits(layout));
+        PrintWriter out = spec.commandLine().getOut();
+        Answers answers = scripted
+                ? Answers.fromLines(new InputStreamReader(System.in, StandardCharsets.UTF_8), out)
+                : Answers.fromConsole(console, out);
+        Style style = plain ? Style.plain() : Style.forStandardOutput();
+        Thread onCtrlC = scripted ? null : new Thread(() -> {
+            System.err.println();
+            System.err.println("changeling: stopped; every decision made so far is saved");
+        });
+        if (onCtrlC != null) {
+            Runtime.getRuntime().addShutdownHook(onCtrlC);
+        }
+        try {
+            Triage.run(new Triage.Setup(layout.root(), results, revisit, style), answers, out, rerun(layout, results));
+        } finally {
+            if (onCtrlC != null) {
+                try {
+                    Runtime.getRuntime().removeShutdownHook(onCtrlC);
+                } catch (IllegalStateException shuttingDown) {
+                    // Ctrl-C arrived meanwhile: the hook is running and says what happened.
+                }
+            }
+        }
+        out.flush();
+        return ExitCode.OK;
+    }
+
+    /** Only the mutants in the files and folders named, when any are. */
+    private static RunResults limited(RunResults results, ProjectLayout layout, List<Path> limits) {
+        if (limits.isEmpty()) {
+            return results;
+        }
+        List<MutantResult> inside = results.mutants().stream()
+                .filter(mutant -> limits.stream().anyMatch(limit -> layout.root().resolve(mutant.file()).normalize().startsWith(limit)))
+                .toList();
+        return new RunResults(results.format(), results.complete(), results.settings(), results.tests(), results.timings(),
+                inside, results.problems(), results.sourceHashes());
+    }
+}

@@ -1,0 +1,83 @@
+package dev.changeling.review.triage;
+
+import dev.changeling.terminal.Style;
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.stream.Collectors;
+
+/** The answers triage takes: one letter each, then Enter; its label for the prompt and its line for the help screen. */
+enum Choice {
+    EQUIVALENT('e', "equivalent",
+            "No test could tell it from the original. Asks why (required); or give the reason after the letter:"
+                    + " e <reason>. Goes into the committed list .changeling/equivalent-mutants.txt."),
+    NEEDS_TEST('t', "needs a test",
+            "A test should notice it; one is still to be written. An optional note may follow: t <note>."
+                    + " Kept on this machine in .changeling/local/triage.json."),
+    FIXED('f', "fixed",
+            "Runs this mutant again now, against the code and tests as they are. Recorded as fixed only when a test"
+                    + " now detects it; if it still survives, nothing is recorded."),
+    SKIP('s', "skip", "Leave it without a decision for now and go on; the next triage starts at it again."),
+    BACK('b', "back", "Go back to the previous survivor (its decision so far is shown; a new one replaces it)."),
+    CONTEXT('c', "context",
+            "More lines around the change, from the file as it is now (wider each time); says so when the file"
+                    + " has changed since the run."),
+    QUIT('q', "quit", "Stop. Every decision is already saved; the next triage starts at the first survivor without one."),
+    HELP('?', "help", "This list.");
+
+    /** An answer read: the choice and any text after its letter. */
+    record Answer(Choice choice, String text) {
+    }
+
+    private final char key;
+    private final String label;
+    private final String help;
+
+    Choice(char key, String label, String help) {
+        this.key = key;
+        this.label = label;
+        this.help = help;
+    }
+
+    char key() {
+        return key;
+    }
+
+    String label() {
+        return label;
+    }
+
+    String help() {
+        return help;
+    }
+
+    /** The line the developer typed as a choice, or empty when it is none. */
+    static Optional<Answer> parse(String line) {
+        String trimmed = line.strip();
+        if (trimmed.isEmpty() || (trimmed.length() > 1 && !Character.isWhitespace(trimmed.charAt(1)))) {
+            return Optional.empty();
+        }
+        char typed = trimmed.toLowerCase(Locale.ROOT).charAt(0);
+        return Arrays.stream(values())
+                .filter(choice -> choice.key == typed)
+                .findFirst()
+                .map(choice -> new Answer(choice, trimmed.substring(1).strip()));
+    }
+
+    /** Every choice with what it does, for {@code ?}. */
+    static String helpScreen(Style style) {
+        StringBuilder screen = new StringBuilder("Answer with one letter, then Enter:\n");
+        for (Choice choice : values()) {
+            screen.append("  ").append(style.bold(String.valueOf(choice.key))).append("  ")
+                    .append(choice.label).append(": ").append(choice.help).append('\n');
+        }
+        return screen.append("Only survived mutants that are not listed as equivalent or marked fixed are shown.")
+                .append(" Every decision is written the moment it is made, so quitting or Ctrl-C loses none.\n")
+                .toString();
+    }
+
+    /** The choices as the prompt lists them. */
+    static String menu() {
+        return Arrays.stream(values()).map(choice -> choice.key + " " + choice.label).collect(Collectors.joining("  "));
+    }
+}

@@ -1,0 +1,77 @@
+package dev.changeling.review.triage;
+
+import dev.changeling.results.MutantResult;
+import dev.changeling.review.EquivalentEntry;
+import dev.changeling.review.EquivalentsList;
+import dev.changeling.review.TriageMarks;
+import java.nio.file.Path;
+import java.util.Optional;
+
+/**
+ * The decisions of a project: equivalents in the committed list, the rest in the local marks. Each
+ * change reads the file afresh and writes it at once, so a long session does not write over edits
+ * made meanwhile, and one decision per survivor holds (a new one replaces the old wherever it was).
+ */
+final class Decisions {
+
+    private final Path projectRoot;
+    private EquivalentsList equivalents;
+    private TriageMarks marks;
+
+    private Decisions(Path projectRoot, EquivalentsList equivalents, TriageMarks marks) {
+        this.projectRoot = projectRoot;
+        this.equivalents = equivalents;
+        this.marks = marks;
+    }
+
+    static Decisions load(Path projectRoot) {
+        return new Decisions(projectRoot, EquivalentsList.load(projectRoot), TriageMarks.open(projectRoot));
+    }
+
+    Optional<Decision> of(MutantResult mutant) {
+        Optional<EquivalentEntry> entry = equivalents.find(mutant.id());
+        if (entry.isPresent()) {
+            return Optional.of(new Decision(Decision.Kind.EQUIVALENT, entry.get().reason()));
+        }
+        return marks.get(mutant.id()).map(mark -> new Decision(
+                mark.kind() == TriageMarks.Kind.FIXED ? Decision.Kind.FIXED : Decision.Kind.NEEDS_TEST, mark.note()));
+    }
+
+    boolean decided(MutantResult mutant) {
+        return of(mutant).isPresent();
+    }
+
+    /** Whether triage has settled it: listed as equivalent or marked fixed. */
+    boolean resolved(MutantResult mutant) {
+        return of(mutant).map(decision -> decision.kind().resolves()).orElse(false);
+    }
+
+    void equivalent(MutantResult mutant, String reason) {
+        EquivalentsList list = EquivalentsList.load(projectRoot);
+        list.put(EquivalentEntry.of(mutant, reason));
+        list.save();
+        equivalents = list;
+        TriageMarks fresh = TriageMarks.open(projectRoot);
+        fresh.clear(mutant.id());
+        marks = fresh;
+    }
+
+    void needsTest(MutantResult mutant, String note) {
+        mark(mutant, TriageMarks.Kind.NEEDS_TEST, note);
+    }
+
+    void fixed(MutantResult mutant, String note) {
+        mark(mutant, TriageMarks.Kind.FIXED, note);
+    }
+
+    private void mark(MutantResult mutant, TriageMarks.Kind kind, String note) {
+        TriageMarks fresh = TriageMarks.open(projectRoot);
+        fresh.mark(mutant.id(), kind, note);
+        marks = fresh;
+        EquivalentsList list = EquivalentsList.load(projectRoot);
+        if (list.remove(mutant.id()).isPresent()) {
+            list.save();
+        }
+        equivalents = list;
+    }
+}

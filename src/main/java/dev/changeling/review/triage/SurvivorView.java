@@ -1,0 +1,59 @@
+package dev.changeling.review.triage;
+
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.PointRecord;
+import dev.changeling.terminal.DiffPrinter;
+import dev.changeling.terminal.Style;
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Optional;
+import java.util.stream.Collectors;
+
+/** Shows one survivor: where and what the change is, its diff, and the tests that ran past it unaware. */
+final class SurvivorView {
+
+    private final PrintWriter out;
+    private final Style style;
+    private final TestNames names;
+
+    SurvivorView(PrintWriter out, Style style, TestNames names) {
+        this.out = out;
+        this.style = style;
+        this.names = names;
+    }
+
+    void show(MutantResult mutant, int position, int size, CurrentSources.State fileState, Optional<Decision> decision) {
+        PointRecord first = mutant.first();
+        String operators = mutant.points().stream().map(PointRecord::operator).distinct().collect(Collectors.joining("+"));
+        out.println();
+        out.println(style.bold("survivor " + position + " of " + size + " · " + mutant.shortId() + " · "
+                + mutant.file() + ":" + first.line()) + " · " + operators + " · " + order(mutant.order()));
+        for (PointRecord point : mutant.points()) {
+            out.println("  " + (mutant.order() > 1 ? "line " + point.line() + ": " : "") + point.description()
+                    + " in " + point.type() + "#" + point.member());
+        }
+        if (fileState == CurrentSources.State.CHANGED) {
+            out.println(style.yellow("  " + mutant.file() + " has changed since the run: the diff shows the code as it ran;"
+                    + " f runs it again against the code as it is now"));
+        } else if (fileState == CurrentSources.State.GONE) {
+            out.println(style.yellow("  " + mutant.file() + " is gone since the run"));
+        }
+        out.print(DiffPrinter.render(mutant.diff() == null ? "" : mutant.diff(), style));
+        showTests(mutant.reachedBy());
+        decision.ifPresent(made -> out.println(style.cyan("decided so far: " + made.shown())));
+    }
+
+    private void showTests(List<String> reachedBy) {
+        if (reachedBy == null || reachedBy.isEmpty()) {
+            out.println("the run names no test that reaches this code");
+            return;
+        }
+        out.println((reachedBy.size() == 1 ? "1 test reaches" : reachedBy.size() + " tests reach")
+                + " this code and passed with the change — the place to write the missing assertion:");
+        reachedBy.forEach(id -> out.println("  " + names.of(id)));
+    }
+
+    static String order(int order) {
+        return order == 1 ? "first-order" : "order " + order;
+    }
+}
