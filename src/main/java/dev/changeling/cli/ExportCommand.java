@@ -8,6 +8,7 @@ import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.Settled;
 import dev.changeling.review.export.MarkdownReport;
 import dev.changeling.review.export.PatchFolder;
 import dev.changeling.review.export.SarifReport;
@@ -18,7 +19,6 @@ import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.function.Predicate;
 import picocli.CommandLine;
@@ -78,21 +78,6 @@ final class ExportCommand implements Callable<Integer> {
     CommandSpec spec;
 
     /** Known equivalent mutants (by full id) and the test for mutants marked fixed locally. */
-    record Settled(Set<String> equivalent, Predicate<MutantResult> fixedLocally) {
-
-        Predicate<MutantResult> resolved() {
-            return mutant -> equivalent.contains(mutant.id()) || fixedLocally.test(mutant);
-        }
-    }
-
-    /**
-     * What triage has settled in this project: the one place where the committed equivalents list and
-     * the local triage state come in. Until they are wired here, nothing is settled.
-     */
-    static Settled settled(ProjectLayout layout) {
-        return new Settled(Set.of(), mutant -> false);
-    }
-
     @Override
     public Integer call() {
         if (minScore != null && (minScore.signum() < 0 || minScore.compareTo(BigDecimal.ONE) > 0)) {
@@ -102,14 +87,14 @@ final class ExportCommand implements Callable<Integer> {
         ProjectLayout layout = project.layout();
         Path resultsFile = ResultsFile.in(layout.root());
         RunResults all = ResultsFile.read(resultsFile);
-        RunResults results = limited(all, layout, project.limits(layout));
+        RunResults results = all.limitedTo(layout.root(), project.limits(layout));
         boolean gating = failOnSurvivors || minScore != null;
         if (gating && !results.complete()) {
             throw new UserError(resultsFile + ": the run was interrupted, so its figures are incomplete;"
                     + " run 'changeling run' to the end before using --fail-on-survivors or --min-score");
         }
-        Settled settled = settled(layout);
-        Predicate<MutantResult> resolved = settled.resolved();
+        Settled settled = Settled.load(layout.root());
+        Predicate<MutantResult> resolved = settled::resolved;
         Score score = Score.of(results.mutants(), settled.equivalent());
         List<MutantResult> survivors = Survivors.unresolved(results.mutants(), resolved);
 
@@ -156,18 +141,6 @@ final class ExportCommand implements Callable<Integer> {
         }
         err.flush();
         return exit;
-    }
-
-    /** Only the mutants in the files and folders named, when any are. */
-    private static RunResults limited(RunResults results, ProjectLayout layout, List<Path> limits) {
-        if (limits.isEmpty()) {
-            return results;
-        }
-        List<MutantResult> inside = results.mutants().stream()
-                .filter(mutant -> limits.stream().anyMatch(limit -> layout.root().resolve(mutant.file()).normalize().startsWith(limit)))
-                .toList();
-        return new RunResults(results.format(), results.complete(), results.settings(), results.tests(), results.timings(),
-                inside, results.problems(), results.sourceHashes());
     }
 
     private static void write(Path file, String text) {

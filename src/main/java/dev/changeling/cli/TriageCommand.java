@@ -3,7 +3,6 @@ package dev.changeling.cli;
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import dev.changeling.project.ProjectLayout;
-import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
 import dev.changeling.review.triage.Answers;
@@ -14,8 +13,6 @@ import java.io.Console;
 import java.io.InputStreamReader;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -80,7 +77,7 @@ final class TriageCommand implements Callable<Integer> {
                     ExitCode.NO_TERMINAL);
         }
         ProjectLayout layout = project.layout();
-        RunResults results = limited(ResultsFile.read(ResultsFile.in(layout.root())), layout, project.limits(layout));
+        RunResults results = ResultsFile.read(ResultsFile.in(layout.root())).limitedTo(layout.root(), project.limits(layout));
         PrintWriter out = spec.commandLine().getOut();
         Answers answers = scripted
                 ? Answers.fromLines(new InputStreamReader(System.in, StandardCharsets.UTF_8), out)
@@ -106,17 +103,5 @@ final class TriageCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCode.OK;
-    }
-
-    /** Only the mutants in the files and folders named, when any are. */
-    private static RunResults limited(RunResults results, ProjectLayout layout, List<Path> limits) {
-        if (limits.isEmpty()) {
-            return results;
-        }
-        List<MutantResult> inside = results.mutants().stream()
-                .filter(mutant -> limits.stream().anyMatch(limit -> layout.root().resolve(mutant.file()).normalize().startsWith(limit)))
-                .toList();
-        return new RunResults(results.format(), results.complete(), results.settings(), results.tests(), results.timings(),
-                inside, results.problems(), results.sourceHashes());
     }
 }

@@ -27,4 +27,15 @@ public record RunResults(
         Map<String, String> sourceHashes) {
 
     public static final int FORMAT = 1;
+
+    /** Only the mutants in the files and folders named (absolute paths), or all when none are named. */
+    public RunResults limitedTo(java.nio.file.Path projectRoot, List<java.nio.file.Path> limits) {
+        if (limits.isEmpty()) {
+            return this;
+        }
+        List<MutantResult> inside = mutants.stream()
+                .filter(mutant -> limits.stream().anyMatch(limit -> projectRoot.resolve(mutant.file()).normalize().startsWith(limit)))
+                .toList();
+        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes);
+    }
 }
