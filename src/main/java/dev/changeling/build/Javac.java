@@ -193,9 +193,14 @@ final class Javac implements AutoCloseable {
     /** An error as {@code file:line: message}, the message cut to its first line. */
     static String describe(Diagnostic<? extends JavaFileObject> error) {
         String path = Objects.requireNonNullElse(pathOf(error.getSource()), "?");
+        return path + ":" + error.getLineNumber() + ": " + firstLine(error);
+    }
+
+    /** The first line of an error's message; the rest repeats types and positions. */
+    static String firstLine(Diagnostic<? extends JavaFileObject> error) {
         String message = error.getMessage(Locale.ROOT);
         int newline = message.indexOf('\n');
-        return path + ":" + error.getLineNumber() + ": " + (newline < 0 ? message : message.substring(0, newline)).trim();
+        return (newline < 0 ? message : message.substring(0, newline)).trim();
     }
 
     @Override

@@ -8,6 +8,7 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
@@ -66,6 +67,8 @@ public final class MutantBuild {
                 if (reason == null) {
                     placements.put(mutant.fingerprint(),
                             Placement.inSchema(mutant.points().stream().map(ids::get).toList()));
+                } else if (certainlyStillborn(mutant, schema.stillborn()) != null) {
+                    placements.put(mutant.fingerprint(), Placement.stillborn(certainlyStillborn(mutant, schema.stillborn())));
                 } else {
                     SourceFile file = request.files().get(mutant.file());
                     placements.put(mutant.fingerprint(), compileAlone(javac, mutant, file,
@@ -91,6 +94,18 @@ public final class MutantBuild {
             }
         }
         return null;
+    }
+
+    /**
+     * The error of the first point (by line) that javac has already shown cannot compile, or null: the
+     * mutant's own file holds the same ill-typed expression, so compiling it would only repeat the error.
+     */
+    private static String certainlyStillborn(Mutant mutant, Map<Point, String> stillborn) {
+        return mutant.points().stream()
+                .filter(stillborn::containsKey)
+                .min(Comparator.comparingInt(Point::line))
+                .map(stillborn::get)
+                .orElse(null);
     }
 
     private static Placement compileAlone(Javac javac, Mutant mutant, SourceFile file, Path classes, String reason) {

@@ -5,6 +5,7 @@ import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
 /**
  * One file's schema text, and where in that text each switched host and each of its branches lies,
@@ -13,9 +14,9 @@ import java.util.List;
  * @param source   the original file
  * @param text     the schema text
  * @param hosts    every switched host, outer hosts before the hosts nested in them
- * @param rejected points that could not be switched (a host overlapping another host without nesting)
+ * @param rejected points that could not be switched, each with the reason
  */
-record RenderedFile(SourceFile source, String text, List<HostRegion> hosts, List<Point> rejected) {
+record RenderedFile(SourceFile source, String text, List<HostRegion> hosts, Map<Point, String> rejected) {
 
     /** One switched host: its extent in the schema text, its mutated branches and its original branch. */
     record HostRegion(List<Point> points, HostKind kind, int begin, int end, List<Branch> mutated, Branch original) {

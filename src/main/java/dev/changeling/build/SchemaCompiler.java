@@ -44,10 +44,11 @@ final class SchemaCompiler {
      *
      * @param points     the schema's points, in id order
      * @param evicted    the points that left the schema, each with the reason
+     * @param stillborn  of those, the points whose mutants are certain not to compile, with the error
      * @param classNames the binary names of the classes written
      */
-    record Outcome(List<Point> points, Map<Point, String> evicted, Set<String> classNames, long renderNanos,
-                   long compileNanos, int rounds) {
+    record Outcome(List<Point> points, Map<Point, String> evicted, Map<Point, String> stillborn,
+                   Set<String> classNames, long renderNanos, long compileNanos, int rounds) {
     }
 
     private final Javac javac;
@@ -56,6 +57,7 @@ final class SchemaCompiler {
     private final Path sources;
     private final Path scratch;
     private final Set<String> checkedOriginals = new HashSet<>();
+    private final Map<Point, String> stillborn = new LinkedHashMap<>();
     private long renderNanos;
     private long compileNanos;
 
@@ -76,15 +78,14 @@ final class SchemaCompiler {
             ordered.forEach(point -> ids.put(point, ids.size()));
             Map<String, RenderedFile> rendered = render(ordered, ids);
             Map<Point, String> leaving = new LinkedHashMap<>();
-            rendered.values().forEach(file -> file.rejected().forEach(point ->
-                    leaving.put(point, "its host overlaps another host without nesting in it")));
+            rendered.values().forEach(file -> file.rejected().forEach(leaving::put));
             if (!leaving.isEmpty()) {
                 leave(schema, evicted, leaving);
                 round--;
                 continue;
             }
             if (ordered.isEmpty()) {
-                return new Outcome(List.of(), evicted, Set.of(), renderNanos, compileNanos, round - 1);
+                return new Outcome(List.of(), evicted, stillborn, Set.of(), renderNanos, compileNanos, round - 1);
             }
             long started = System.nanoTime();
             Javac.Task task = javac.task(rendered.values().stream()
@@ -95,7 +96,7 @@ final class SchemaCompiler {
                 Set<String> written = task.generate();
                 compileNanos += System.nanoTime() - started;
                 writeSources(rendered.values());
-                return new Outcome(ordered, evicted, written, renderNanos, compileNanos, round);
+                return new Outcome(ordered, evicted, stillborn, written, renderNanos, compileNanos, round);
             }
             compileNanos += System.nanoTime() - started;
             if (round >= ROUNDS_BEFORE_WHOLE_FILES || leaving.isEmpty()) {
@@ -120,7 +121,7 @@ final class SchemaCompiler {
     }
 
     /** Adds the points to move out to {@code leaving}; the paths of the files with errors. */
-    private static Set<String> trace(Javac.Task task, Map<String, RenderedFile> rendered, Map<Point, String> leaving) {
+    private Set<String> trace(Javac.Task task, Map<String, RenderedFile> rendered, Map<Point, String> leaving) {
         Map<String, List<Diagnostic<? extends JavaFileObject>>> errorsByFile = new LinkedHashMap<>();
         for (Diagnostic<? extends JavaFileObject> error : task.errors()) {
             String path = Javac.pathOf(error.getSource());
@@ -130,9 +131,14 @@ final class SchemaCompiler {
         for (CompilationUnitTree unit : task.units()) {
             RenderedFile file = rendered.get(Javac.pathOf(unit.getSourceFile()));
             List<Diagnostic<? extends JavaFileObject>> errors = errorsByFile.getOrDefault(file.path(), List.of());
+            Map<Point, String> constantLoops = LoopConditions.constantSides(task, unit, file);
             if (!errors.isEmpty()) {
-                ErrorAttribution.evictions(file, errors, MemberSpans.of(unit, positions)).forEach(leaving::putIfAbsent);
+                ErrorAttribution.Traced traced = ErrorAttribution.trace(file, errors, MemberSpans.of(unit, positions),
+                        constantLoops.keySet());
+                traced.evicted().forEach(leaving::putIfAbsent);
+                traced.stillborn().forEach(stillborn::putIfAbsent);
             }
+            constantLoops.forEach(leaving::putIfAbsent);
             BranchTypes.mismatches(task, unit, file).forEach(leaving::putIfAbsent);
         }
         return errorsByFile.keySet();

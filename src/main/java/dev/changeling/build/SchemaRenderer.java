@@ -42,11 +42,11 @@ final class SchemaRenderer {
 
     /** The schema of {@code file} switching {@code points}, each under its id. */
     static RenderedFile render(SourceFile file, Collection<Point> points, Map<Point, Integer> ids) {
-        List<Point> rejected = new ArrayList<>();
-        List<Host> roots = nest(hosts(points, ids), rejected);
+        Map<Point, String> rejected = new LinkedHashMap<>();
+        List<Host> roots = nest(wholeStatements(file, hosts(points, ids), rejected), rejected);
         SchemaRenderer renderer = new SchemaRenderer(file.text(), ids);
         renderer.emitRange(0, file.text().length(), roots);
-        return new RenderedFile(file, renderer.out.toString(), List.copyOf(renderer.regions), List.copyOf(rejected));
+        return new RenderedFile(file, renderer.out.toString(), List.copyOf(renderer.regions), Map.copyOf(rejected));
     }
 
     private static List<Host> hosts(Collection<Point> points, Map<Point, Integer> ids) {
@@ -63,8 +63,25 @@ final class SchemaRenderer {
         return hosts;
     }
 
+    /**
+     * Statement hosts that do not end as a statement does (an expression lambda's body, which the tree
+     * also calls a statement) cannot be put in a block, so their points are rejected.
+     */
+    private static List<Host> wholeStatements(SourceFile file, List<Host> hosts, Map<Point, String> rejected) {
+        List<Host> kept = new ArrayList<>();
+        for (Host host : hosts) {
+            String text = file.textOf(host.span()).strip();
+            if (host.kind() == HostKind.STATEMENT && !text.endsWith(";") && !text.endsWith("}")) {
+                host.points().forEach(point -> rejected.put(point, "its host is not a whole statement"));
+            } else {
+                kept.add(host);
+            }
+        }
+        return kept;
+    }
+
     /** Arranges hosts into a forest by containment; a host that overlaps another without nesting is rejected. */
-    private static List<Host> nest(List<Host> sorted, List<Point> rejected) {
+    private static List<Host> nest(List<Host> sorted, Map<Point, String> rejected) {
         List<Host> roots = new ArrayList<>();
         Deque<Host> open = new ArrayDeque<>();
         for (Host host : sorted) {
@@ -72,7 +89,7 @@ final class SchemaRenderer {
                 open.pop();
             }
             if (!open.isEmpty() && !open.peek().span().contains(host.span())) {
-                rejected.addAll(host.points());
+                host.points().forEach(point -> rejected.put(point, "its host overlaps another host without nesting in it"));
                 continue;
             }
             (open.isEmpty() ? roots : open.peek().inner()).add(host);
@@ -105,8 +122,9 @@ final class SchemaRenderer {
                 out.append(')');
             }
             case STATEMENT_EXPRESSION -> {
-                // a call is a statement expression, so the switch can stand where i++ stood
-                out.append(PROBE).append(".discard(");
+                // a call that hands back its argument is a statement expression with a value, as i++ is, so the
+                // switch can stand in a statement, a for-loop update and a void or a value lambda's body alike
+                out.append(PROBE).append(".pass(");
                 chain(host, mutated);
                 originalBranch = originalExpression(host);
                 out.append(')');

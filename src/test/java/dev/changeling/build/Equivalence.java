@@ -48,7 +48,10 @@ final class Equivalence {
                         assertEquals(outcomes(project, standalone, className),
                                 outcomes(project, placement.classes(), className), what);
                     }
-                    case STILLBORN -> assertNull(standalone, what + " is stillborn but its own file compiles");
+                    case STILLBORN -> {
+                        assertNull(standalone, what + " is stillborn but its own file compiles");
+                        assertEquals(errors.get(0), placement.detail(), what + ": the reported error is javac's first");
+                    }
                     case ONCE_PER_JVM -> {
                     }
                     default -> throw new IllegalStateException(placement.kind().toString());

@@ -127,7 +127,7 @@ class MutantBuildTest {
 
             String schema = Files.readString(project.output.resolve("schema-sources/src/main/java/sample/Trays.java"));
             assertEquals(Samples.TRAYS.lines().count(), schema.lines().count());
-            assertTrue(schema.contains("dev.changeling.probe.Probe.discard("), "statement expressions are wrapped");
+            assertTrue(schema.contains("dev.changeling.probe.Probe.pass("), "statement expressions are wrapped");
             assertTrue(schema.lines().anyMatch(line -> line.contains("private static void settle(int[] box) {")));
         }
     }
@@ -177,7 +177,10 @@ class MutantBuildTest {
             BuildResult result = project.build(List.of(pair));
 
             assertEquals(Placement.Kind.STILLBORN, result.placementOf(pair).kind());
-            assertEquals(1, result.timings().aloneCompiles());
+            assertEquals("src/main/java/sample/Labels.java:9: bad operand types for binary operator '-'",
+                    result.placementOf(pair).detail());
+            assertEquals(0, result.timings().aloneCompiles(), "the schema already showed that the '-' cannot compile");
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, List.of(pair), "sample.Labels");
         }
     }
 
@@ -311,6 +314,68 @@ class MutantBuildTest {
     }
 
     @Nested
+    class LambdaBodies {
+
+        @Test
+        void voidValueAndOverloadedLambdaBodies_stayInTheSchema_andMeanWhatTheirFilesMean() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Sprinklers.java", Samples.SPRINKLERS));
+            List<Point> points = project.points("sample/Sprinklers.java", SampleOperators.all());
+            List<Mutant> mutants = firstOrder(points);
+            BuildResult result = project.build(mutants);
+
+            for (String[] body : new String[][] {{"box[0]++", "--"}, {"x*2+a", "-"}, {"v>limit", ">="},
+                    {"count[0]+=n", "-="}}) {
+                Placement placement = result.placementOf(only(points, body[0], body[1]));
+                assertEquals(Placement.Kind.IN_SCHEMA, placement.kind(), body[0] + ": " + placement.detail());
+            }
+            Placement bodyDeleted = result.placementOf(only(points, "count[0]+=n", ""));
+            assertEquals(Placement.Kind.STILLBORN, bodyDeleted.kind(), "a lambda's expression body is no statement to delete");
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants, "sample.Sprinklers");
+        }
+    }
+
+    @Nested
+    class LoopConditions {
+
+        @Test
+        void conditionBecomingConstantFalse_isStillborn_asJavacFindsTheBodyUnreachable() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Ladders.java", Samples.LADDERS));
+            List<Point> points = project.points("sample/Ladders.java", List.of(new dev.changeling.operator.RelationalSubset()));
+            List<Mutant> mutants = List.of(only(points, "left>0", "false"), only(points, "left>0", ">="));
+            BuildResult result = project.build(mutants);
+
+            Placement never = result.placementOf(mutants.get(0));
+            assertEquals(Placement.Kind.STILLBORN, never.kind());
+            assertEquals("src/main/java/sample/Ladders.java:10: unreachable statement", never.detail());
+            assertEquals(Placement.Kind.IN_SCHEMA, result.placementOf(mutants.get(1)).kind());
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants, "sample.Ladders");
+        }
+
+        @Test
+        void constantConditionMadeVariable_leavesTheSchemaAtOnce_withoutDisturbingItsMember() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Ladders.java", Samples.LADDERS));
+            List<Point> points = project.points("sample/Ladders.java", List.of(SampleOperators.LITERALS,
+                    new dev.changeling.operator.RelationalSubset()));
+            Mutant loopForEver = only(points, "true", "false");
+            Mutant higher = only(points, "x>3", ">=");
+            BuildResult result = project.build(List.of(loopForEver, higher));
+
+            assertEquals(Placement.Kind.STILLBORN, result.placementOf(loopForEver).kind());
+            assertEquals(Placement.Kind.IN_SCHEMA, result.placementOf(higher).kind());
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, List.of(loopForEver, higher), "sample.Ladders");
+        }
+
+        @Test
+        void constantText_isLiteralsAndOperatorsOnly() {
+            assertTrue(dev.changeling.build.LoopConditions.constant("false"));
+            assertTrue(dev.changeling.build.LoopConditions.constant("(1 < 2L) && !true"));
+            assertFalse(dev.changeling.build.LoopConditions.constant("i < 10"));
+            assertFalse(dev.changeling.build.LoopConditions.constant("x1 > 0"));
+            assertFalse(dev.changeling.build.LoopConditions.constant("\"a\".isEmpty()"));
+        }
+    }
+
+    @Nested
     class OncePerJvm {
 
         @Test
@@ -404,11 +469,11 @@ class MutantBuildTest {
 
         @Test
         void timings_areRecorded() {
-            TestProject project = TestProject.create(dir, Map.of("sample/Labels.java", Samples.LABELS));
-            BuildResult result = project.build(firstOrder(project.points("sample/Labels.java", List.of(SampleOperators.BINARY))));
+            TestProject project = TestProject.create(dir, Map.of("sample/Sacks.java", Samples.SACKS));
+            BuildResult result = project.build(firstOrder(project.points("sample/Sacks.java", List.of(SampleOperators.LITERALS))));
 
             BuildTimings timings = result.timings();
-            assertEquals(2, timings.schemaRounds());
+            assertEquals(1, timings.schemaRounds(), "the only point left, so nothing was compiled again");
             assertEquals(1, timings.aloneCompiles());
             assertTrue(timings.compileMillis() > 0 && timings.fallbackMillis() > 0, timings.summary());
             assertTrue(timings.summary().startsWith("render "), timings.summary());

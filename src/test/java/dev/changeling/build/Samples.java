@@ -273,4 +273,82 @@ final class Samples {
                 }
             }
             """;
+
+    /** Lambda bodies: value lambdas, void lambdas, and one that is both, passed where overloads tell them apart. */
+    static final String SPRINKLERS = """
+            package sample;
+
+            import java.util.List;
+            import java.util.concurrent.Callable;
+            import java.util.function.IntUnaryOperator;
+
+            public final class Sprinklers {
+
+                private Sprinklers() {
+                }
+
+                public static String pulse(int start) {
+                    int[] box = {start};
+                    return pick(() -> box[0]++) + ":" + box[0];
+                }
+
+                public static int wet(int a) {
+                    IntUnaryOperator spray = x -> x * 2 + a;
+                    return spray.applyAsInt(a + 1);
+                }
+
+                public static long dry(int limit) {
+                    return List.of(3, 8, 1, 9).stream().filter(v -> v > limit).count();
+                }
+
+                public static int tick(int n) {
+                    int[] count = {0};
+                    Runnable step = () -> count[0] += n;
+                    step.run();
+                    step.run();
+                    return count[0];
+                }
+
+                static String pick(Runnable task) {
+                    task.run();
+                    return "runnable";
+                }
+
+                static String pick(Callable<Integer> task) {
+                    try {
+                        return "callable " + task.call();
+                    } catch (Exception e) {
+                        return "failed";
+                    }
+                }
+            }
+            """;
+
+    /** Loops whose condition is, or could become, a constant. */
+    static final String LADDERS = """
+            package sample;
+
+            public final class Ladders {
+
+                private Ladders() {
+                }
+
+                public static int rungs(int from) {
+                    int steps = 0;
+                    for (int left = from; left > 0; left -= 3) {
+                        steps++;
+                    }
+                    return steps;
+                }
+
+                public static int climb(int x) {
+                    while (true) {
+                        if (x > 3) {
+                            return x;
+                        }
+                        x += 2;
+                    }
+                }
+            }
+            """;
 }

@@ -91,11 +91,11 @@ class SchemaRendererTest {
     class StatementHosts {
 
         @Test
-        void statementExpression_isWrappedInDiscard() {
+        void statementExpression_isWrappedInACallThatHandsItBack() {
             String schema = new Sketch("class A { int i; void f() { i++; } }")
                     .point("i++", "++", "--", HostKind.STATEMENT_EXPRESSION)
                     .text();
-            assertEquals("class A { int i; void f() { " + P + ".discard(" + P + ".on(0) ? (i--) : (i++)); } }", schema);
+            assertEquals("class A { int i; void f() { " + P + ".pass(" + P + ".on(0) ? (i--) : (i++)); } }", schema);
         }
 
         @Test
@@ -112,7 +112,7 @@ class SchemaRendererTest {
                     .point("i++;", "i++;", "", HostKind.STATEMENT)
                     .point("i++", "++", "--", HostKind.STATEMENT_EXPRESSION)
                     .text();
-            assertEquals("class A { int i; void f() { { if (!" + P + ".on(0)) { " + P + ".discard(" + P
+            assertEquals("class A { int i; void f() { { if (!" + P + ".on(0)) { " + P + ".pass(" + P
                     + ".on(1) ? (i--) : (i++)); } } } }", schema);
         }
 
@@ -153,8 +153,17 @@ class SchemaRendererTest {
                     .point("b + c", "+", "-", HostKind.EXPRESSION)
                     .render();
             assertEquals(1, rendered.rejected().size());
-            assertEquals("b + c", rendered.rejected().get(0).snippet());
+            assertEquals("b + c", rendered.rejected().keySet().iterator().next().snippet());
             assertTrue(rendered.text().contains("(a - b)"));
+        }
+
+        @Test
+        void statementHostThatIsALambdasExpressionBody_isRejected() {
+            RenderedFile rendered = new Sketch("class A { int i; Runnable r = () -> i++; }")
+                    .point("i++", "i++", "", HostKind.STATEMENT)
+                    .render();
+            assertEquals(List.of("its host is not a whole statement"), List.copyOf(rendered.rejected().values()));
+            assertEquals("class A { int i; Runnable r = () -> i++; }", rendered.text());
         }
     }
 

@@ -22,6 +22,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.Predicate;
+import javax.tools.Diagnostic;
 import javax.tools.DiagnosticCollector;
 import javax.tools.JavaCompiler;
 import javax.tools.JavaFileObject;
@@ -103,7 +104,10 @@ final class TestProject {
         return MutantBuild.compile(new BuildRequest(mutants, files, classpath(), output));
     }
 
-    /** Compiles a mutant's standalone file the plain way; null with {@code errors} filled when it does not compile. */
+    /**
+     * Compiles a mutant's standalone file the plain way; null when it does not compile, with {@code errors}
+     * filled as {@code file:line: message} in javac's order.
+     */
     Path compileStandalone(Mutant mutant, List<String> errors) {
         Path folder = root.resolve("standalone/" + standaloneCount++);
         List<String> found = compile(Map.of(mutant.file(), mutant.apply(files.get(mutant.file()).text())), folder);
@@ -127,10 +131,18 @@ final class TestProject {
             DiagnosticCollector<JavaFileObject> diagnostics = new DiagnosticCollector<>();
             boolean ok = javac.getTask(null, fileManager, diagnostics, List.of("-proc:none", "-encoding", "UTF-8"), null,
                     fileManager.getJavaFileObjectsFromPaths(written)).call();
-            return ok ? List.of() : diagnostics.getDiagnostics().stream().map(d -> d.getMessage(Locale.ROOT)).toList();
+            return ok ? List.of() : diagnostics.getDiagnostics().stream()
+                    .filter(d -> d.getKind() == Diagnostic.Kind.ERROR)
+                    .map(d -> relative(d.getSource().toUri().getPath(), sourceCopy) + ":" + d.getLineNumber() + ": "
+                            + d.getMessage(Locale.ROOT).lines().findFirst().orElse("").trim())
+                    .toList();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    private static String relative(String absolute, Path root) {
+        return root.toAbsolutePath().relativize(Path.of(absolute)).toString().replace('\\', '/');
     }
 
     /** A loader that sees {@code first}, then the probe, then the original classes, and nothing of the test's own. */
