@@ -99,4 +99,44 @@ public final class Probe {
     public static void discard(Object value) {
         // as above
     }
+
+    /**
+     * Hands its argument back, so that a switch standing where a statement expression stood ({@code i++;},
+     * a for-loop update, a lambda body such as {@code () -> count++}) is still one, with the same value.
+     */
+    public static boolean pass(boolean value) {
+        return value;
+    }
+
+    public static char pass(char value) {
+        return value;
+    }
+
+    public static byte pass(byte value) {
+        return value;
+    }
+
+    public static short pass(short value) {
+        return value;
+    }
+
+    public static int pass(int value) {
+        return value;
+    }
+
+    public static long pass(long value) {
+        return value;
+    }
+
+    public static float pass(float value) {
+        return value;
+    }
+
+    public static double pass(double value) {
+        return value;
+    }
+
+    public static <T> T pass(T value) {
+        return value;
+    }
 }

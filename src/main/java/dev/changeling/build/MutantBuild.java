@@ -1,0 +1,133 @@
+package dev.changeling.build;
+
+import dev.changeling.mutant.Mutant;
+import dev.changeling.mutant.Point;
+import dev.changeling.source.SourceFile;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.TimeUnit;
+
+/**
+ * Compiles mutants: every point that can be switched at run time goes into one schema compiled by
+ * one javac task; a mutant whose point cannot is compiled on its own, and one that does not compile
+ * on its own is stillborn.
+ */
+public final class MutantBuild {
+
+    static final String SCHEMA = "schema";
+    static final String SCHEMA_SOURCES = "schema-sources";
+    static final String ALONE = "alone";
+    static final String SCRATCH = "scratch";
+
+    private static final String ONCE_PER_JVM = "runs once per JVM (a static initialiser or a constant), "
+            + "where switching at run time cannot reach it";
+
+    private MutantBuild() {
+    }
+
+    /** Builds the schema and the mutants that cannot join it; replaces earlier output in the output folder. */
+    public static BuildResult compile(BuildRequest request) {
+        Path output = request.outputDirectory().toAbsolutePath().normalize();
+        for (String folder : List.of(SCHEMA, SCHEMA_SOURCES, ALONE, SCRATCH)) {
+            Outputs.deleteTree(output.resolve(folder));
+        }
+        Map<String, Placement> placements = new LinkedHashMap<>();
+        Map<String, Mutant> runnable = new LinkedHashMap<>();
+        for (Mutant mutant : request.mutants()) {
+            if (mutant.oncePerJvm()) {
+                placements.put(mutant.fingerprint(), Placement.oncePerJvm(ONCE_PER_JVM));
+            } else {
+                runnable.putIfAbsent(mutant.fingerprint(), mutant);
+            }
+        }
+        Set<Point> candidates = new LinkedHashSet<>();
+        runnable.values().forEach(mutant -> candidates.addAll(mutant.points()));
+
+        createFolder(output.resolve(SCHEMA));
+        try (Javac javac = new Javac(request.classpath())) {
+            SchemaCompiler.Outcome schema = new SchemaCompiler(javac, request.files(), output.resolve(SCHEMA),
+                    output.resolve(SCHEMA_SOURCES), output.resolve(SCRATCH)).compile(candidates);
+            Map<Point, Integer> ids = new HashMap<>();
+            schema.points().forEach(point -> ids.put(point, ids.size()));
+
+            long fallbackStarted = System.nanoTime();
+            int aloneCompiles = 0;
+            for (Mutant mutant : runnable.values()) {
+                String reason = reasonToLeave(mutant, ids, schema.evicted());
+                if (reason == null) {
+                    placements.put(mutant.fingerprint(),
+                            Placement.inSchema(mutant.points().stream().map(ids::get).toList()));
+                } else if (certainlyStillborn(mutant, schema.stillborn()) != null) {
+                    placements.put(mutant.fingerprint(), Placement.stillborn(certainlyStillborn(mutant, schema.stillborn())));
+                } else {
+                    SourceFile file = request.files().get(mutant.file());
+                    placements.put(mutant.fingerprint(), compileAlone(javac, mutant, file,
+                            output.resolve(ALONE).resolve(mutant.fingerprint()), reason));
+                    aloneCompiles++;
+                }
+            }
+            long fallbackNanos = System.nanoTime() - fallbackStarted;
+            Outputs.deleteTree(output.resolve(SCRATCH));
+            BuildTimings timings = new BuildTimings(millis(schema.renderNanos()), millis(schema.compileNanos()),
+                    millis(fallbackNanos), schema.rounds(), aloneCompiles);
+            return new BuildResult(schema.points(), placements, output.resolve(SCHEMA),
+                    new ArrayList<>(schema.classNames()), timings);
+        }
+    }
+
+    /** Null when every point of the mutant is in the schema; else why the mutant must be compiled alone. */
+    private static String reasonToLeave(Mutant mutant, Map<Point, Integer> ids, Map<Point, String> evicted) {
+        for (Point point : mutant.points()) {
+            if (!ids.containsKey(point)) {
+                String why = evicted.getOrDefault(point, "it is not in the schema");
+                return mutant.order() == 1 ? why : "its change at line " + point.line() + " left the schema: " + why;
+            }
+        }
+        return null;
+    }
+
+    /**
+     * The error of the first point (by line) that javac has already shown cannot compile, or null: the
+     * mutant's own file holds the same ill-typed expression, so compiling it would only repeat the error.
+     */
+    private static String certainlyStillborn(Mutant mutant, Map<Point, String> stillborn) {
+        return mutant.points().stream()
+                .filter(stillborn::containsKey)
+                .min(Comparator.comparingInt(Point::line))
+                .map(stillborn::get)
+                .orElse(null);
+    }
+
+    private static Placement compileAlone(Javac javac, Mutant mutant, SourceFile file, Path classes, String reason) {
+        Javac.Task task = javac.task(List.of(new Javac.Source(file.path(), mutant.apply(file.text()))), classes);
+        task.analyze();
+        if (!task.errors().isEmpty()) {
+            Outputs.deleteTree(classes);
+            return Placement.stillborn(Javac.describe(task.errors().get(0)));
+        }
+        task.generate();
+        return Placement.alone(classes, reason);
+    }
+
+    private static void createFolder(Path folder) {
+        try {
+            Files.createDirectories(folder);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot create " + folder, e);
+        }
+    }
+
+    private static long millis(long nanos) {
+        return TimeUnit.NANOSECONDS.toMillis(nanos);
+    }
+}

@@ -1,0 +1,119 @@
+package dev.changeling.execution;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.BitSet;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The unmutated suite's run: every test with its time and reach, the containers that failed, and what
+ * happened while the production classes were initialised before any test.
+ */
+public final class Baseline {
+
+    private final List<RecordedTest> tests;
+    private final List<FailedContainer> failedContainers;
+    private final int[] reachedWhileInitialising;
+    private final List<String> initialisationFailures;
+    private final long nanos;
+    private final Map<String, RecordedTest> byId = new LinkedHashMap<>();
+    private final Map<Integer, BitSet> testsByPoint = new HashMap<>();
+
+    /**
+     * @param tests                    in the order they finished
+     * @param failedContainers         containers whose setup or teardown failed
+     * @param reachedWhileInitialising points reached while the classes named for pre-initialisation were
+     *                                 initialised: static initialiser code that runs once per JVM
+     * @param initialisationFailures   one line per such class that could not be initialised
+     * @param nanos                    wall time of the whole suite
+     */
+    public Baseline(List<RecordedTest> tests, List<FailedContainer> failedContainers,
+                    int[] reachedWhileInitialising, List<String> initialisationFailures, long nanos) {
+        this.tests = List.copyOf(tests);
+        this.failedContainers = List.copyOf(failedContainers);
+        this.reachedWhileInitialising = reachedWhileInitialising.clone();
+        Arrays.sort(this.reachedWhileInitialising);
+        this.initialisationFailures = List.copyOf(initialisationFailures);
+        this.nanos = nanos;
+        for (int index = 0; index < this.tests.size(); index++) {
+            RecordedTest test = this.tests.get(index);
+            byId.put(test.id(), test);
+            for (int point : test.reached()) {
+                testsByPoint.computeIfAbsent(point, p -> new BitSet()).set(index);
+            }
+        }
+    }
+
+    public List<RecordedTest> tests() {
+        return tests;
+    }
+
+    public List<FailedContainer> failedContainers() {
+        return failedContainers;
+    }
+
+    /** Points reached while the pre-initialised classes were initialised, ascending. */
+    public int[] reachedWhileInitialising() {
+        return reachedWhileInitialising.clone();
+    }
+
+    public List<String> initialisationFailures() {
+        return initialisationFailures;
+    }
+
+    public long nanos() {
+        return nanos;
+    }
+
+    /** Whether no test and no container failed. */
+    public boolean green() {
+        return failedContainers.isEmpty() && failures().isEmpty();
+    }
+
+    public List<RecordedTest> failures() {
+        return tests.stream().filter(test -> test.status() == TestStatus.FAILED).toList();
+    }
+
+    /** The test with that unique id, or null. */
+    public RecordedTest test(String id) {
+        return byId.get(id);
+    }
+
+    /**
+     * The passing tests that reach any of the points, fastest first (ties by id), the order that tends
+     * to find a killing test soonest.
+     */
+    public List<String> testsFor(int... points) {
+        BitSet reaching = new BitSet();
+        for (int point : points) {
+            BitSet tests = testsByPoint.get(point);
+            if (tests != null) {
+                reaching.or(tests);
+            }
+        }
+        List<RecordedTest> passing = new ArrayList<>();
+        reaching.stream().mapToObj(tests::get).filter(test -> test.status() == TestStatus.PASSED).forEach(passing::add);
+        passing.sort(Comparator.comparingLong(RecordedTest::nanos).thenComparing(RecordedTest::id));
+        return passing.stream().map(RecordedTest::id).toList();
+    }
+
+    /** The sum of the baseline times of the given tests; an unknown id counts as zero. */
+    public long nanosOf(List<String> testIds) {
+        long sum = 0;
+        for (String id : testIds) {
+            RecordedTest test = byId.get(id);
+            sum += test == null ? 0 : test.nanos();
+        }
+        return sum;
+    }
+
+    @Override
+    public String toString() {
+        return "Baseline[" + tests.size() + " tests, " + failures().size() + " failed, "
+                + failedContainers.size() + " failed containers, " + nanos / 1_000_000 + " ms]";
+    }
+}

@@ -1,0 +1,154 @@
+package dev.changeling.execution;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.Consumer;
+
+/** The worker pool: one thread per slot takes the next job from a shared list until none are left. */
+final class DefaultWorkerPool implements WorkerPool {
+
+    private final WorkerSettings settings;
+    private final SuiteSetup setup;
+    private final Path workerClasses;
+    private final WorkerSlot[] slots;
+    private final AtomicInteger started = new AtomicInteger();
+    private final Object listenerLock = new Object();
+    private volatile boolean stopped;
+
+    DefaultWorkerPool(WorkerSettings settings, SuiteSetup setup) {
+        this.settings = settings;
+        this.setup = setup;
+        this.workerClasses = WorkerClasses.extract(settings.workDirectory().resolve("classes"));
+        this.slots = new WorkerSlot[settings.workers()];
+        for (int i = 0; i < slots.length; i++) {
+            slots[i] = new WorkerSlot(this, i + 1);
+        }
+        Reaper.watch(this);
+    }
+
+    @Override
+    public synchronized Baseline baseline(Consumer<String> onTestFinished) {
+        throwIfStopped();
+        return slots[0].baseline(onTestFinished);
+    }
+
+    @Override
+    public synchronized List<JobResult> run(List<MutantJob> jobs, Consumer<JobResult> onResult) {
+        JobResult[] results = new JobResult[jobs.size()];
+        AtomicInteger next = new AtomicInteger();
+        AtomicReference<RuntimeException> failure = new AtomicReference<>();
+        List<Thread> threads = new ArrayList<>();
+        for (int i = 0; i < Math.min(slots.length, jobs.size()) && !stopped; i++) {
+            WorkerSlot slot = slots[i];
+            Thread thread = new Thread(() -> work(slot, jobs, next, results, onResult, failure), "changeling-worker-slot-" + (i + 1));
+            thread.setDaemon(true);
+            threads.add(thread);
+            thread.start();
+        }
+        for (Thread thread : threads) {
+            joinStoppingOnInterrupt(thread);
+        }
+        if (failure.get() != null) {
+            throw failure.get();
+        }
+        List<JobResult> finished = new ArrayList<>();
+        for (JobResult result : results) {
+            if (result != null) {
+                finished.add(result);
+            }
+        }
+        return finished;
+    }
+
+    private void work(WorkerSlot slot, List<MutantJob> jobs, AtomicInteger next, JobResult[] results,
+                      Consumer<JobResult> onResult, AtomicReference<RuntimeException> failure) {
+        try {
+            for (int index = next.getAndIncrement(); index < jobs.size() && !stopped; index = next.getAndIncrement()) {
+                JobResult result = slot.execute(jobs.get(index));
+                boolean lostToStop = stopped && (result.outcome() == Outcome.CRASHED || result.outcome() == Outcome.TIMED_OUT);
+                if (lostToStop) {
+                    return;
+                }
+                results[index] = result;
+                synchronized (listenerLock) {
+                    onResult.accept(result);
+                }
+            }
+        } catch (CancellationException stoppedMeanwhile) {
+            // the pool was stopped; what finished is kept
+        } catch (RuntimeException e) {
+            if (!stopped && failure.compareAndSet(null, e)) {
+                stop();
+            }
+        }
+    }
+
+    @Override
+    public void stop() {
+        stopped = true;
+        for (WorkerSlot slot : slots) {
+            slot.stop();
+        }
+    }
+
+    @Override
+    public boolean stopped() {
+        return stopped;
+    }
+
+    @Override
+    public int workersStarted() {
+        return started.get();
+    }
+
+    @Override
+    public synchronized void close() {
+        for (WorkerSlot slot : slots) {
+            slot.close();
+        }
+        Reaper.forget(this);
+    }
+
+    WorkerSettings settings() {
+        return settings;
+    }
+
+    SuiteSetup setup() {
+        return setup;
+    }
+
+    Path workerClasses() {
+        return workerClasses;
+    }
+
+    void counted() {
+        started.incrementAndGet();
+    }
+
+    void throwIfStopped() {
+        if (stopped) {
+            throw new CancellationException("the worker pool was stopped");
+        }
+    }
+
+    /** An interrupt of the caller means "stop": the workers are killed, and the threads are still waited for. */
+    private void joinStoppingOnInterrupt(Thread thread) {
+        boolean interrupted = false;
+        while (true) {
+            try {
+                thread.join();
+                break;
+            } catch (InterruptedException e) {
+                interrupted = true;
+                stop();
+            }
+        }
+        if (interrupted) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}

@@ -1,0 +1,52 @@
+package dev.changeling.execution;
+
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+
+/**
+ * Makes sure no worker JVM outlives the tool, whichever way the tool ends: on shutdown it first stops
+ * the pools (so their running jobs are not mistaken for crashes), then kills any worker still alive.
+ */
+final class Reaper {
+
+    private static final Set<DefaultWorkerPool> POOLS = ConcurrentHashMap.newKeySet();
+    private static final Set<WorkerProcess> WORKERS = ConcurrentHashMap.newKeySet();
+    private static boolean hooked;
+
+    private Reaper() {
+    }
+
+    static void watch(DefaultWorkerPool pool) {
+        hook();
+        POOLS.add(pool);
+    }
+
+    static void forget(DefaultWorkerPool pool) {
+        POOLS.remove(pool);
+    }
+
+    static void watch(WorkerProcess worker) {
+        hook();
+        WORKERS.add(worker);
+    }
+
+    static void forget(WorkerProcess worker) {
+        WORKERS.remove(worker);
+    }
+
+    static int liveWorkers() {
+        return WORKERS.size();
+    }
+
+    private static synchronized void hook() {
+        if (!hooked) {
+            Runtime.getRuntime().addShutdownHook(new Thread(Reaper::reap, "changeling-worker-reaper"));
+            hooked = true;
+        }
+    }
+
+    private static void reap() {
+        POOLS.forEach(DefaultWorkerPool::stop);
+        WORKERS.forEach(WorkerProcess::kill);
+    }
+}

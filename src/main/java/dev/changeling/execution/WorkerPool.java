@@ -1,0 +1,50 @@
+package dev.changeling.execution;
+
+import java.util.List;
+import java.util.function.Consumer;
+
+/**
+ * Worker JVMs that run the project's tests: the unmutated suite once, then mutant after mutant. Workers
+ * start when first needed and are replaced after a crash, a timeout or a set number of mutants; none
+ * outlives {@link #close()} or the tool itself.
+ */
+public interface WorkerPool extends AutoCloseable {
+
+    /** A pool that starts its workers as needed; {@code settings.workers()} of them at most. */
+    static WorkerPool open(WorkerSettings settings, SuiteSetup setup) {
+        return new DefaultWorkerPool(settings, setup);
+    }
+
+    /**
+     * Runs the whole unmutated suite once in one worker, recording each test's result, time and reach.
+     *
+     * @param onTestFinished told the name of each test as it finishes (for progress), on the calling thread
+     * @throws dev.changeling.UserError                 when the worker cannot start, dies or runs out of time
+     * @throws java.util.concurrent.CancellationException when the pool was stopped
+     */
+    Baseline baseline(Consumer<String> onTestFinished);
+
+    /**
+     * Runs the jobs on all workers, each job's tests one at a time, and returns the results of the jobs
+     * that finished, in job order: all of them, unless the pool was stopped meanwhile.
+     *
+     * @param onResult told each result as it comes, one call at a time, from the pool's threads
+     * @throws dev.changeling.UserError when a worker cannot be started or prepared
+     */
+    List<JobResult> run(List<MutantJob> jobs, Consumer<JobResult> onResult);
+
+    /**
+     * Stops everything at once (for Ctrl-C): kills the workers and makes a running {@link #run} return what
+     * finished. May be called from any thread; the pool runs nothing more afterwards.
+     */
+    void stop();
+
+    boolean stopped();
+
+    /** How many worker JVMs this pool has started so far. */
+    int workersStarted();
+
+    /** Lets the workers quit, and kills any that do not. */
+    @Override
+    void close();
+}

@@ -1,0 +1,381 @@
+package dev.changeling.execution;
+
+import dev.changeling.worker.Wire;
+import java.io.BufferedInputStream;
+import java.io.BufferedOutputStream;
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.File;
+import java.io.IOException;
+import java.io.RandomAccessFile;
+import java.net.InetAddress;
+import java.net.ServerSocket;
+import java.net.Socket;
+import java.net.SocketTimeoutException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.UUID;
+import java.util.concurrent.TimeUnit;
+import java.util.function.Consumer;
+
+/**
+ * One worker JVM seen from the tool: started with the tests' output going to a log file, spoken to over
+ * its own loopback socket, and killed (with anything it started) on a deadline, on stop or on close.
+ */
+final class WorkerProcess {
+
+    /** The worker stopped answering: it ran past a deadline (and was killed) or it died. */
+    static final class Lost extends Exception {
+        final boolean timedOut;
+
+        Lost(boolean timedOut, String message) {
+            super(message);
+            this.timedOut = timedOut;
+        }
+    }
+
+    /** What preparing a worker reported: points reached by class initialisation, classes that failed it. */
+    record Prepared(int[] reachedWhileInitialising, List<String> initialisationFailures) {
+    }
+
+    private static final int TAIL_BYTES = 8192;
+
+    private final Process process;
+    private final ServerSocket server;
+    private final String token;
+    private final Path log;
+    private final long launchMark;
+    private Socket socket;
+    private DataInputStream in;
+    private DataOutputStream out;
+    private volatile boolean killed;
+
+    private WorkerProcess(Process process, ServerSocket server, String token, Path log) {
+        this.process = process;
+        this.server = server;
+        this.token = token;
+        this.log = log;
+        this.launchMark = logSize();
+    }
+
+    /**
+     * Starts the JVM; it is not usable before {@link #connect}. The classpath is {@code first}, then the
+     * worker classes, then the project's test classpath; it goes in an argument file, as a long one
+     * would not fit on a command line.
+     */
+    static WorkerProcess launch(WorkerSettings settings, Path workerClasses, List<Path> first, Path log, Path temp,
+                                Path argumentFile) throws IOException {
+        Files.createDirectories(temp);
+        Files.createDirectories(log.toAbsolutePath().getParent());
+        List<Path> classpath = new ArrayList<>(first);
+        classpath.add(workerClasses);
+        classpath.addAll(settings.classpath());
+        StringBuilder joined = new StringBuilder();
+        for (Path entry : classpath) {
+            joined.append(joined.length() == 0 ? "" : File.pathSeparator).append(entry.toAbsolutePath());
+        }
+        Files.writeString(argumentFile, "-cp\n" + quoted(joined.toString()) + "\n", StandardCharsets.UTF_8);
+
+        ServerSocket server = new ServerSocket(0, 1, InetAddress.getLoopbackAddress());
+        String token = UUID.randomUUID().toString();
+        List<String> command = new ArrayList<>();
+        command.add(settings.javaExecutable().toString());
+        command.add("-Xmx" + settings.maxHeap());
+        if (settings.exitOnOutOfMemory()) {
+            command.add("-XX:+ExitOnOutOfMemoryError");
+        }
+        command.add("-Djava.io.tmpdir=" + temp.toAbsolutePath());
+        command.addAll(settings.jvmArguments());
+        command.add("@" + argumentFile.toAbsolutePath());
+        command.add(WorkerClasses.MAIN_CLASS);
+        command.add(Integer.toString(server.getLocalPort()));
+        command.add(token);
+        command.add(Long.toString(ProcessHandle.current().pid()));
+
+        Files.writeString(log, "---- worker started " + Instant.now() + "\n", StandardCharsets.UTF_8,
+                StandardOpenOption.CREATE, StandardOpenOption.APPEND);
+        ProcessBuilder builder = new ProcessBuilder(command)
+                .directory(settings.projectDirectory().toFile())
+                .redirectErrorStream(true)
+                .redirectOutput(ProcessBuilder.Redirect.appendTo(log.toFile()));
+        Process process;
+        try {
+            process = builder.start();
+        } catch (IOException e) {
+            server.close();
+            throw e;
+        }
+        WorkerProcess worker = new WorkerProcess(process, server, token, log);
+        Reaper.watch(worker);
+        // Tests that read System.in see its end rather than waiting forever.
+        process.getOutputStream().close();
+        process.onExit().thenRun(worker::closeServer);
+        return worker;
+    }
+
+    /** Waits for the JVM to call back and say hello. */
+    void connect(long timeoutMillis) throws Lost {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(timeoutMillis);
+        try {
+            server.setSoTimeout((int) Math.max(1, Math.min(Integer.MAX_VALUE, timeoutMillis)));
+            socket = server.accept();
+            closeServer();
+            socket.setTcpNoDelay(true);
+            in = new DataInputStream(new BufferedInputStream(socket.getInputStream()));
+            out = new DataOutputStream(new BufferedOutputStream(socket.getOutputStream()));
+            byte hello = next(deadline);
+            int version = in.readInt();
+            String answer = Wire.readString(in);
+            in.readLong();
+            if (hello != Wire.HELLO || version != Wire.VERSION || !token.equals(answer)) {
+                kill();
+                throw new IllegalStateException("a worker answered with protocol " + version + " (expected " + Wire.VERSION + ")");
+            }
+        } catch (SocketTimeoutException e) {
+            kill();
+            throw new Lost(true, "the worker JVM did not start within " + timeoutMillis + " ms");
+        } catch (IOException e) {
+            throw died(launchMark);
+        }
+    }
+
+    Prepared prepare(SuiteSetup setup, long timeoutMillis) throws Lost {
+        long deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(timeoutMillis);
+        long mark = logSize();
+        try {
+            out.writeByte(Wire.PREPARE);
+            out.writeInt(setup.pointCount());
+            Wire.writeStrings(out, setup.preinitialise());
+            Wire.writeStrings(out, setup.testRoots().stream().map(Path::toString).toList());
+            Wire.writeStrings(out, setup.includes().stream().map(ClassPatterns::toRegex).toList());
+            Wire.writeStrings(out, setup.excludes().stream().map(ClassPatterns::toRegex).toList());
+            Wire.writeStrings(out, setup.excludedTags());
+            out.flush();
+            expect(Wire.PREPARED, next(deadline));
+            return new Prepared(Wire.readInts(in), Wire.readStrings(in));
+        } catch (SocketTimeoutException e) {
+            kill();
+            throw new Lost(true, "preparing the worker took more than " + timeoutMillis + " ms");
+        } catch (IOException e) {
+            throw died(mark);
+        }
+    }
+
+    Baseline baseline(Prepared prepared, Consumer<String> onTestFinished, long timeoutMillis) throws Lost {
+        long start = System.nanoTime();
+        long deadline = start + TimeUnit.MILLISECONDS.toNanos(timeoutMillis);
+        long mark = logSize();
+        try {
+            out.writeByte(Wire.BASELINE);
+            out.flush();
+            byte code;
+            while ((code = next(deadline)) == Wire.PROGRESS) {
+                onTestFinished.accept(Wire.readString(in));
+            }
+            expect(Wire.BASELINE_DONE, code);
+            List<RecordedTest> tests = new ArrayList<>();
+            for (int count = in.readInt(); count > 0; count--) {
+                String id = Wire.readString(in);
+                String name = Wire.readString(in);
+                String className = Wire.readString(in);
+                TestStatus status = TestStatus.fromWire(in.readByte());
+                long nanos = in.readLong();
+                String message = Wire.readString(in);
+                tests.add(new RecordedTest(id, name, className, status, message, nanos, Wire.readInts(in)));
+            }
+            List<FailedContainer> containers = new ArrayList<>();
+            for (int count = in.readInt(); count > 0; count--) {
+                containers.add(new FailedContainer(Wire.readString(in), Wire.readString(in), Wire.readString(in)));
+            }
+            return new Baseline(tests, containers, prepared.reachedWhileInitialising(), prepared.initialisationFailures(),
+                    System.nanoTime() - start);
+        } catch (SocketTimeoutException e) {
+            kill();
+            throw new Lost(true, "the unmutated suite took more than " + timeoutMillis + " ms");
+        } catch (IOException e) {
+            throw died(mark);
+        }
+    }
+
+    /** Runs one mutant's tests; a deadline or the worker's death becomes the outcome, the worker then gone. */
+    JobResult run(MutantJob job) {
+        long start = System.nanoTime();
+        long deadline = start + TimeUnit.MILLISECONDS.toNanos(job.deadlineMillis());
+        long mark = logSize();
+        List<TestRun> runs = new ArrayList<>();
+        try {
+            out.writeByte(Wire.RUN);
+            Wire.writeInts(out, job.points());
+            Wire.writeStrings(out, job.tests());
+            out.flush();
+            byte code;
+            while ((code = next(deadline)) == Wire.TEST_DONE) {
+                String id = Wire.readString(in);
+                TestStatus status = TestStatus.fromWire(in.readByte());
+                long nanos = in.readLong();
+                runs.add(new TestRun(id, status, nanos, Wire.readString(in)));
+            }
+            expect(Wire.RUN_DONE, code);
+        } catch (SocketTimeoutException e) {
+            kill();
+            return new JobResult(job.key(), Outcome.TIMED_OUT, running(job, runs),
+                    "no answer within " + job.deadlineMillis() + " ms", runs, System.nanoTime() - start);
+        } catch (IOException e) {
+            Lost lost = died(mark);
+            return new JobResult(job.key(), Outcome.CRASHED, running(job, runs), lost.getMessage(), runs, System.nanoTime() - start);
+        }
+        long nanos = System.nanoTime() - start;
+        for (TestRun test : runs) {
+            if (test.status() == TestStatus.FAILED) {
+                return new JobResult(job.key(), Outcome.KILLED, test.testId(), test.message(), runs, nanos);
+            }
+        }
+        return new JobResult(job.key(), Outcome.SURVIVED, null, null, runs, nanos);
+    }
+
+    /** The test that was running when the answer stopped: the first one not reported. */
+    private static String running(MutantJob job, List<TestRun> finished) {
+        return finished.size() < job.tests().size() ? job.tests().get(finished.size()) : null;
+    }
+
+    /** Asks the worker to quit, and kills it if it has not within a moment. */
+    void close() {
+        if (out != null && process.isAlive()) {
+            try {
+                out.writeByte(Wire.QUIT);
+                out.flush();
+                process.waitFor(2, TimeUnit.SECONDS);
+            } catch (IOException ignored) {
+                // it is going away anyway
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }
+        kill();
+    }
+
+    /** Kills the JVM and every process it started, and waits until they are gone. */
+    void kill() {
+        killed = true;
+        List<ProcessHandle> descendants = process.descendants().toList();
+        process.destroyForcibly();
+        descendants.forEach(ProcessHandle::destroyForcibly);
+        closeQuietly(socket);
+        closeServer();
+        try {
+            process.onExit().get(10, TimeUnit.SECONDS);
+            for (ProcessHandle child : descendants) {
+                child.onExit().get(10, TimeUnit.SECONDS);
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (Exception ignored) {
+            // a process that will not die within seconds is left to the operating system
+        }
+        Reaper.forget(this);
+    }
+
+    boolean alive() {
+        return !killed && process.isAlive();
+    }
+
+    long pid() {
+        return process.pid();
+    }
+
+    ProcessHandle handle() {
+        return process.toHandle();
+    }
+
+    /** Reads the next message code, waiting no longer than the deadline; a worker's failure report is thrown. */
+    private byte next(long deadlineNanos) throws IOException {
+        if (in.available() == 0) {
+            long remaining = TimeUnit.NANOSECONDS.toMillis(deadlineNanos - System.nanoTime());
+            if (remaining <= 0) {
+                throw new SocketTimeoutException("deadline passed");
+            }
+            socket.setSoTimeout((int) Math.min(Integer.MAX_VALUE, remaining));
+        }
+        byte code = in.readByte();
+        if (code == Wire.FAILURE) {
+            throw new IllegalStateException("a worker failed: " + Wire.readString(in) + " (log: " + log + ")");
+        }
+        return code;
+    }
+
+    private static void expect(byte expected, byte actual) {
+        if (expected != actual) {
+            throw new IllegalStateException("a worker sent message " + actual + " where " + expected + " was due");
+        }
+    }
+
+    /** The worker is gone: says how it ended (exit code and its last line of output) and makes sure it is dead. */
+    private Lost died(long logMark) {
+        boolean wasKilled = killed;
+        try {
+            process.waitFor(5, TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        String how = process.isAlive() ? "the worker JVM closed its connection"
+                : "the worker JVM exited with code " + process.exitValue();
+        kill();
+        if (wasKilled) {
+            return new Lost(false, "the worker JVM was stopped");
+        }
+        String last = lastLine(logMark);
+        return new Lost(false, last.isEmpty() ? how : how + "; last output: " + last);
+    }
+
+    private String lastLine(long from) {
+        try (RandomAccessFile file = new RandomAccessFile(log.toFile(), "r")) {
+            long start = Math.max(from, file.length() - TAIL_BYTES);
+            byte[] bytes = new byte[(int) (file.length() - start)];
+            file.seek(start);
+            file.readFully(bytes);
+            String[] lines = new String(bytes, StandardCharsets.UTF_8).split("\\R");
+            for (int i = lines.length - 1; i >= 0; i--) {
+                String line = lines[i].strip();
+                if (!line.isEmpty()) {
+                    return line.length() <= 300 ? line : line.substring(0, 299) + "…";
+                }
+            }
+        } catch (IOException ignored) {
+            // no output to show
+        }
+        return "";
+    }
+
+    private long logSize() {
+        try {
+            return Files.size(log);
+        } catch (IOException e) {
+            return 0;
+        }
+    }
+
+    private void closeServer() {
+        closeQuietly(server);
+    }
+
+    private static void closeQuietly(AutoCloseable closeable) {
+        if (closeable == null) {
+            return;
+        }
+        try {
+            closeable.close();
+        } catch (Exception ignored) {
+            // closing is best effort
+        }
+    }
+
+    /** Java argument files group by double quotes and take backslash escapes inside them. */
+    private static String quoted(String text) {
+        return "\"" + text.replace("\\", "\\\\").replace("\"", "\\\"") + "\"";
+    }
+}

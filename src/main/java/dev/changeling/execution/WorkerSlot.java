@@ -1,0 +1,178 @@
+package dev.changeling.execution;
+
+import dev.changeling.UserError;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.function.Consumer;
+
+/**
+ * One place in the pool for a worker: it keeps its worker between jobs, replaces it when it is spent,
+ * and starts a fresh one of its own for a mutant compiled alone. Its log and temp folder stay the same.
+ */
+final class WorkerSlot {
+
+    private final DefaultWorkerPool pool;
+    private final WorkerSettings settings;
+    private final SuiteSetup setup;
+    private final Path log;
+    private final Path temp;
+    private final Path aloneTemp;
+    private final Path argumentFile;
+    private final Path aloneArgumentFile;
+    private WorkerProcess worker;
+    private WorkerProcess.Prepared prepared;
+    private int mutantsOnWorker;
+    private volatile WorkerProcess live;
+    private volatile WorkerProcess liveAlone;
+
+    WorkerSlot(DefaultWorkerPool pool, int number) {
+        this.pool = pool;
+        this.settings = pool.settings();
+        this.setup = pool.setup();
+        Path folder = settings.workDirectory();
+        this.log = folder.resolve("worker-" + number + ".log");
+        this.temp = folder.resolve("tmp-" + number);
+        this.aloneTemp = folder.resolve("tmp-" + number + "-alone");
+        this.argumentFile = folder.resolve("worker-" + number + ".args");
+        this.aloneArgumentFile = folder.resolve("worker-" + number + "-alone.args");
+    }
+
+    Baseline baseline(Consumer<String> onTestFinished) {
+        ensureWorker();
+        try {
+            return worker.baseline(prepared, onTestFinished, settings.baselineTimeout().toMillis());
+        } catch (WorkerProcess.Lost lost) {
+            retire();
+            pool.throwIfStopped();
+            throw new UserError("the unmutated test suite did not finish: " + lost.getMessage()
+                    + "; the tests' output is in " + log);
+        }
+    }
+
+    JobResult execute(MutantJob job) {
+        if (job.aloneClasses() != null) {
+            return executeAlone(job);
+        }
+        ensureWorker();
+        JobResult result = worker.run(job);
+        mutantsOnWorker++;
+        if (result.outcome() == Outcome.TIMED_OUT || result.outcome() == Outcome.CRASHED) {
+            retire();
+        } else if (mutantsOnWorker >= settings.mutantsPerWorker()) {
+            worker.close();
+            retire();
+        }
+        return result;
+    }
+
+    /** Kills whatever this slot has running, at once. */
+    void stop() {
+        WorkerProcess current = live;
+        if (current != null) {
+            current.kill();
+        }
+        WorkerProcess alone = liveAlone;
+        if (alone != null) {
+            alone.kill();
+        }
+    }
+
+    void close() {
+        if (worker != null) {
+            worker.close();
+            worker = null;
+            live = null;
+        }
+    }
+
+    private JobResult executeAlone(MutantJob job) {
+        long start = System.nanoTime();
+        WorkerProcess alone = launch(List.of(job.aloneClasses()), aloneTemp, aloneArgumentFile, true);
+        try {
+            try {
+                alone.prepare(setup, settings.startTimeout().toMillis());
+            } catch (WorkerProcess.Lost lost) {
+                pool.throwIfStopped();
+                // Only the mutant's own classes differ from a worker that prepares fine: its static initialiser did this.
+                return new JobResult(job.key(), lost.timedOut ? Outcome.TIMED_OUT : Outcome.CRASHED, null,
+                        "while its classes were initialised: " + lost.getMessage(), List.of(), System.nanoTime() - start);
+            }
+            return alone.run(job);
+        } finally {
+            alone.close();
+            liveAlone = null;
+            emptyFolder(aloneTemp);
+        }
+    }
+
+    private void ensureWorker() {
+        if (worker != null) {
+            return;
+        }
+        WorkerProcess started = launch(List.of(), temp, argumentFile, false);
+        try {
+            WorkerProcess.Prepared answer = started.prepare(setup, settings.startTimeout().toMillis());
+            if (prepared == null) {
+                prepared = answer;
+            }
+        } catch (WorkerProcess.Lost lost) {
+            started.kill();
+            live = null;
+            pool.throwIfStopped();
+            throw new UserError("a worker JVM failed while the production classes were initialised: " + lost.getMessage()
+                    + "; the output is in " + log);
+        }
+        worker = started;
+        mutantsOnWorker = 0;
+    }
+
+    private WorkerProcess launch(List<Path> first, Path folder, Path arguments, boolean alone) {
+        pool.throwIfStopped();
+        emptyFolder(folder);
+        WorkerProcess started;
+        try {
+            started = WorkerProcess.launch(settings, pool.workerClasses(), first, log, folder, arguments);
+        } catch (IOException e) {
+            throw new UserError("cannot start a worker JVM with " + settings.javaExecutable() + ": " + e.getMessage()
+                    + "; check the Java installation or give another one");
+        }
+        pool.counted();
+        if (alone) {
+            liveAlone = started;
+        } else {
+            live = started;
+        }
+        if (pool.stopped()) {
+            started.kill();
+            throw new CancellationException("stopped");
+        }
+        try {
+            started.connect(settings.startTimeout().toMillis());
+        } catch (WorkerProcess.Lost lost) {
+            started.kill();
+            pool.throwIfStopped();
+            throw new UserError("a worker JVM did not start: " + lost.getMessage() + "; its output is in " + log);
+        }
+        return started;
+    }
+
+    private void retire() {
+        if (worker != null) {
+            worker.kill();
+        }
+        worker = null;
+        live = null;
+        emptyFolder(temp);
+    }
+
+    private static void emptyFolder(Path folder) {
+        try {
+            WorkerClasses.deleteContents(folder);
+        } catch (IOException | UncheckedIOException e) {
+            // A file a test left behind and locked must not stop the run; the next worker shares the folder with it.
+        }
+    }
+}

@@ -1,0 +1,59 @@
+package dev.changeling.worker;
+
+import org.junit.platform.engine.TestExecutionResult;
+import org.junit.platform.launcher.TestExecutionListener;
+import org.junit.platform.launcher.TestIdentifier;
+
+/**
+ * Watches the run of one selected test: any failure in it or in its containers (a broken assertion or
+ * any other error, in setup or teardown too) makes it failed.
+ */
+final class SingleTestRun implements TestExecutionListener {
+
+    /** How the one test ended; {@code message} says why it failed, was aborted or skipped. */
+    record Result(byte status, long nanos, String message) {
+    }
+
+    private final String target;
+    private byte status = Wire.MISSING;
+    private String message;
+    private String failure;
+
+    SingleTestRun(String target) {
+        this.target = target;
+    }
+
+    @Override
+    public void executionSkipped(TestIdentifier identifier, String reason) {
+        if (covers(identifier)) {
+            status = Wire.SKIPPED;
+            message = reason;
+        }
+    }
+
+    @Override
+    public void executionFinished(TestIdentifier identifier, TestExecutionResult result) {
+        TestExecutionResult.Status outcome = result.getStatus();
+        if (outcome == TestExecutionResult.Status.FAILED && failure == null) {
+            failure = result.getThrowable().map(Failures::describe).orElse("failed");
+        }
+        if (identifier.getUniqueId().equals(target)) {
+            status = outcome == TestExecutionResult.Status.SUCCESSFUL ? Wire.PASSED
+                    : outcome == TestExecutionResult.Status.ABORTED ? Wire.ABORTED : Wire.FAILED;
+            message = result.getThrowable().map(Failures::describe).orElse(null);
+        } else if (outcome == TestExecutionResult.Status.ABORTED && covers(identifier) && status == Wire.MISSING) {
+            status = Wire.ABORTED;
+            message = result.getThrowable().map(Failures::describe).orElse(null);
+        }
+    }
+
+    Result result(long nanos) {
+        return failure != null ? new Result(Wire.FAILED, nanos, failure) : new Result(status, nanos, message);
+    }
+
+    /** Unique ids nest by segments, so an ancestor's id is a prefix of the target's up to a separator. */
+    private boolean covers(TestIdentifier identifier) {
+        String id = identifier.getUniqueId();
+        return target.equals(id) || target.startsWith(id + "/");
+    }
+}

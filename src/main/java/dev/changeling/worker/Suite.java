@@ -1,0 +1,116 @@
+package dev.changeling.worker;
+
+import static org.junit.platform.engine.discovery.DiscoverySelectors.selectClasspathRoots;
+import static org.junit.platform.engine.discovery.DiscoverySelectors.selectUniqueId;
+
+import dev.changeling.probe.Probe;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+import org.junit.platform.engine.discovery.ClassNameFilter;
+import org.junit.platform.launcher.Launcher;
+import org.junit.platform.launcher.LauncherDiscoveryRequest;
+import org.junit.platform.launcher.TagFilter;
+import org.junit.platform.launcher.TestPlan;
+import org.junit.platform.launcher.core.LauncherDiscoveryRequestBuilder;
+import org.junit.platform.launcher.core.LauncherFactory;
+
+/** The project's test suite as this worker sees it: which tests the baseline finds, and running one of them. */
+final class Suite {
+
+    /** Reach is attributed to whichever test is running, so tests must run one after another. */
+    private static final String PARALLEL = "junit.jupiter.execution.parallel.enabled";
+
+    private final Set<Path> testRoots = new LinkedHashSet<>();
+    private final List<String> includes;
+    private final List<String> excludes;
+    private final List<String> excludedTags;
+    private Launcher launcher;
+
+    Suite(List<String> testRoots, List<String> includes, List<String> excludes, List<String> excludedTags) {
+        testRoots.forEach(root -> this.testRoots.add(Path.of(root)));
+        this.includes = List.copyOf(includes);
+        this.excludes = List.copyOf(excludes);
+        this.excludedTags = List.copyOf(excludedTags);
+    }
+
+    void baseline(DataOutputStream out) throws IOException {
+        LauncherDiscoveryRequestBuilder request = LauncherDiscoveryRequestBuilder.request()
+                .selectors(selectClasspathRoots(testRoots))
+                .configurationParameter(PARALLEL, "false");
+        if (!includes.isEmpty()) {
+            request.filters(ClassNameFilter.includeClassNamePatterns(includes.toArray(String[]::new)));
+        }
+        if (!excludes.isEmpty()) {
+            request.filters(ClassNameFilter.excludeClassNamePatterns(excludes.toArray(String[]::new)));
+        }
+        if (!excludedTags.isEmpty()) {
+            request.filters(TagFilter.excludeTags(excludedTags));
+        }
+        BaselineRecorder recorder = new BaselineRecorder(name -> progress(out, name));
+        Probe.drainReached();
+        Probe.record(true);
+        try {
+            launcher().execute(request.build(), recorder);
+        } finally {
+            Probe.record(false);
+        }
+        recorder.write(out);
+    }
+
+    SingleTestRun.Result runOne(String uniqueId) {
+        LauncherDiscoveryRequest request = LauncherDiscoveryRequestBuilder.request()
+                .selectors(selectUniqueId(uniqueId))
+                .configurationParameter(PARALLEL, "false")
+                .build();
+        SingleTestRun listener = new SingleTestRun(uniqueId);
+        long start = System.nanoTime();
+        TestPlan plan;
+        try {
+            plan = launcher().discover(request);
+        } catch (RuntimeException notFound) {
+            // Newer platforms refuse a selector that selects nothing; older ones return an empty plan.
+            return new SingleTestRun.Result(Wire.MISSING, System.nanoTime() - start, Failures.describe(notFound));
+        }
+        if (mayHold(plan, uniqueId)) {
+            launcher().execute(plan, listener);
+        }
+        long nanos = System.nanoTime() - start;
+        Thread.interrupted();
+        Thread.currentThread().setContextClassLoader(ClassLoader.getSystemClassLoader());
+        return listener.result(nanos);
+    }
+
+    /**
+     * Whether the plan has the test, or a container below the engine that may yet register it (parameterised
+     * and dynamic tests appear only while they run). An id that selects nothing is not run at all: the
+     * engine could report that as its own failure, which must not count as a kill.
+     */
+    private static boolean mayHold(TestPlan plan, String uniqueId) {
+        return plan.countTestIdentifiers(node -> uniqueId.equals(node.getUniqueId())
+                || node.getParentId().isPresent() && uniqueId.startsWith(node.getUniqueId() + "/")) > 0;
+    }
+
+    private Launcher launcher() {
+        if (launcher == null) {
+            launcher = LauncherFactory.create();
+        }
+        return launcher;
+    }
+
+    private static void progress(DataOutputStream out, String name) {
+        try {
+            synchronized (out) {
+                out.writeByte(Wire.PROGRESS);
+                Wire.writeString(out, name);
+                out.flush();
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

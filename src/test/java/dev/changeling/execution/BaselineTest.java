@@ -1,0 +1,72 @@
+package dev.changeling.execution;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+
+class BaselineTest {
+
+    static RecordedTest test(String id, TestStatus status, long nanos, int... reached) {
+        return new RecordedTest(id, id, null, status, null, nanos, reached);
+    }
+
+    static final Baseline SUITE = new Baseline(List.of(
+            test("slow", TestStatus.PASSED, 900, 1, 2),
+            test("fast", TestStatus.PASSED, 100, 2, 3),
+            test("tie-b", TestStatus.PASSED, 500, 3),
+            test("tie-a", TestStatus.PASSED, 500, 3),
+            test("skipped", TestStatus.SKIPPED, 0),
+            test("aborted", TestStatus.ABORTED, 50, 3)),
+            List.of(), new int[] {9, 4}, List.of(), 2_000);
+
+    @Nested
+    class ChoosingTests {
+
+        @Test
+        void takesEveryPassingTestThatReachesAnyPoint_fastestFirst_tiesById() {
+            assertEquals(List.of("fast", "tie-a", "tie-b"), SUITE.testsFor(3));
+            assertEquals(List.of("fast", "slow"), SUITE.testsFor(1, 2));
+        }
+
+        @Test
+        void leavesOutTestsThatDidNotPass() {
+            assertFalse(SUITE.testsFor(3).contains("aborted"));
+        }
+
+        @Test
+        void findsNothingForAnUnreachedPoint() {
+            assertEquals(List.of(), SUITE.testsFor(7));
+        }
+    }
+
+    @Nested
+    class Health {
+
+        @Test
+        void isGreenWithoutFailures() {
+            assertTrue(SUITE.green());
+        }
+
+        @Test
+        void isRedWithAFailedTest() {
+            Baseline red = new Baseline(List.of(test("x", TestStatus.FAILED, 1)), List.of(), new int[0], List.of(), 1);
+            assertFalse(red.green());
+            assertEquals(1, red.failures().size());
+        }
+
+        @Test
+        void isRedWithAFailedContainer() {
+            Baseline red = new Baseline(List.of(), List.of(new FailedContainer("c", "C", "boom")), new int[0], List.of(), 1);
+            assertFalse(red.green());
+        }
+    }
+
+    @Test
+    void keepsInitialisationReachSorted() {
+        assertEquals(List.of(4, 9), java.util.Arrays.stream(SUITE.reachedWhileInitialising()).boxed().toList());
+    }
+}

@@ -1,0 +1,58 @@
+package dev.changeling.execution;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import java.util.List;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+
+class DeadlinesTest {
+
+    @Nested
+    class Arithmetic {
+
+        @Test
+        void isFactorTimesBaselinePlusConstant() {
+            assertEquals(2_000 + 3 * 250, new Deadlines(3, 2_000).millisFor(250_000_000L));
+        }
+
+        @Test
+        void roundsPartialMillisecondsUp() {
+            assertEquals(1_002, new Deadlines(1.5, 1_000).millisFor(1_000_001L));
+        }
+
+        @Test
+        void isNeverZero() {
+            assertEquals(1, new Deadlines(1, 0).millisFor(0));
+        }
+
+        @Test
+        void addsTheBaselineTimesOfTheTestsRun() {
+            Baseline baseline = new Baseline(List.of(
+                    new RecordedTest("a", "A", null, TestStatus.PASSED, null, 100_000_000L, new int[0]),
+                    new RecordedTest("b", "B", null, TestStatus.PASSED, null, 300_000_000L, new int[0])),
+                    List.of(), new int[0], List.of(), 0);
+            assertEquals(500 + 2 * 400, new Deadlines(2, 500).millisFor(List.of("a", "b", "unknown"), baseline));
+        }
+    }
+
+    @Nested
+    class Limits {
+
+        @Test
+        void aFactorBelowOneIsRefused() {
+            assertThrows(IllegalArgumentException.class, () -> new Deadlines(0.5, 0));
+        }
+
+        @Test
+        void notANumberIsRefused() {
+            assertThrows(IllegalArgumentException.class, () -> new Deadlines(Double.NaN, 0));
+        }
+
+        @Test
+        void aNegativeConstantIsRefused() {
+            assertThrows(IllegalArgumentException.class, () -> new Deadlines(2, -1));
+        }
+    }
+}

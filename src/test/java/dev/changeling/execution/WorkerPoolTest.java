@@ -1,0 +1,463 @@
+package dev.changeling.execution;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.CountDownLatch;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Drives real worker JVMs on a small compiled project; see {@link TinyProject} for what each point does. */
+class WorkerPoolTest {
+
+    private static final long GENEROUS = 60_000;
+
+    @TempDir
+    static Path folder;
+    static TinyProject project;
+
+    @BeforeAll
+    static void compileTheProject() throws Exception {
+        project = TinyProject.create(folder.resolve("shop"));
+    }
+
+    @AfterAll
+    static void noWorkerOutlivesTheTests() {
+        assertEquals(List.of(), liveWorkers(), "worker JVMs still running");
+    }
+
+    static WorkerSettings settings(String name) {
+        return WorkerSettings.of(project.root, project.classpath(), project.root.resolve("target/changeling/" + name))
+                .withWorkers(1)
+                .withMaxHeap("96m")
+                .withJvmArguments(List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC"));
+    }
+
+    static SuiteSetup setup() {
+        return SuiteSetup.of(TinyProject.POINTS, List.of(project.testClasses)).withPreinitialise(List.of("shop.Rates", "shop.Missing"));
+    }
+
+    static String method(String className, String method) {
+        return "[engine:junit-jupiter]/[class:shop." + className + "]/[method:" + method + "()]";
+    }
+
+    static MutantJob job(String key, int point, String... tests) {
+        return MutantJob.schema(key, new int[] {point}, List.of(tests), GENEROUS);
+    }
+
+    /** Worker JVMs below this one, found by their main class on the command line. */
+    static List<Long> liveWorkers() {
+        return ProcessHandle.current().descendants()
+                .filter(ProcessHandle::isAlive)
+                .filter(process -> process.info().arguments().map(List::of).orElse(List.of()).contains(WorkerClasses.MAIN_CLASS))
+                .map(ProcessHandle::pid)
+                .toList();
+    }
+
+    static List<String> keys(List<JobResult> results) {
+        return results.stream().map(JobResult::key).toList();
+    }
+
+    @Nested
+    @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+    class UnmutatedSuite {
+
+        WorkerPool pool;
+        Baseline baseline;
+        final List<String> progress = new ArrayList<>();
+
+        @BeforeAll
+        void runTheBaseline() {
+            pool = WorkerPool.open(settings("baseline"), setup());
+            baseline = pool.baseline(progress::add);
+        }
+
+        @AfterAll
+        void close() {
+            pool.close();
+        }
+
+        RecordedTest test(String id) {
+            RecordedTest test = baseline.test(id);
+            assertTrue(test != null, () -> "no test " + id + " in " + baseline.tests());
+            return test;
+        }
+
+        @Test
+        void isGreen_andTellsEachFinishedTestAsItGoes() {
+            assertTrue(baseline.green(), () -> baseline.failures() + " " + baseline.failedContainers());
+            long ran = baseline.tests().stream().filter(test -> test.status() != TestStatus.SKIPPED).count();
+            assertEquals(ran, progress.size());
+            assertTrue(progress.contains("PricesTest > addsTwoNumbers()"), progress::toString);
+        }
+
+        @Test
+        void recordsThePointsEachTestReaches() {
+            assertArrayEquals(new int[] {0}, test(method("PricesTest", "addsTwoNumbers")).reached());
+            assertArrayEquals(new int[] {1}, test(method("PricesTest", "multiplies")).reached());
+            assertArrayEquals(new int[] {2}, test(method("HostileTest", "countsToThree")).reached());
+            assertArrayEquals(new int[] {8}, test(method("HostileTest", "measuresDepth")).reached());
+        }
+
+        @Test
+        void givesPointsReachedInClassSetupToEveryTestOfTheClass() {
+            assertArrayEquals(new int[] {5}, test(method("SetupTest", "first")).reached());
+            assertArrayEquals(new int[] {5}, test(method("SetupTest", "second")).reached());
+        }
+
+        @Test
+        void keepsStaticInitialisationApart_whenTheClassWasPreinitialised() {
+            assertArrayEquals(new int[] {7}, baseline.reachedWhileInitialising());
+            assertArrayEquals(new int[0], test(method("RatesTest", "hasABase")).reached());
+            assertEquals(1, baseline.initialisationFailures().size(), baseline.initialisationFailures()::toString);
+            assertTrue(baseline.initialisationFailures().get(0).startsWith("shop.Missing: ClassNotFoundException"),
+                    baseline.initialisationFailures()::toString);
+        }
+
+        @Test
+        void findsNestedAndParameterisedTests() {
+            String nested = "[engine:junit-jupiter]/[class:shop.PricesTest]/[nested-class:WhenEmpty]/[method:addsNothing()]";
+            assertEquals(TestStatus.PASSED, test(nested).status());
+            assertEquals("PricesTest > WhenEmpty > addsNothing()", test(nested).name());
+            long invocations = baseline.tests().stream().filter(test -> test.id().contains("[test-template:doubles(int)]")).count();
+            assertEquals(2, invocations);
+        }
+
+        @Test
+        void leavesOutClassesTheDefaultPatternsDoNotName() {
+            assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("PriceChecks")));
+            assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("TaggedTest")));
+        }
+
+        @Test
+        void reportsDisabledTestsAsSkipped_andBrokenAssumptionsAsAborted() {
+            assertEquals(TestStatus.SKIPPED, test(method("PricesTest", "disabled")).status());
+            assertEquals("kept for later", test(method("PricesTest", "disabled")).message());
+            RecordedTest assuming = test(method("PricesTest", "assumesSomething"));
+            assertEquals(TestStatus.ABORTED, assuming.status());
+            assertTrue(assuming.message().contains("not here"), assuming.message());
+        }
+
+        @Test
+        void namesTheClassOfEachTest() {
+            assertEquals("shop.PricesTest", test(method("PricesTest", "addsTwoNumbers")).className());
+        }
+
+        @Test
+        void choosesThePassingTestsThatReachAPoint() {
+            List<String> tests = baseline.testsFor(6);
+            assertEquals(List.of(), tests);
+            List<String> reachingTimes = baseline.testsFor(1);
+            assertEquals(3, reachingTimes.size());
+            assertTrue(reachingTimes.containsAll(List.of(method("PricesTest", "multiplies"),
+                    method("PricesTest", "multipliesTwos"), method("PricesTest", "multipliesByOne"))));
+        }
+
+        @Test
+        void killsWithTheFirstFailingTest_afterTheOnesThatPass() {
+            JobResult result = run(job("m0", 0, method("PricesTest", "addsZero"), method("PricesTest", "addsTwoNumbers")));
+            assertEquals(Outcome.KILLED, result.outcome());
+            assertEquals(method("PricesTest", "addsTwoNumbers"), result.testId());
+            assertTrue(result.message().startsWith("AssertionFailedError: expected: <5> but was: <-1>"), result.message());
+            assertEquals(List.of(TestStatus.PASSED, TestStatus.FAILED), result.testsRun().stream().map(TestRun::status).toList());
+        }
+
+        @Test
+        void survivesWhenEveryTestPasses() {
+            String nested = "[engine:junit-jupiter]/[class:shop.PricesTest]/[nested-class:WhenEmpty]/[method:addsNothing()]";
+            JobResult result = run(job("m0", 0, method("PricesTest", "addsZero"), nested));
+            assertEquals(Outcome.SURVIVED, result.outcome());
+            assertNull(result.testId());
+            assertEquals(List.of(method("PricesTest", "addsZero"), nested), result.testsRun().stream().map(TestRun::testId).toList());
+        }
+
+        @Test
+        void stopsAtTheFirstFailure() {
+            JobResult result = run(job("m1", 1, method("PricesTest", "multipliesTwos"), method("PricesTest", "multiplies"),
+                    method("PricesTest", "multipliesByOne")));
+            assertEquals(Outcome.KILLED, result.outcome());
+            assertEquals(method("PricesTest", "multiplies"), result.testId());
+            assertEquals(2, result.testsRun().size());
+        }
+
+        @Test
+        void killsOnAnErrorAsOnABrokenAssertion() {
+            JobResult result = run(job("m8", 8, method("HostileTest", "measuresDepth")));
+            assertEquals(Outcome.KILLED, result.outcome());
+            assertTrue(result.message().startsWith("StackOverflowError"), result.message());
+        }
+
+        @Test
+        void killsWhenTheClassSetupFails() {
+            JobResult result = run(job("m5", 5, method("SetupTest", "second")));
+            assertEquals(Outcome.KILLED, result.outcome());
+            assertEquals(method("SetupTest", "second"), result.testId());
+            assertEquals("IllegalStateException: bad setup", result.message());
+        }
+
+        @Test
+        void runsOneInvocationOfAParameterisedTest() {
+            List<String> invocations = baseline.tests().stream().map(RecordedTest::id)
+                    .filter(id -> id.contains("[test-template:doubles(int)]")).sorted().toList();
+            JobResult zero = run(job("m0", 0, invocations.get(0)));
+            JobResult four = run(job("m0", 0, invocations.get(1)));
+            assertEquals(Outcome.SURVIVED, zero.outcome());
+            assertEquals(1, zero.testsRun().size());
+            assertEquals(Outcome.KILLED, four.outcome());
+            assertEquals(invocations.get(1), four.testId());
+        }
+
+        @Test
+        void switchesThePointsOffAfterEachJob() {
+            assertEquals(Outcome.KILLED, run(job("m0", 0, method("PricesTest", "addsTwoNumbers"))).outcome());
+            JobResult after = run(MutantJob.schema("none", new int[0], List.of(method("PricesTest", "addsTwoNumbers")), GENEROUS));
+            assertEquals(Outcome.SURVIVED, after.outcome());
+        }
+
+        @Test
+        void neitherAnAbortedNorAMissingTestKills() {
+            JobResult result = run(job("m0", 0, method("PricesTest", "assumesSomething"), method("PricesTest", "noSuchTest")));
+            assertEquals(Outcome.SURVIVED, result.outcome(), result::toString);
+            assertEquals(List.of(TestStatus.ABORTED, TestStatus.MISSING), result.testsRun().stream().map(TestRun::status).toList());
+        }
+
+        @Test
+        void tellsEachResult_andReturnsThemInJobOrder() {
+            List<String> told = Collections.synchronizedList(new ArrayList<>());
+            List<JobResult> results = pool.run(List.of(job("a", 0, method("PricesTest", "addsZero")),
+                    job("b", 0, method("PricesTest", "addsTwoNumbers")), job("c", 1, method("PricesTest", "multiplies"))),
+                    result -> told.add(result.key()));
+            assertEquals(List.of("a", "b", "c"), keys(results));
+            assertEquals(List.of("a", "b", "c"), told);
+            assertEquals(1, pool.workersStarted());
+        }
+
+        JobResult run(MutantJob job) {
+            List<JobResult> results = pool.run(List.of(job), result -> { });
+            assertEquals(1, results.size());
+            return results.get(0);
+        }
+    }
+
+    @Nested
+    class Deadlines {
+
+        @Test
+        void killsAWorkerThatRunsPastTheDeadline_andGoesOnInAFreshOne() {
+            List<List<Long>> workersWhenTold = new ArrayList<>();
+            try (WorkerPool pool = WorkerPool.open(settings("deadline"), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        MutantJob.schema("loops", new int[] {2}, List.of(method("PricesTest", "addsZero"), method("HostileTest", "countsToThree")), 1_000),
+                        job("after", 0, method("PricesTest", "addsTwoNumbers"))),
+                        result -> workersWhenTold.add(liveWorkers()));
+                assertEquals(Outcome.TIMED_OUT, results.get(0).outcome());
+                assertEquals(method("HostileTest", "countsToThree"), results.get(0).testId());
+                assertEquals(List.of(method("PricesTest", "addsZero")), results.get(0).testsRun().stream().map(TestRun::testId).toList());
+                assertEquals(List.of(), workersWhenTold.get(0), "the timed-out worker is gone before its result is told");
+                assertEquals(Outcome.KILLED, results.get(1).outcome());
+                assertEquals(2, pool.workersStarted());
+            }
+        }
+
+        @Test
+        void killsTheProcessesATestStarted() throws Exception {
+            assumeTrue(Files.isExecutable(Path.of("/bin/sleep")) || Files.isExecutable(Path.of("/usr/bin/sleep")),
+                    "needs the sleep command (Unix)");
+            Path pidFile = project.root.resolve("target/child.pid");
+            Files.deleteIfExists(pidFile);
+            try (WorkerPool pool = WorkerPool.open(settings("children"), setup())) {
+                List<JobResult> results = pool.run(List.of(MutantJob.schema("spawns", new int[] {9},
+                        List.of(method("HostileTest", "spawns")), 5_000)), result -> { });
+                assertEquals(Outcome.TIMED_OUT, results.get(0).outcome());
+            }
+            long child = Long.parseLong(Files.readString(pidFile).strip());
+            assertFalse(ProcessHandle.of(child).map(ProcessHandle::isAlive).orElse(false), "child process " + child + " still alive");
+        }
+    }
+
+    @Nested
+    class Crashes {
+
+        @Test
+        void reportsSystemExit_outOfMemory_andGoesOnInAFreshWorker() {
+            try (WorkerPool pool = WorkerPool.open(settings("crash"), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        job("exits", 3, method("HostileTest", "checksOut")),
+                        job("hogs", 4, method("HostileTest", "hogs")),
+                        job("after", 0, method("PricesTest", "addsTwoNumbers"))), result -> { });
+                assertEquals(Outcome.CRASHED, results.get(0).outcome());
+                assertEquals(method("HostileTest", "checksOut"), results.get(0).testId());
+                assertTrue(results.get(0).message().contains("exited with code 7"), results.get(0).message());
+                assertEquals(Outcome.CRASHED, results.get(1).outcome());
+                assertTrue(results.get(1).message().contains("OutOfMemoryError"), results.get(1).message());
+                assertEquals(Outcome.KILLED, results.get(2).outcome());
+                assertEquals(3, pool.workersStarted());
+            }
+        }
+    }
+
+    @Nested
+    class Recycling {
+
+        @Test
+        void replacesAWorkerAfterItsShareOfMutants_evenOneThatLeftAThreadRunning() {
+            try (WorkerPool pool = WorkerPool.open(settings("recycle").withMutantsPerWorker(2), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        job("leaks", 10, method("HostileTest", "leaks")),
+                        job("b", 0, method("PricesTest", "addsZero")),
+                        job("c", 0, method("PricesTest", "addsTwoNumbers"))), result -> { });
+                assertEquals(List.of(Outcome.SURVIVED, Outcome.SURVIVED, Outcome.KILLED), results.stream().map(JobResult::outcome).toList());
+                assertEquals(2, pool.workersStarted());
+                assertEquals(1, liveWorkers().size());
+            }
+            assertEquals(List.of(), liveWorkers());
+        }
+
+        @Test
+        void emptiesTheWorkersTempFolderWhenItIsReplaced() throws Exception {
+            WorkerSettings settings = settings("temp").withMutantsPerWorker(1);
+            Path temp = settings.workDirectory().resolve("tmp-1");
+            try (WorkerPool pool = WorkerPool.open(settings, setup())) {
+                pool.run(List.of(job("a", 0, method("PricesTest", "addsZero"))), result -> { });
+                assertTrue(Files.isDirectory(temp));
+                Files.writeString(temp.resolve("left-by-a-test.txt"), "x");
+                pool.run(List.of(job("b", 0, method("PricesTest", "addsZero"))), result -> { });
+                assertFalse(Files.exists(temp.resolve("left-by-a-test.txt")));
+            }
+        }
+    }
+
+    @Nested
+    class MutantsCompiledAlone {
+
+        @Test
+        void runInAFreshWorkerOfTheirOwn_withTheirClassesFirst() throws Exception {
+            Path alone = project.compileAlone("or", TinyProject.PRICES.replace("a + b;", "a | b;"));
+            try (WorkerPool pool = WorkerPool.open(settings("alone"), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        MutantJob.alone("or-killed", alone, new int[0], List.of(method("PricesTest", "addsTwoNumbers")), GENEROUS),
+                        MutantJob.alone("or-survived", alone, new int[0], List.of(method("PricesTest", "addsZero")), GENEROUS),
+                        job("schema", 0, method("PricesTest", "addsZero"))), result -> { });
+                assertEquals(List.of(Outcome.KILLED, Outcome.SURVIVED, Outcome.SURVIVED), results.stream().map(JobResult::outcome).toList());
+                assertEquals(3, pool.workersStarted());
+                assertEquals(1, liveWorkers().size(), "only the shared worker stays");
+            }
+        }
+    }
+
+    @Nested
+    class Filters {
+
+        @Test
+        void leaveOutExcludedClassesAndTags_andWithoutPreinitialisationTheTestReachesTheInitialiser() {
+            SuiteSetup setup = SuiteSetup.of(TinyProject.POINTS, List.of(project.testClasses))
+                    .withExcludes(List.of("Hostile*")).withExcludedTags(List.of("slow")).withIncludes(List.of("*Test", "*Checks"));
+            try (WorkerPool pool = WorkerPool.open(settings("filters"), setup)) {
+                Baseline baseline = pool.baseline(name -> { });
+                assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("HostileTest")));
+                assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("TaggedTest")));
+                assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("PriceChecks")));
+                assertArrayEquals(new int[] {7}, baseline.test(method("RatesTest", "hasABase")).reached());
+                assertArrayEquals(new int[0], baseline.reachedWhileInitialising());
+            }
+        }
+    }
+
+    @Nested
+    class Stopping {
+
+        @Test
+        void returnsWhatFinished_killsTheRest_andRunsNothingMore() throws Exception {
+            CountDownLatch twoTold = new CountDownLatch(2);
+            try (WorkerPool pool = WorkerPool.open(settings("stop"), setup())) {
+                Thread stopper = new Thread(() -> {
+                    try {
+                        twoTold.await();
+                        pool.stop();
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                });
+                stopper.start();
+                List<JobResult> results = pool.run(List.of(
+                        job("a", 0, method("PricesTest", "addsZero")),
+                        job("b", 0, method("PricesTest", "addsTwoNumbers")),
+                        MutantJob.schema("loops", new int[] {2}, List.of(method("HostileTest", "countsToThree")), 600_000),
+                        job("d", 0, method("PricesTest", "addsTwoNumbers"))), result -> twoTold.countDown());
+                stopper.join();
+                assertEquals(List.of("a", "b"), keys(results));
+                assertTrue(pool.stopped());
+                assertEquals(List.of(), liveWorkers());
+                assertEquals(List.of(), pool.run(List.of(job("e", 0, method("PricesTest", "addsZero"))), result -> { }));
+                assertThrows(CancellationException.class, () -> pool.baseline(name -> { }));
+            }
+        }
+    }
+
+    /** The same suite on the oldest platform the worker supports, compiled as it is against a newer one. */
+    @Nested
+    @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+    class OnPlatform110 {
+
+        WorkerPool pool;
+        Baseline baseline;
+
+        @BeforeAll
+        void runTheBaseline() {
+            List<Path> jars = LegacyJUnit.jars();
+            assumeTrue(jars != null, "JUnit Platform 1.10.2 is neither in the local Maven repository nor to be fetched with mvn");
+            List<Path> classpath = new ArrayList<>(List.of(project.testClasses, project.classes));
+            classpath.addAll(jars);
+            pool = WorkerPool.open(new WorkerSettings(project.root, classpath, project.root.resolve("target/changeling/platform-1.10"),
+                    1, 100, "96m", true, List.of(), WorkerSettings.currentJava(), Duration.ofMinutes(1), Duration.ofMinutes(5)), setup());
+            baseline = pool.baseline(name -> { });
+        }
+
+        @AfterAll
+        void close() {
+            if (pool != null) {
+                pool.close();
+            }
+        }
+
+        @Test
+        void recordsTheSameTestsAndReach() {
+            assertTrue(baseline.green(), () -> baseline.failures() + " " + baseline.failedContainers());
+            assertArrayEquals(new int[] {5}, baseline.test(method("SetupTest", "second")).reached());
+            assertArrayEquals(new int[] {0}, baseline.test(method("PricesTest", "addsTwoNumbers")).reached());
+            assertEquals(2, baseline.testsFor(0).stream().filter(id -> id.contains("[test-template:doubles(int)]")).count());
+            assertEquals(TestStatus.SKIPPED, baseline.test(method("PricesTest", "disabled")).status());
+        }
+
+        @Test
+        void killsAndSurvives_andFindsNoMissingTest() {
+            String invocation = baseline.tests().stream().map(RecordedTest::id)
+                    .filter(id -> id.contains("[test-template:doubles(int)]")).sorted().toList().get(1);
+            List<JobResult> results = pool.run(List.of(
+                    job("killed", 0, method("PricesTest", "addsZero"), method("PricesTest", "addsTwoNumbers")),
+                    job("survived", 1, method("PricesTest", "multipliesTwos")),
+                    job("invocation", 0, invocation),
+                    job("missing", 0, method("PricesTest", "noSuchTest"))), result -> { });
+            assertEquals(List.of(Outcome.KILLED, Outcome.SURVIVED, Outcome.KILLED, Outcome.SURVIVED),
+                    results.stream().map(JobResult::outcome).toList());
+            assertEquals(method("PricesTest", "addsTwoNumbers"), results.get(0).testId());
+            assertEquals(TestStatus.MISSING, results.get(3).testsRun().get(0).status());
+        }
+    }
+}
