@@ -12,6 +12,7 @@ import picocli.CommandLine.Command;
             ExportCommand.class,
             EquivalentsCommand.class,
             TriageCommand.class,
+            RunCommand.class,
         })
 final class ChangelingCommand {
 }

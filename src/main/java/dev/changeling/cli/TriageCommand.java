@@ -7,6 +7,7 @@ import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
 import dev.changeling.review.triage.Answers;
 import dev.changeling.review.triage.MutantRerun;
+import dev.changeling.run.Rerun;
 import dev.changeling.review.triage.Triage;
 import dev.changeling.terminal.Style;
 import java.io.Console;
@@ -57,15 +58,9 @@ final class TriageCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    /**
-     * WIRING POINT: the one place where triage gets the engine, to run a mutant again when the developer
-     * says it is fixed. Until the engine is wired here, answering f says so and records nothing.
-     */
+    /** Triage re-runs a mutant marked fixed through the same engine as {@code changeling run}. */
     static MutantRerun rerun(ProjectLayout layout, RunResults results) {
-        return mutant -> {
-            throw new UserError("running a mutant again is not available yet in this build"
-                    + " (mark it t, needs a test, until it is)");
-        };
+        return new Rerun(layout.root(), results);
     }
 
     @Override

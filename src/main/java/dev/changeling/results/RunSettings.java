@@ -16,6 +16,8 @@ import java.util.List;
  * @param workers     worker JVMs
  * @param timeFactor  deadline factor over the baseline time of the tests run
  * @param timeExtraMillis constant added to every deadline
+ * @param skipTests   test class patterns left out
+ * @param skipTags    JUnit tags left out
  */
 public record RunSettings(
         String project,
@@ -28,5 +30,12 @@ public record RunSettings(
         String changeScope,
         int workers,
         double timeFactor,
-        long timeExtraMillis) {
+        long timeExtraMillis,
+        List<String> skipTests,
+        List<String> skipTags) {
+
+    public RunSettings {
+        skipTests = skipTests == null ? List.of() : List.copyOf(skipTests);
+        skipTags = skipTags == null ? List.of() : List.copyOf(skipTags);
+    }
 }

@@ -1,0 +1,193 @@
+package dev.changeling.cli;
+
+import dev.changeling.ExitCode;
+import dev.changeling.UserError;
+import dev.changeling.execution.Deadlines;
+import dev.changeling.execution.WorkerSettings;
+import dev.changeling.project.DiscoveryOptions;
+import dev.changeling.project.ProjectLayout;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.ResultsFile;
+import dev.changeling.results.RunResults;
+import dev.changeling.run.MutationRun;
+import dev.changeling.run.RunListener;
+import dev.changeling.run.RunRequest;
+import dev.changeling.terminal.Progress;
+import dev.changeling.terminal.Style;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** Runs the project's tests against every mutant in scope and prints the score and the survivors. */
+@Command(name = "run", mixinStandardHelpOptions = true,
+        description = {"Compile the mutants, run the project's tests against each, and report what the tests missed.",
+            "Results go to target/changeling/results.json, which triage and export read."})
+final class RunCommand implements Callable<Integer> {
+
+    @Mixin
+    ProjectOptions project = new ProjectOptions();
+
+    @Mixin
+    MutantOptions mutants = new MutantOptions();
+
+    @Mixin
+    ChangeOptions change = new ChangeOptions();
+
+    @Option(names = "--workers", paramLabel = "N", description = "Worker JVMs running tests at once (default: one per core).")
+    Integer workers;
+
+    @Option(names = "--time-factor", paramLabel = "F", defaultValue = "3.0",
+            description = "A mutant's tests may take F times their unmutated time (default: ${DEFAULT-VALUE}) ...")
+    double timeFactor;
+
+    @Option(names = "--time-extra", paramLabel = "MS", defaultValue = "2000",
+            description = "... plus this many milliseconds, before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
+    long timeExtraMillis;
+
+    @Option(names = "--worker-heap", paramLabel = "SIZE", defaultValue = WorkerSettings.DEFAULT_MAX_HEAP,
+            description = "Heap of each worker JVM, e.g. 512m or 2g (default: ${DEFAULT-VALUE}).")
+    String workerHeap;
+
+    @Option(names = "--mutants-per-worker", paramLabel = "N", defaultValue = "" + WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
+            description = "Replace a worker JVM after this many mutants (default: ${DEFAULT-VALUE}).")
+    int mutantsPerWorker;
+
+    @Option(names = "--skip-tests", paramLabel = "PATTERN",
+            description = "Leave out test classes matching this pattern, e.g. '*IT' or 'com.acme.db.**' (repeatable).")
+    List<String> skipTests = new ArrayList<>();
+
+    @Option(names = "--skip-tag", paramLabel = "TAG", description = "Leave out tests with this JUnit tag (repeatable).")
+    List<String> skipTags = new ArrayList<>();
+
+    @Option(names = "--min-score", paramLabel = "S",
+            description = "Exit with code 3 when the mutation score is below S (0 to 1).")
+    Double minScore;
+
+    @Option(names = "--maven-arg", paramLabel = "ARG", description = "Pass an argument to every mvn call, e.g. -o or -s settings.xml (repeatable).")
+    List<String> mavenArguments = new ArrayList<>();
+
+    @Option(names = "--plain", description = "No colours and no progress bar, even on a terminal.")
+    boolean plain;
+
+    @Option(names = "--verbose", description = "Stack traces for internal errors.")
+    boolean verbose;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws InterruptedException {
+        if (minScore != null && !(minScore >= 0 && minScore <= 1)) {
+            throw new UserError("--min-score takes a score from 0 to 1, such as 0.8, not " + minScore);
+        }
+        ProjectLayout layout = project.layout();
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        Deadlines deadlines;
+        try {
+            deadlines = new Deadlines(timeFactor, timeExtraMillis);
+        } catch (IllegalArgumentException e) {
+            throw new UserError("--time-factor/--time-extra: " + e.getMessage());
+        }
+        int workerCount = workers == null ? Runtime.getRuntime().availableProcessors() : workers;
+        if (workerCount < 1) {
+            throw new UserError("--workers takes a positive number, not " + workerCount);
+        }
+        RunRequest request = new RunRequest(layout.root(), project.limits(layout), mutants.selection(point -> true),
+                change.scope(layout.root()), DiscoveryOptions.defaults().withMavenArguments(mavenArguments),
+                workerCount, deadlines, workerHeap, mutantsPerWorker, skipTests, skipTags);
+        Style style = plain ? Style.plain() : Style.forStandardOutput();
+        ProgressListener listener = new ProgressListener(err, plain);
+        MutationRun run = new MutationRun(request, listener);
+        Path resultsFile = ResultsFile.in(layout.root());
+        CountDownLatch written = new CountDownLatch(1);
+        Thread onInterrupt = new Thread(() -> {
+            run.stop();
+            try {
+                written.await(30, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+            err.println("changeling: stopped; the verdicts so far are in " + resultsFile);
+            err.flush();
+        }, "changeling-interrupt");
+        Runtime.getRuntime().addShutdownHook(onInterrupt);
+        RunResults results;
+        try {
+            results = run.execute();
+            write(resultsFile, results);
+        } finally {
+            written.countDown();
+            listener.close();
+        }
+        try {
+            Runtime.getRuntime().removeShutdownHook(onInterrupt);
+        } catch (IllegalStateException shuttingDown) {
+            return ExitCode.INTERRUPTED;
+        }
+        new RunReport(style).print(out, results, resultsFile, layout);
+        out.flush();
+        if (!results.complete()) {
+            return ExitCode.INTERRUPTED;
+        }
+        if (minScore != null && RunReport.scoreOf(results, layout) < minScore) {
+            err.println("changeling: the score is under --min-score " + minScore);
+            return ExitCode.SCORE_TOO_LOW;
+        }
+        return ExitCode.OK;
+    }
+
+    private static void write(Path file, RunResults results) {
+        try {
+            ResultsFile.write(file, results);
+        } catch (IOException e) {
+            throw new UserError(file + ": cannot write the results (" + e.getMessage() + "); check the build folder is writable");
+        }
+    }
+
+    /** Phases as lines on standard error, then the progress bar. */
+    private static final class ProgressListener implements RunListener {
+        private final PrintWriter err;
+        private final boolean plain;
+        private Progress progress;
+
+        ProgressListener(PrintWriter err, boolean plain) {
+            this.err = err;
+            this.plain = plain;
+        }
+
+        @Override
+        public void phase(String line) {
+            err.println("  " + line);
+            err.flush();
+        }
+
+        @Override
+        public void running(int mutants) {
+            progress = Progress.onStandardError(mutants, plain);
+        }
+
+        @Override
+        public void finished(MutantResult result) {
+            if (progress != null) {
+                progress.finished(result.verdict().counted(), result.verdict().detected());
+            }
+        }
+
+        void close() {
+            if (progress != null) {
+                progress.close();
+            }
+        }
+    }
+}

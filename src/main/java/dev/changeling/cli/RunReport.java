@@ -1,0 +1,81 @@
+package dev.changeling.cli;
+
+import dev.changeling.analysis.Score;
+import dev.changeling.analysis.Tally;
+import dev.changeling.project.ProjectLayout;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.RunResults;
+import dev.changeling.results.Verdict;
+import dev.changeling.review.EquivalentsList;
+import dev.changeling.review.export.Summary;
+import dev.changeling.terminal.Style;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.stream.Collectors;
+
+/** The terminal report of a run: the summary line, figures per file and operator, and the survivors' ids. */
+final class RunReport {
+
+    private static final int SURVIVORS_LISTED = 40;
+
+    private final Style style;
+
+    RunReport(Style style) {
+        this.style = style;
+    }
+
+    static Set<String> equivalents(ProjectLayout layout) {
+        return EquivalentsList.load(layout.root()).entries().stream().map(entry -> entry.fingerprint()).collect(Collectors.toSet());
+    }
+
+    static double scoreOf(RunResults results, ProjectLayout layout) {
+        return Score.of(results.mutants(), equivalents(layout)).overall().score().orElse(1.0);
+    }
+
+    void print(PrintWriter out, RunResults results, Path resultsFile, ProjectLayout layout) {
+        Set<String> equivalent = equivalents(layout);
+        Score score = Score.of(results.mutants(), equivalent);
+        Tally all = score.overall();
+        List<MutantResult> survivors = results.mutants().stream()
+                .filter(mutant -> mutant.verdict() == Verdict.SURVIVED && !equivalent.contains(mutant.id()))
+                .toList();
+        out.println();
+        out.println(style.bold(Summary.line(results, all, survivors.size())));
+        if (score.byFile().size() > 1) {
+            out.println("by file:");
+            table(out, score.byFile().entrySet().stream().collect(Collectors.toMap(e -> e.getKey(), e -> e.getValue(),
+                    (a, b) -> a, java.util.TreeMap::new)));
+        }
+        out.println("by operator:");
+        table(out, score.byOperator().entrySet().stream().collect(Collectors.toMap(
+                e -> e.getKey().operator() + (e.getKey().order() > 1 ? " (order " + e.getKey().order() + ")" : ""),
+                e -> e.getValue(), (a, b) -> a, java.util.TreeMap::new)));
+        if (!survivors.isEmpty()) {
+            out.println(style.yellow("survived (" + survivors.size() + "):"));
+            survivors.stream().limit(SURVIVORS_LISTED).forEach(mutant -> out.println("  " + style.bold(mutant.shortId())
+                    + "  " + mutant.file() + ":" + mutant.first().line() + "  " + mutant.first().operator()
+                    + (mutant.order() > 1 ? " (order " + mutant.order() + ")" : "")
+                    + "  " + mutant.first().description()));
+            if (survivors.size() > SURVIVORS_LISTED) {
+                out.println("  … and " + (survivors.size() - SURVIVORS_LISTED) + " more (changeling export --markdown FILE lists all)");
+            }
+        }
+        out.println("results: " + resultsFile + "   next: changeling triage " + relative(layout));
+    }
+
+    private static String relative(ProjectLayout layout) {
+        Path here = Path.of("").toAbsolutePath();
+        Path relative = here.relativize(layout.root());
+        return relative.toString().isEmpty() ? "." : relative.toString();
+    }
+
+    private static void table(PrintWriter out, Map<String, Tally> rows) {
+        int width = rows.keySet().stream().mapToInt(String::length).max().orElse(0);
+        rows.forEach((name, tally) -> out.printf(Locale.ROOT, "  %-" + width + "s  %5d mutants  %s%n", name, tally.all(),
+                tally.score().isPresent() ? String.format(Locale.ROOT, "score %.2f", tally.score().getAsDouble()) : "—"));
+    }
+}

@@ -1,0 +1,30 @@
+package dev.changeling.run;
+
+import dev.changeling.results.MutantResult;
+
+/** What a run tells as it goes: a line per phase, then each mutant as it finishes. */
+public interface RunListener {
+
+    /** A phase finished; {@code line} says what it found, e.g. "baseline: 38 tests green in 0.4 s". */
+    void phase(String line);
+
+    /** Mutants are about to run. */
+    void running(int mutants);
+
+    /** One mutant has its verdict. */
+    void finished(MutantResult result);
+
+    RunListener SILENT = new RunListener() {
+        @Override
+        public void phase(String line) {
+        }
+
+        @Override
+        public void running(int mutants) {
+        }
+
+        @Override
+        public void finished(MutantResult result) {
+        }
+    };
+}
