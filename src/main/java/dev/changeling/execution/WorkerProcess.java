@@ -185,8 +185,9 @@ final class WorkerProcess {
                 String className = Wire.readString(in);
                 TestStatus status = TestStatus.fromWire(in.readByte());
                 long nanos = in.readLong();
+                long aloneNanos = in.readLong();
                 String message = Wire.readString(in);
-                tests.add(new RecordedTest(id, name, className, status, message, nanos, Wire.readInts(in)));
+                tests.add(new RecordedTest(id, name, className, status, message, nanos, aloneNanos, Wire.readInts(in)));
             }
             List<FailedContainer> containers = new ArrayList<>();
             for (int count = in.readInt(); count > 0; count--) {

@@ -95,6 +95,15 @@ final class Suite {
                 || node.getParentId().isPresent() && uniqueId.startsWith(node.getUniqueId() + "/")) > 0;
     }
 
+    /**
+     * Loads the engines and runs an empty request, so that a fresh worker's first mutant does not pay for
+     * that inside its deadline.
+     */
+    void warmUp() {
+        TestPlan empty = launcher().discover(LauncherDiscoveryRequestBuilder.request().configurationParameter(PARALLEL, "false").build());
+        launcher().execute(empty);
+    }
+
     private Launcher launcher() {
         if (launcher == null) {
             launcher = LauncherFactory.create();

@@ -116,6 +116,12 @@ class WorkerPoolTest {
         }
 
         @Test
+        void countsTheClassSetupInTheCostOfRunningATestAlone() {
+            RecordedTest first = test(method("SetupTest", "first"));
+            assertTrue(first.aloneNanos() > first.nanos(), first::toString);
+        }
+
+        @Test
         void givesPointsReachedInClassSetupToEveryTestOfTheClass() {
             assertArrayEquals(new int[] {5}, test(method("SetupTest", "first")).reached());
             assertArrayEquals(new int[] {5}, test(method("SetupTest", "second")).reached());
