@@ -44,6 +44,8 @@ final class WorkerProcess {
     }
 
     private static final int TAIL_BYTES = 8192;
+    private static final int TAIL_LINES = 3;
+    private static final int TAIL_CHARACTERS = 400;
 
     private final Process process;
     private final ServerSocket server;
@@ -329,27 +331,28 @@ final class WorkerProcess {
         if (wasKilled) {
             return new Lost(false, "the worker JVM was stopped");
         }
-        String last = lastLine(logMark);
+        String last = lastLines(logMark);
         return new Lost(false, last.isEmpty() ? how : how + "; last output: " + last);
     }
 
-    private String lastLine(long from) {
+    /** The last few lines the worker printed since {@code from}, joined: the JVM's own last words often take three. */
+    private String lastLines(long from) {
         try (RandomAccessFile file = new RandomAccessFile(log.toFile(), "r")) {
             long start = Math.max(from, file.length() - TAIL_BYTES);
-            byte[] bytes = new byte[(int) (file.length() - start)];
+            byte[] bytes = new byte[(int) Math.max(0, file.length() - start)];
             file.seek(start);
             file.readFully(bytes);
-            String[] lines = new String(bytes, StandardCharsets.UTF_8).split("\\R");
-            for (int i = lines.length - 1; i >= 0; i--) {
-                String line = lines[i].strip();
-                if (!line.isEmpty()) {
-                    return line.length() <= 300 ? line : line.substring(0, 299) + "…";
+            List<String> lines = new ArrayList<>();
+            for (String line : new String(bytes, StandardCharsets.UTF_8).split("\\R")) {
+                if (!line.isBlank()) {
+                    lines.add(line.strip());
                 }
             }
+            String text = String.join(" / ", lines.subList(Math.max(0, lines.size() - TAIL_LINES), lines.size()));
+            return text.length() <= TAIL_CHARACTERS ? text : "…" + text.substring(text.length() - TAIL_CHARACTERS + 1);
         } catch (IOException ignored) {
-            // no output to show
+            return "";
         }
-        return "";
     }
 
     private long logSize() {

@@ -148,6 +148,7 @@ class WorkerPoolTest {
         @Test
         void leavesOutClassesTheDefaultPatternsDoNotName() {
             assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("PriceChecks")));
+            assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("StaticInnerTest")));
             assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("TaggedTest")));
         }
 
@@ -379,6 +380,8 @@ class WorkerPoolTest {
                 assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("HostileTest")));
                 assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("TaggedTest")));
                 assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("PriceChecks")));
+                assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("StaticInnerTest")));
+                assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("[nested-class:WhenEmpty]")), baseline.tests()::toString);
                 assertArrayEquals(new int[] {7}, baseline.test(method("RatesTest", "hasABase")).reached());
                 assertArrayEquals(new int[0], baseline.reachedWhileInitialising());
             }
@@ -464,6 +467,69 @@ class WorkerPoolTest {
                     results.stream().map(JobResult::outcome).toList());
             assertEquals(method("PricesTest", "addsTwoNumbers"), results.get(0).testId());
             assertEquals(TestStatus.MISSING, results.get(3).testsRun().get(0).status());
+        }
+    }
+
+    @Nested
+    class WhenTheToolEnds {
+
+        /** Runs {@link PoolHolder} in a JVM of its own and returns it with the pid of the worker it started. */
+        long[] holder(String mode) throws Exception {
+            List<String> command = new ArrayList<>(List.of(WorkerSettings.currentJava().toString(), "-cp",
+                    TinyProject.codeSource(WorkerPool.class) + java.io.File.pathSeparator + TinyProject.codeSource(PoolHolder.class),
+                    PoolHolder.class.getName(), mode, project.root.toString(), project.testClasses.toString(),
+                    project.root.resolve("target/changeling/holder-" + mode).toString(), method("PricesTest", "addsZero")));
+            project.classpath().forEach(entry -> command.add(entry.toString()));
+            Process holder = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.DISCARD).start();
+            String line = new java.io.BufferedReader(new java.io.InputStreamReader(holder.getInputStream())).readLine();
+            assertTrue(line != null, "the holder printed no worker pid");
+            return new long[] {holder.pid(), Long.parseLong(line.strip())};
+        }
+
+        static void assertGone(long pid) throws Exception {
+            java.util.Optional<ProcessHandle> worker = ProcessHandle.of(pid);
+            if (worker.isPresent()) {
+                worker.get().onExit().get(60, java.util.concurrent.TimeUnit.SECONDS);
+            }
+            assertFalse(ProcessHandle.of(pid).map(ProcessHandle::isAlive).orElse(false), "worker " + pid + " outlived the tool");
+        }
+
+        @Test
+        void exitingWithoutClosingThePool_killsTheWorkersOnShutdown() throws Exception {
+            long[] pids = holder("exit");
+            ProcessHandle.of(pids[0]).ifPresent(tool -> tool.onExit().join());
+            assertGone(pids[1]);
+        }
+
+        @Test
+        void aToolKilledOutright_isNoticedByTheWorkerItself() throws Exception {
+            long[] pids = holder("wait");
+            ProcessHandle tool = ProcessHandle.of(pids[0]).orElseThrow();
+            tool.destroyForcibly();
+            tool.onExit().join();
+            assertGone(pids[1]);
+        }
+    }
+
+    @Nested
+    class StartFailures {
+
+        @Test
+        void aJavaThatIsNotThere_isAUserError() {
+            try (WorkerPool pool = WorkerPool.open(settings("no-java").withJavaExecutable(project.root.resolve("no/such/java")), setup())) {
+                dev.changeling.UserError error = assertThrows(dev.changeling.UserError.class,
+                        () -> pool.run(List.of(job("a", 0, method("PricesTest", "addsZero"))), result -> { }));
+                assertTrue(error.getMessage().startsWith("cannot start a worker JVM with "), error.getMessage());
+            }
+        }
+
+        @Test
+        void aJvmThatDiesAtOnce_isAUserErrorThatShowsItsLastWords() {
+            try (WorkerPool pool = WorkerPool.open(settings("bad-option").withJvmArguments(List.of("-XX:+NoSuchOptionAnywhere")), setup())) {
+                dev.changeling.UserError error = assertThrows(dev.changeling.UserError.class, () -> pool.baseline(name -> { }));
+                assertTrue(error.getMessage().contains("exited with code 1"), error.getMessage());
+                assertTrue(error.getMessage().contains("NoSuchOptionAnywhere"), error.getMessage());
+            }
         }
     }
 }
