@@ -34,10 +34,6 @@ final class Reaper {
         WORKERS.remove(worker);
     }
 
-    static int liveWorkers() {
-        return WORKERS.size();
-    }
-
     private static synchronized void hook() {
         if (!hooked) {
             try {

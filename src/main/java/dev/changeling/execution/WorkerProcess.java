@@ -136,7 +136,8 @@ final class WorkerProcess {
             in.readLong();
             if (hello != Wire.HELLO || version != Wire.VERSION || !token.equals(answer)) {
                 kill();
-                throw new IllegalStateException("a worker answered with protocol " + version + " (expected " + Wire.VERSION + ")");
+                throw new IllegalStateException("the process that answered is not this tool's worker, or speaks protocol " + version
+                        + " instead of " + Wire.VERSION);
             }
         } catch (SocketTimeoutException e) {
             kill();
@@ -281,18 +282,6 @@ final class WorkerProcess {
             // a process that will not die within seconds is left to the operating system
         }
         Reaper.forget(this);
-    }
-
-    boolean alive() {
-        return !killed && process.isAlive();
-    }
-
-    long pid() {
-        return process.pid();
-    }
-
-    ProcessHandle handle() {
-        return process.toHandle();
     }
 
     /** Reads the next message code, waiting no longer than the deadline; a worker's failure report is thrown. */
