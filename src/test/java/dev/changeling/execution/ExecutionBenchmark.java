@@ -10,7 +10,11 @@ import java.util.stream.Stream;
 
 /**
  * Prints what running mutants costs on the small project of the tests: starting a worker, the baseline,
- * and one job in a warm worker. Not a test; run it as described in DEVELOPERS.md.
+ * and one job in a warm worker. Not a test. Run it with
+ * <pre>
+ * mvn -q -o test-compile dependency:build-classpath -Dmdep.outputFile=target/test.cp -Dmdep.includeScope=test
+ * java -cp target/classes:target/test-classes:$(cat target/test.cp) dev.changeling.execution.ExecutionBenchmark [jobs]
+ * </pre>
  */
 public final class ExecutionBenchmark {
 
