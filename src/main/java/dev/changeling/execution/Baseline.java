@@ -84,8 +84,8 @@ public final class Baseline {
     }
 
     /**
-     * The passing tests that reach any of the points, fastest first (ties by id), the order that tends
-     * to find a killing test soonest.
+     * The passing tests that reach any of the points, cheapest to run alone first (ties by id), the order
+     * that tends to find a killing test soonest.
      */
     public List<String> testsFor(int... points) {
         BitSet reaching = new BitSet();
@@ -97,16 +97,16 @@ public final class Baseline {
         }
         List<RecordedTest> passing = new ArrayList<>();
         reaching.stream().mapToObj(tests::get).filter(test -> test.status() == TestStatus.PASSED).forEach(passing::add);
-        passing.sort(Comparator.comparingLong(RecordedTest::nanos).thenComparing(RecordedTest::id));
+        passing.sort(Comparator.comparingLong(RecordedTest::aloneNanos).thenComparing(RecordedTest::id));
         return passing.stream().map(RecordedTest::id).toList();
     }
 
-    /** The sum of the baseline times of the given tests; an unknown id counts as zero. */
+    /** What running the given tests one at a time costs by the baseline ({@link RecordedTest#aloneNanos}); an unknown id counts as zero. */
     public long nanosOf(List<String> testIds) {
         long sum = 0;
         for (String id : testIds) {
             RecordedTest test = byId.get(id);
-            sum += test == null ? 0 : test.nanos();
+            sum += test == null ? 0 : test.aloneNanos();
         }
         return sum;
     }

@@ -11,14 +11,15 @@ import java.util.List;
 public record Deadlines(double factor, long constantMillis) {
 
     /**
-     * Factor 3: the baseline ran in one warm worker alone, while mutants share the cores with the other
-     * workers and some run in a freshly started one that has not been through the JIT yet. Constant
-     * 2 s: each test is discovered and run on its own, so it pays its class setup again, and a fresh
-     * worker loads the engine and the test classes first; a garbage-collection pause must not turn into a
-     * timeout either. Both lean long: a deadline set too short reports a false "timed out" (counted as
-     * detected), while one set too long only costs time on the rare mutant that really loops.
+     * Factor 3: the baseline ran in one worker alone, while mutants share the cores with the other
+     * workers (and, on a build server, with other jobs). Constant 3 s: the first mutant in a fresh
+     * worker loads the test classes and runs them before the JIT has caught up — measured at 0.3–0.8 s
+     * for one trivial test on a busy 2-core machine — and a garbage-collection pause must not become a
+     * timeout either. Both lean long on purpose: a deadline set too short reports a false "timed out",
+     * counted as detected, which hides a survivor; one set too long only costs time on the rare mutant
+     * that really loops.
      */
-    public static final Deadlines DEFAULT = new Deadlines(3.0, 2_000);
+    public static final Deadlines DEFAULT = new Deadlines(3.0, 3_000);
 
     public Deadlines {
         if (!(factor >= 1) || Double.isInfinite(factor)) {
@@ -34,7 +35,7 @@ public record Deadlines(double factor, long constantMillis) {
         return Math.max(1, constantMillis + (long) Math.ceil(factor * baselineNanos / 1_000_000.0));
     }
 
-    /** The deadline for running these tests, from their baseline times. */
+    /** The deadline for running these tests one at a time, from what each cost alone in the baseline. */
     public long millisFor(List<String> testIds, Baseline baseline) {
         return millisFor(baseline.nanosOf(testIds));
     }

@@ -38,6 +38,13 @@ final class DefaultWorkerPool implements WorkerPool {
 
     @Override
     public synchronized List<JobResult> run(List<MutantJob> jobs, Consumer<JobResult> onResult) {
+        for (MutantJob job : jobs) {
+            for (int point : job.points()) {
+                if (point < 0 || point >= setup.pointCount()) {
+                    throw new IllegalArgumentException(job.key() + " switches on point " + point + ", outside 0.." + (setup.pointCount() - 1));
+                }
+            }
+        }
         JobResult[] results = new JobResult[jobs.size()];
         AtomicInteger next = new AtomicInteger();
         AtomicReference<RuntimeException> failure = new AtomicReference<>();

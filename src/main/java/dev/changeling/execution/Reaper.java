@@ -34,13 +34,13 @@ final class Reaper {
         WORKERS.remove(worker);
     }
 
-    static int liveWorkers() {
-        return WORKERS.size();
-    }
-
     private static synchronized void hook() {
         if (!hooked) {
-            Runtime.getRuntime().addShutdownHook(new Thread(Reaper::reap, "changeling-worker-reaper"));
+            try {
+                Runtime.getRuntime().addShutdownHook(new Thread(Reaper::reap, "changeling-worker-reaper"));
+            } catch (IllegalStateException shuttingDown) {
+                // too late for a hook; whoever is shutting down kills the pools it knows
+            }
             hooked = true;
         }
     }

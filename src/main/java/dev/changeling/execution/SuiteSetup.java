@@ -22,6 +22,11 @@ public record SuiteSetup(int pointCount, List<String> preinitialise, List<Path> 
 
     /** The test classes a Maven build runs when it is not told otherwise (its test plugin's defaults). */
     public static final List<String> DEFAULT_INCLUDES = List.of("Test*", "*Test", "*Tests", "*TestCase");
+    /**
+     * Likewise left out by default: nested classes found on their own. JUnit Jupiter's {@code @Nested}
+     * classes still run, found through the class that encloses them.
+     */
+    public static final List<String> DEFAULT_EXCLUDES = List.of("*$*");
 
     public SuiteSetup {
         if (pointCount < 0) {
@@ -38,7 +43,7 @@ public record SuiteSetup(int pointCount, List<String> preinitialise, List<Path> 
 
     /** The default test classes below the given roots, nothing pre-initialised. */
     public static SuiteSetup of(int pointCount, List<Path> testRoots) {
-        return new SuiteSetup(pointCount, List.of(), testRoots, DEFAULT_INCLUDES, List.of(), List.of());
+        return new SuiteSetup(pointCount, List.of(), testRoots, DEFAULT_INCLUDES, DEFAULT_EXCLUDES, List.of());
     }
 
     public SuiteSetup withPreinitialise(List<String> classNames) {

@@ -44,6 +44,8 @@ final class WorkerProcess {
     }
 
     private static final int TAIL_BYTES = 8192;
+    private static final int TAIL_LINES = 3;
+    private static final int TAIL_CHARACTERS = 400;
 
     private final Process process;
     private final ServerSocket server;
@@ -134,7 +136,8 @@ final class WorkerProcess {
             in.readLong();
             if (hello != Wire.HELLO || version != Wire.VERSION || !token.equals(answer)) {
                 kill();
-                throw new IllegalStateException("a worker answered with protocol " + version + " (expected " + Wire.VERSION + ")");
+                throw new IllegalStateException("the process that answered is not this tool's worker, or speaks protocol " + version
+                        + " instead of " + Wire.VERSION);
             }
         } catch (SocketTimeoutException e) {
             kill();
@@ -185,8 +188,9 @@ final class WorkerProcess {
                 String className = Wire.readString(in);
                 TestStatus status = TestStatus.fromWire(in.readByte());
                 long nanos = in.readLong();
+                long aloneNanos = in.readLong();
                 String message = Wire.readString(in);
-                tests.add(new RecordedTest(id, name, className, status, message, nanos, Wire.readInts(in)));
+                tests.add(new RecordedTest(id, name, className, status, message, nanos, aloneNanos, Wire.readInts(in)));
             }
             List<FailedContainer> containers = new ArrayList<>();
             for (int count = in.readInt(); count > 0; count--) {
@@ -280,18 +284,6 @@ final class WorkerProcess {
         Reaper.forget(this);
     }
 
-    boolean alive() {
-        return !killed && process.isAlive();
-    }
-
-    long pid() {
-        return process.pid();
-    }
-
-    ProcessHandle handle() {
-        return process.toHandle();
-    }
-
     /** Reads the next message code, waiting no longer than the deadline; a worker's failure report is thrown. */
     private byte next(long deadlineNanos) throws IOException {
         if (in.available() == 0) {
@@ -328,27 +320,28 @@ final class WorkerProcess {
         if (wasKilled) {
             return new Lost(false, "the worker JVM was stopped");
         }
-        String last = lastLine(logMark);
+        String last = lastLines(logMark);
         return new Lost(false, last.isEmpty() ? how : how + "; last output: " + last);
     }
 
-    private String lastLine(long from) {
+    /** The last few lines the worker printed since {@code from}, joined: the JVM's own last words often take three. */
+    private String lastLines(long from) {
         try (RandomAccessFile file = new RandomAccessFile(log.toFile(), "r")) {
             long start = Math.max(from, file.length() - TAIL_BYTES);
-            byte[] bytes = new byte[(int) (file.length() - start)];
+            byte[] bytes = new byte[(int) Math.max(0, file.length() - start)];
             file.seek(start);
             file.readFully(bytes);
-            String[] lines = new String(bytes, StandardCharsets.UTF_8).split("\\R");
-            for (int i = lines.length - 1; i >= 0; i--) {
-                String line = lines[i].strip();
-                if (!line.isEmpty()) {
-                    return line.length() <= 300 ? line : line.substring(0, 299) + "…";
+            List<String> lines = new ArrayList<>();
+            for (String line : new String(bytes, StandardCharsets.UTF_8).split("\\R")) {
+                if (!line.isBlank()) {
+                    lines.add(line.strip());
                 }
             }
+            String text = String.join(" / ", lines.subList(Math.max(0, lines.size() - TAIL_LINES), lines.size()));
+            return text.length() <= TAIL_CHARACTERS ? text : "…" + text.substring(text.length() - TAIL_CHARACTERS + 1);
         } catch (IOException ignored) {
-            // no output to show
+            return "";
         }
-        return "";
     }
 
     private long logSize() {

@@ -26,8 +26,12 @@ public record WorkerSettings(Path projectDirectory, List<Path> classpath, Path w
                              Path javaExecutable, Duration startTimeout, Duration baselineTimeout) {
 
     public static final String DEFAULT_MAX_HEAP = "2g";
-    /** A JVM start costs well under a second; against a hundred mutants that is little, and it bounds the damage a leaky test does. */
-    public static final int DEFAULT_MUTANTS_PER_WORKER = 100;
+    /**
+     * A fresh worker costs 0.5–2 s (start, class initialisation, a cold JIT) against a few milliseconds
+     * per mutant in a warm one, so replacing it often is dear; after 500 mutants that is a few percent,
+     * and memory a leaky suite piles up per run, or threads it leaves behind, stay bounded.
+     */
+    public static final int DEFAULT_MUTANTS_PER_WORKER = 500;
 
     public WorkerSettings {
         Objects.requireNonNull(projectDirectory, "projectDirectory");

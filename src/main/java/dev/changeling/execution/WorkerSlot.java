@@ -44,6 +44,10 @@ final class WorkerSlot {
         ensureWorker();
         try {
             return worker.baseline(prepared, onTestFinished, settings.baselineTimeout().toMillis());
+        } catch (RuntimeException e) {
+            // The conversation broke off in the middle (a listener threw, the worker said something odd).
+            retire();
+            throw e;
         } catch (WorkerProcess.Lost lost) {
             retire();
             pool.throwIfStopped();
@@ -57,7 +61,13 @@ final class WorkerSlot {
             return executeAlone(job);
         }
         ensureWorker();
-        JobResult result = worker.run(job);
+        JobResult result;
+        try {
+            result = worker.run(job);
+        } catch (RuntimeException e) {
+            retire();
+            throw e;
+        }
         mutantsOnWorker++;
         if (result.outcome() == Outcome.TIMED_OUT || result.outcome() == Outcome.CRASHED) {
             retire();

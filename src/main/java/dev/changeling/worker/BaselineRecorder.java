@@ -22,7 +22,8 @@ import org.junit.platform.launcher.TestIdentifier;
 import org.junit.platform.launcher.TestPlan;
 
 /**
- * Records the unmutated suite: each test's result and time, and the mutation points it reached. Points
+ * Records the unmutated suite: each test's result and time (alone, and with what its containers cost
+ * on their own), and the mutation points it reached. Points
  * reached while a container runs (class setup, {@code @BeforeAll}) count for every test inside it, and
  * points reached outside any test or container count for all tests.
  */
@@ -39,6 +40,8 @@ final class BaselineRecorder implements TestExecutionListener {
     private final Map<String, List<int[]>> reachedByNode = new HashMap<>();
     private final List<int[]> reachedOutside = new ArrayList<>();
     private final Map<String, Long> startedAt = new HashMap<>();
+    private final Map<String, Long> durations = new HashMap<>();
+    private final Map<String, Long> childrenDurations = new HashMap<>();
     private final Map<String, Finished> tests = new LinkedHashMap<>();
     private final List<FailedContainer> failedContainers = new ArrayList<>();
     private TestPlan plan;
@@ -84,6 +87,8 @@ final class BaselineRecorder implements TestExecutionListener {
         String id = identifier.getUniqueId();
         running.remove(id);
         long nanos = System.nanoTime() - startedAt.getOrDefault(id, System.nanoTime());
+        durations.put(id, nanos);
+        identifier.getParentId().ifPresent(parent -> childrenDurations.merge(parent, nanos, Long::sum));
         String message = result.getThrowable().map(Failures::describe).orElse(null);
         if (identifier.isTest()) {
             tests.put(id, new Finished(identifier, status(result), nanos, message));
@@ -103,6 +108,7 @@ final class BaselineRecorder implements TestExecutionListener {
             Wire.writeString(out, className(test.identifier()));
             out.writeByte(test.status());
             out.writeLong(test.nanos());
+            out.writeLong(test.nanos() + containerOverhead(test.identifier()));
             Wire.writeString(out, test.message());
             union.clear();
             reachOf(test.identifier(), union);
@@ -145,6 +151,21 @@ final class BaselineRecorder implements TestExecutionListener {
             }
             node = plan.getParent(node.get());
         }
+    }
+
+    /**
+     * The time the test's containers spend on their own (class setup and teardown, engine start), which
+     * running the test alone pays again in full.
+     */
+    private long containerOverhead(TestIdentifier test) {
+        long overhead = 0;
+        Optional<TestIdentifier> container = plan.getParent(test);
+        while (container.isPresent()) {
+            String id = container.get().getUniqueId();
+            overhead += Math.max(0, durations.getOrDefault(id, 0L) - childrenDurations.getOrDefault(id, 0L));
+            container = plan.getParent(container.get());
+        }
+        return overhead;
     }
 
     private static void add(int[] chunk, BitSet union) {

@@ -57,6 +57,7 @@ final class Session {
         List<String> excludes = Wire.readStrings(in);
         List<String> excludedTags = Wire.readStrings(in);
         suite = new Suite(testRoots, includes, excludes, excludedTags);
+        suite.warmUp();
         Probe.prepare(points);
         Probe.record(true);
         List<String> failures = ClassWarmer.initialise(preinitialise);

@@ -11,16 +11,25 @@ import java.nio.file.Path;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 import org.junit.platform.engine.discovery.ClassNameFilter;
 import org.junit.platform.launcher.Launcher;
 import org.junit.platform.launcher.LauncherDiscoveryRequest;
 import org.junit.platform.launcher.TagFilter;
+import org.junit.platform.launcher.TestIdentifier;
 import org.junit.platform.launcher.TestPlan;
 import org.junit.platform.launcher.core.LauncherDiscoveryRequestBuilder;
 import org.junit.platform.launcher.core.LauncherFactory;
 
 /** The project's test suite as this worker sees it: which tests the baseline finds, and running one of them. */
 final class Suite {
+
+    /**
+     * Discovery notices (an engine's deprecation, say) are logged once in the baseline; repeated for every
+     * single test run they would fill the worker's log. Held here, as the logging system keeps loggers weakly.
+     */
+    private static final Logger LAUNCHER_LOG = Logger.getLogger("org.junit.platform.launcher.core");
 
     /** Reach is attributed to whichever test is running, so tests must run one after another. */
     private static final String PARALLEL = "junit.jupiter.execution.parallel.enabled";
@@ -63,6 +72,7 @@ final class Suite {
     }
 
     SingleTestRun.Result runOne(String uniqueId) {
+        LAUNCHER_LOG.setLevel(Level.WARNING);
         LauncherDiscoveryRequest request = LauncherDiscoveryRequestBuilder.request()
                 .selectors(selectUniqueId(uniqueId))
                 .configurationParameter(PARALLEL, "false")
@@ -86,13 +96,26 @@ final class Suite {
     }
 
     /**
-     * Whether the plan has the test, or a container below the engine that may yet register it (parameterised
-     * and dynamic tests appear only while they run). An id that selects nothing is not run at all: the
-     * engine could report that as its own failure, which must not count as a kill.
+     * Whether the plan has the test, or has no test at all but a container below the engine that may yet
+     * register it (parameterised and dynamic tests appear only while they run). An id that selects
+     * nothing is not run: engines report that as a failure of their own (a stand-in test, a failed
+     * engine), which must not count as a kill.
      */
     private static boolean mayHold(TestPlan plan, String uniqueId) {
-        return plan.countTestIdentifiers(node -> uniqueId.equals(node.getUniqueId())
-                || node.getParentId().isPresent() && uniqueId.startsWith(node.getUniqueId() + "/")) > 0;
+        if (plan.countTestIdentifiers(node -> uniqueId.equals(node.getUniqueId())) > 0) {
+            return true;
+        }
+        return plan.countTestIdentifiers(TestIdentifier::isTest) == 0
+                && plan.countTestIdentifiers(node -> node.getParentId().isPresent() && uniqueId.startsWith(node.getUniqueId() + "/")) > 0;
+    }
+
+    /**
+     * Loads the engines and runs an empty request, so that a fresh worker's first mutant does not pay for
+     * that inside its deadline.
+     */
+    void warmUp() {
+        TestPlan empty = launcher().discover(LauncherDiscoveryRequestBuilder.request().configurationParameter(PARALLEL, "false").build());
+        launcher().execute(empty);
     }
 
     private Launcher launcher() {

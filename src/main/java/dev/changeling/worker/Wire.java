@@ -17,7 +17,7 @@ import java.util.List;
  *                   reply    PREPARED reachedWhileInitialising:ints failures:strs
  * tool -> worker  BASELINE
  *                   reply    PROGRESS name:str (once per finished test) ... then
- *                            BASELINE_DONE n:int {id name className:str status:byte nanos:long message:str reached:ints}*n
+ *                            BASELINE_DONE n:int {id name className:str status:byte nanos aloneNanos:long message:str reached:ints}*n
  *                                          m:int {id name message:str}*m   (failed containers)
  * tool -> worker  RUN        points:ints tests:strs
  *                   reply    TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE

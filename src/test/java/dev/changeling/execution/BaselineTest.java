@@ -10,8 +10,9 @@ import org.junit.jupiter.api.Test;
 
 class BaselineTest {
 
-    static RecordedTest test(String id, TestStatus status, long nanos, int... reached) {
-        return new RecordedTest(id, id, null, status, null, nanos, reached);
+    /** A test whose own time is a tenth of what running it alone costs. */
+    static RecordedTest test(String id, TestStatus status, long aloneNanos, int... reached) {
+        return new RecordedTest(id, id, null, status, null, aloneNanos / 10, aloneNanos, reached);
     }
 
     static final Baseline SUITE = new Baseline(List.of(
@@ -30,6 +31,16 @@ class BaselineTest {
         void takesEveryPassingTestThatReachesAnyPoint_fastestFirst_tiesById() {
             assertEquals(List.of("fast", "tie-a", "tie-b"), SUITE.testsFor(3));
             assertEquals(List.of("fast", "slow"), SUITE.testsFor(1, 2));
+        }
+
+        @Test
+        void ordersByTheCostOfRunningAlone_notByTheTestsOwnTime() {
+            Baseline baseline = new Baseline(List.of(
+                    new RecordedTest("quick-with-slow-setup", "q", null, TestStatus.PASSED, null, 10, 5_000, new int[] {1}),
+                    new RecordedTest("plain", "p", null, TestStatus.PASSED, null, 100, 100, new int[] {1})),
+                    List.of(), new int[0], List.of(), 0);
+            assertEquals(List.of("plain", "quick-with-slow-setup"), baseline.testsFor(1));
+            assertEquals(5_100, baseline.nanosOf(List.of("plain", "quick-with-slow-setup")));
         }
 
         @Test

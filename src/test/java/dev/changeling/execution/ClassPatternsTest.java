@@ -35,6 +35,13 @@ class ClassPatternsTest {
             assertFalse(matches("Test*", "shop.PricesTest"));
         }
 
+        // Maven's test plugin also leaves out **/*$* by default (same documentation, "excludes"; from memory).
+        @Test
+        void theDefaultExcludeMatchesNestedClassesOnly() {
+            assertTrue(matches("*$*", "shop.RatesTest$StaticInnerTest"));
+            assertFalse(matches("*$*", "shop.RatesTest"));
+        }
+
         @Test
         void lookAtTheSimpleNameOnly() {
             assertFalse(matches("Test*", "tests.shop.Prices"));

@@ -28,10 +28,10 @@ class DeadlinesTest {
         }
 
         @Test
-        void addsTheBaselineTimesOfTheTestsRun() {
+        void addsWhatEachTestRunCostsAloneInTheBaseline() {
             Baseline baseline = new Baseline(List.of(
-                    new RecordedTest("a", "A", null, TestStatus.PASSED, null, 100_000_000L, new int[0]),
-                    new RecordedTest("b", "B", null, TestStatus.PASSED, null, 300_000_000L, new int[0])),
+                    new RecordedTest("a", "A", null, TestStatus.PASSED, null, 1, 100_000_000L, new int[0]),
+                    new RecordedTest("b", "B", null, TestStatus.PASSED, null, 1, 300_000_000L, new int[0])),
                     List.of(), new int[0], List.of(), 0);
             assertEquals(500 + 2 * 400, new Deadlines(2, 500).millisFor(List.of("a", "b", "unknown"), baseline));
         }

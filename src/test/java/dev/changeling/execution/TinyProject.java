@@ -154,6 +154,9 @@ final class TinyProject {
 
                     class RatesTest {
                         @Test void hasABase() { assertEquals(100, Rates.base()); }
+                        static class StaticInnerTest {
+                            @Test void isLeftOutLikeMavenLeavesItOut() { }
+                        }
                     }
                     """),
             Map.entry("shop/TaggedTest.java", """

@@ -116,6 +116,12 @@ class WorkerPoolTest {
         }
 
         @Test
+        void countsTheClassSetupInTheCostOfRunningATestAlone() {
+            RecordedTest first = test(method("SetupTest", "first"));
+            assertTrue(first.aloneNanos() > first.nanos(), first::toString);
+        }
+
+        @Test
         void givesPointsReachedInClassSetupToEveryTestOfTheClass() {
             assertArrayEquals(new int[] {5}, test(method("SetupTest", "first")).reached());
             assertArrayEquals(new int[] {5}, test(method("SetupTest", "second")).reached());
@@ -142,6 +148,7 @@ class WorkerPoolTest {
         @Test
         void leavesOutClassesTheDefaultPatternsDoNotName() {
             assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("PriceChecks")));
+            assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("StaticInnerTest")));
             assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("TaggedTest")));
         }
 
@@ -373,6 +380,8 @@ class WorkerPoolTest {
                 assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("HostileTest")));
                 assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("TaggedTest")));
                 assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("PriceChecks")));
+                assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("StaticInnerTest")));
+                assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("[nested-class:WhenEmpty]")), baseline.tests()::toString);
                 assertArrayEquals(new int[] {7}, baseline.test(method("RatesTest", "hasABase")).reached());
                 assertArrayEquals(new int[0], baseline.reachedWhileInitialising());
             }
@@ -420,7 +429,7 @@ class WorkerPoolTest {
 
         @BeforeAll
         void runTheBaseline() {
-            List<Path> jars = LegacyJUnit.jars();
+            List<Path> jars = MavenJars.resolve(MavenJars.PLATFORM_1_10);
             assumeTrue(jars != null, "JUnit Platform 1.10.2 is neither in the local Maven repository nor to be fetched with mvn");
             List<Path> classpath = new ArrayList<>(List.of(project.testClasses, project.classes));
             classpath.addAll(jars);
@@ -458,6 +467,158 @@ class WorkerPoolTest {
                     results.stream().map(JobResult::outcome).toList());
             assertEquals(method("PricesTest", "addsTwoNumbers"), results.get(0).testId());
             assertEquals(TestStatus.MISSING, results.get(3).testsRun().get(0).status());
+        }
+    }
+
+    @Nested
+    class WhenTheToolEnds {
+
+        /** Runs {@link PoolHolder} in a JVM of its own and returns it with the pid of the worker it started. */
+        long[] holder(String mode) throws Exception {
+            List<String> command = new ArrayList<>(List.of(WorkerSettings.currentJava().toString(), "-cp",
+                    TinyProject.codeSource(WorkerPool.class) + java.io.File.pathSeparator + TinyProject.codeSource(PoolHolder.class),
+                    PoolHolder.class.getName(), mode, project.root.toString(), project.testClasses.toString(),
+                    project.root.resolve("target/changeling/holder-" + mode).toString(), method("PricesTest", "addsZero")));
+            project.classpath().forEach(entry -> command.add(entry.toString()));
+            Process holder = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.DISCARD).start();
+            String line = new java.io.BufferedReader(new java.io.InputStreamReader(holder.getInputStream())).readLine();
+            assertTrue(line != null, "the holder printed no worker pid");
+            return new long[] {holder.pid(), Long.parseLong(line.strip())};
+        }
+
+        static void assertGone(long pid) throws Exception {
+            java.util.Optional<ProcessHandle> worker = ProcessHandle.of(pid);
+            if (worker.isPresent()) {
+                worker.get().onExit().get(60, java.util.concurrent.TimeUnit.SECONDS);
+            }
+            assertFalse(ProcessHandle.of(pid).map(ProcessHandle::isAlive).orElse(false), "worker " + pid + " outlived the tool");
+        }
+
+        @Test
+        void exitingWithoutClosingThePool_killsTheWorkersOnShutdown() throws Exception {
+            long[] pids = holder("exit");
+            ProcessHandle.of(pids[0]).ifPresent(tool -> tool.onExit().join());
+            assertGone(pids[1]);
+        }
+
+        @Test
+        void aToolKilledOutright_isNoticedByTheWorkerItself() throws Exception {
+            long[] pids = holder("wait");
+            ProcessHandle tool = ProcessHandle.of(pids[0]).orElseThrow();
+            tool.destroyForcibly();
+            tool.onExit().join();
+            assertGone(pids[1]);
+        }
+    }
+
+    @Nested
+    class StartFailures {
+
+        @Test
+        void aJavaThatIsNotThere_isAUserError() {
+            try (WorkerPool pool = WorkerPool.open(settings("no-java").withJavaExecutable(project.root.resolve("no/such/java")), setup())) {
+                dev.changeling.UserError error = assertThrows(dev.changeling.UserError.class,
+                        () -> pool.run(List.of(job("a", 0, method("PricesTest", "addsZero"))), result -> { }));
+                assertTrue(error.getMessage().startsWith("cannot start a worker JVM with "), error.getMessage());
+            }
+        }
+
+        @Test
+        void aJvmThatDiesAtOnce_isAUserErrorThatShowsItsLastWords() {
+            try (WorkerPool pool = WorkerPool.open(settings("bad-option").withJvmArguments(List.of("-XX:+NoSuchOptionAnywhere")), setup())) {
+                dev.changeling.UserError error = assertThrows(dev.changeling.UserError.class, () -> pool.baseline(name -> { }));
+                assertTrue(error.getMessage().contains("exited with code 1"), error.getMessage());
+                assertTrue(error.getMessage().contains("NoSuchOptionAnywhere"), error.getMessage());
+            }
+        }
+    }
+
+    /** JUnit 4 tests, run through the vintage engine. */
+    @Nested
+    @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+    class OnJUnit4 {
+
+        static final String TESTS = """
+                package shop;
+
+                import static org.junit.Assert.assertEquals;
+
+                import org.junit.BeforeClass;
+                import org.junit.Ignore;
+                import org.junit.Test;
+
+                public class LegacyPricesTest {
+                    static int value;
+                    @BeforeClass public static void setUp() {
+                        value = Prices.setupValue();
+                        if (value < 0) { throw new IllegalStateException("bad setup"); }
+                    }
+                    @Test public void addsTwoNumbers() { assertEquals(5, Prices.add(2, 3)); }
+                    @Test public void addsZero() { assertEquals(2, Prices.add(2, 0)); }
+                    @Test public void readsTheSetup() { assertEquals(1, value); }
+                    @Ignore("kept for later") @Test public void ignored() { }
+                }
+                """;
+
+        WorkerPool pool;
+        Baseline baseline;
+
+        String test(String method) {
+            return "[engine:junit-vintage]/[runner:shop.LegacyPricesTest]/[test:" + method + "(shop.LegacyPricesTest)]";
+        }
+
+        @BeforeAll
+        void runTheBaseline() throws Exception {
+            List<Path> jars = MavenJars.resolve(MavenJars.JUNIT_4);
+            assumeTrue(jars != null, "JUnit 4.13.2 and its engine are neither in the local Maven repository nor to be fetched with mvn");
+            Path testClasses = project.root.resolve("target/junit4-test-classes");
+            Path source = project.root.resolve("src/junit4/shop/LegacyPricesTest.java");
+            Files.createDirectories(source.getParent());
+            Files.writeString(source, TESTS);
+            TinyProject.compile(List.of(source), List.of(jars.get(0), project.classes), testClasses);
+            List<Path> classpath = new ArrayList<>(List.of(testClasses, project.classes));
+            classpath.addAll(jars);
+            classpath.addAll(TinyProject.junitJars());
+            WorkerSettings settings = WorkerSettings.of(project.root, classpath, project.root.resolve("target/changeling/junit4"))
+                    .withWorkers(1).withMaxHeap("96m");
+            pool = WorkerPool.open(settings, SuiteSetup.of(TinyProject.POINTS, List.of(testClasses)));
+            baseline = pool.baseline(name -> { });
+        }
+
+        @AfterAll
+        void close() {
+            if (pool != null) {
+                pool.close();
+            }
+        }
+
+        @Test
+        void recordsEachTestWithItsReach_classSetupIncluded() {
+            assertTrue(baseline.green(), () -> baseline.failures() + " " + baseline.failedContainers());
+            assertArrayEquals(new int[] {0, 5}, baseline.test(test("addsTwoNumbers")).reached());
+            assertArrayEquals(new int[] {5}, baseline.test(test("readsTheSetup")).reached());
+            assertEquals(TestStatus.SKIPPED, baseline.test(test("ignored")).status());
+        }
+
+        @Test
+        void killsAtTheFirstFailure_includingAFailedClassSetup_andSkipsWhatIsNotThere() {
+            List<JobResult> results = pool.run(List.of(
+                    job("add", 0, test("addsZero"), test("addsTwoNumbers"), test("readsTheSetup")),
+                    job("setup", 5, test("readsTheSetup")),
+                    job("missing", 0, test("noSuchTest"))), result -> { });
+            assertEquals(List.of(Outcome.KILLED, Outcome.KILLED, Outcome.SURVIVED), results.stream().map(JobResult::outcome).toList(), results::toString);
+            assertEquals(test("addsTwoNumbers"), results.get(0).testId());
+            assertEquals(2, results.get(0).testsRun().size());
+            assertEquals("IllegalStateException: bad setup", results.get(1).message());
+            assertEquals(TestStatus.MISSING, results.get(2).testsRun().get(0).status());
+        }
+
+        @Test
+        void logsTheEnginesDiscoveryNoticesOnlyUntilSingleTestsRun() throws Exception {
+            pool.run(List.of(job("a", 0, test("addsZero")), job("b", 0, test("addsZero")), job("c", 0, test("addsZero"))), result -> { });
+            String log = Files.readString(project.root.resolve("target/changeling/junit4/worker-1.log"));
+            long notices = log.lines().filter(line -> line.contains("non-critical issue during test discovery")).count();
+            assertTrue(notices <= 2, () -> notices + " notices in\n" + log);
         }
     }
 }

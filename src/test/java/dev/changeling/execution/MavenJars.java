@@ -8,12 +8,13 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 
 /**
- * The jars of JUnit Platform 1.10.2 with Jupiter 5.10.2, taken from the local Maven repository and
- * fetched into it with {@code mvn dependency:get} when missing; null when they cannot be had.
+ * Jars from Maven Central for tests that need a JUnit other than the one this JVM runs: taken from the
+ * local Maven repository, fetched into it with {@code mvn dependency:get} when missing.
  */
-final class LegacyJUnit {
+final class MavenJars {
 
-    private static final List<String> ARTIFACTS = List.of(
+    /** JUnit Platform 1.10.2 with Jupiter 5.10.2, the oldest platform the worker supports. */
+    static final List<String> PLATFORM_1_10 = List.of(
             "org.junit.platform:junit-platform-launcher:1.10.2",
             "org.junit.platform:junit-platform-engine:1.10.2",
             "org.junit.platform:junit-platform-commons:1.10.2",
@@ -23,13 +24,20 @@ final class LegacyJUnit {
             "org.opentest4j:opentest4j:1.3.0",
             "org.apiguardian:apiguardian-api:1.1.2");
 
-    private LegacyJUnit() {
+    /** JUnit 4 itself and the engine that runs its tests on this JVM's platform version. */
+    static final List<String> JUNIT_4 = List.of(
+            "junit:junit:4.13.2",
+            "org.hamcrest:hamcrest-core:1.3",
+            "org.junit.vintage:junit-vintage-engine:6.1.3");
+
+    private MavenJars() {
     }
 
-    static List<Path> jars() {
+    /** The jars, or null when one of them is neither in the local repository nor to be fetched. */
+    static List<Path> resolve(List<String> artifacts) {
         Path repository = Path.of(System.getProperty("maven.repo.local", System.getProperty("user.home") + "/.m2/repository"));
         List<Path> jars = new ArrayList<>();
-        for (String artifact : ARTIFACTS) {
+        for (String artifact : artifacts) {
             Path jar = locate(repository, artifact);
             if (!Files.isRegularFile(jar) && !fetch(artifact)) {
                 return null;
