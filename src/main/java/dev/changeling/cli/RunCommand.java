@@ -46,21 +46,21 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--workers", paramLabel = "N", description = "Worker JVMs running tests at once (default: one per core).")
     Integer workers;
 
-    @Option(names = "--time-factor", paramLabel = "F", defaultValue = "3.0",
+    @Option(names = "--time-factor", paramLabel = "F",
             description = "A mutant's tests may take F times their unmutated time (default: ${DEFAULT-VALUE}) ...")
-    double timeFactor;
+    double timeFactor = Deadlines.DEFAULT.factor();
 
-    @Option(names = "--time-extra", paramLabel = "MS", defaultValue = "2000",
+    @Option(names = "--time-extra", paramLabel = "MS",
             description = "... plus this many milliseconds, before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
-    long timeExtraMillis;
+    long timeExtraMillis = Deadlines.DEFAULT.constantMillis();
 
-    @Option(names = "--worker-heap", paramLabel = "SIZE", defaultValue = WorkerSettings.DEFAULT_MAX_HEAP,
+    @Option(names = "--worker-heap", paramLabel = "SIZE",
             description = "Heap of each worker JVM, e.g. 512m or 2g (default: ${DEFAULT-VALUE}).")
-    String workerHeap;
+    String workerHeap = WorkerSettings.DEFAULT_MAX_HEAP;
 
-    @Option(names = "--mutants-per-worker", paramLabel = "N", defaultValue = "" + WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
+    @Option(names = "--mutants-per-worker", paramLabel = "N",
             description = "Replace a worker JVM after this many mutants (default: ${DEFAULT-VALUE}).")
-    int mutantsPerWorker;
+    int mutantsPerWorker = WorkerSettings.DEFAULT_MUTANTS_PER_WORKER;
 
     @Option(names = "--skip-tests", paramLabel = "PATTERN",
             description = "Leave out test classes matching this pattern, e.g. '*IT' or 'com.acme.db.**' (repeatable).")

@@ -125,7 +125,6 @@ public final class MutationRun {
         List<Path> classpath = new ArrayList<>();
         classpath.add(build.schemaClasses());
         classpath.addAll(project.testClasspath());
-        classpath.add(workerClasses);
         WorkerSettings settings = WorkerSettings.of(layout.root(), classpath, work.resolve("workers"))
                 .withWorkers(request.workers())
                 .withMaxHeap(request.workerHeap())
