@@ -1,0 +1,44 @@
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.File;
+import java.util.HashMap;
+import java.util.Map;
+
+/**
+ * Prints the figures of a timed run next to its Maven baseline: the ratio of wall times, mutants per
+ * second, the time by phase, and the engine's overhead = wall time ÷ (baseline time + the sum of the
+ * test times it executed ÷ workers), where a test's time is its own time in the baseline.
+ */
+public final class RunFigures {
+
+    public static void main(String[] args) throws Exception {
+        JsonNode results = new ObjectMapper().readTree(new File(args[0]));
+        double mavenMillis = Double.parseDouble(args[1]);
+        double runMillis = Double.parseDouble(args[2]);
+        Map<String, Double> testMillis = new HashMap<>();
+        results.get("tests").forEach(test -> testMillis.put(test.get("id").asText(), test.get("millis").asDouble()));
+        int mutants = results.get("mutants").size();
+        double executed = 0;
+        int testRuns = 0;
+        for (JsonNode mutant : results.get("mutants")) {
+            for (JsonNode test : mutant.get("testsRun")) {
+                executed += testMillis.getOrDefault(test.asText(), 0.0);
+                testRuns++;
+            }
+        }
+        JsonNode timings = results.get("timings");
+        int workers = results.get("settings").get("workers").asInt();
+        double baseline = timings.path("baseline").asDouble();
+        double ideal = baseline + executed / workers;
+        System.out.printf("mvn -q test            %8.1f s%n", mavenMillis / 1000);
+        System.out.printf("changeling run         %8.1f s   (%.2f x mvn test; target <= 4)%n", runMillis / 1000, runMillis / mavenMillis);
+        System.out.printf("mutants                %8d     (%.1f per second of the whole run)%n", mutants, mutants / (runMillis / 1000));
+        System.out.printf("test runs              %8d     (their baseline times add up to %.1f s)%n", testRuns, executed / 1000);
+        for (String phase : new String[] {"maven", "generate", "compile", "baseline", "execute", "total"}) {
+            System.out.printf("  %-20s %8.1f s%n", phase, timings.path(phase).asDouble() / 1000);
+        }
+        System.out.printf("engine overhead        %8.2f     (total %.1f s ÷ (baseline %.1f s + tests %.1f s ÷ %d workers); target <= 1.3)%n",
+                timings.path("total").asDouble() / ideal, timings.path("total").asDouble() / 1000, baseline / 1000, executed / 1000, workers);
+        System.out.printf("  without maven        %8.2f%n", (timings.path("total").asDouble() - timings.path("maven").asDouble()) / ideal);
+    }
+}

@@ -1,0 +1,36 @@
+#!/usr/bin/env bash
+# Times, in one go, a plain `mvn -q test` of commons-cli 1.11.0 and a full first-order
+# `changeling run` of it, and prints both, their ratio, mutants per second, where the run's time
+# went, and the engine's own overhead. Uses target/changeling.jar; builds nothing of the tool.
+#
+#   src/bench/run.sh [extra changeling run options...]
+set -euo pipefail
+
+repo_root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
+jar="$repo_root/target/changeling.jar"
+project="$repo_root/target/bench/commons-cli"
+classes="$repo_root/target/bench/classes"
+
+if [[ ! -f "$jar" ]]; then
+  echo "error: $jar is missing; build it first with: mvn -q package -DskipTests" >&2
+  exit 1
+fi
+"$repo_root/src/bench/commons-cli/setup.sh" "$project"
+rm -rf "$classes"
+mkdir -p "$classes"
+javac --release 17 -cp "$jar" -d "$classes" "$repo_root/src/bench/java/RunFigures.java"
+
+cd "$project"
+# One untimed build so that both timed commands start from the same warm local repository.
+mvn -B -q -o test-compile >/dev/null 2>&1 || mvn -B -q test-compile >/dev/null
+
+start=$(date +%s%N)
+mvn -B -q -o test >/dev/null
+maven_ms=$(( ($(date +%s%N) - start) / 1000000 ))
+
+start=$(date +%s%N)
+java -jar "$jar" run . --plain "$@" > target/changeling-run.txt 2>&1 || { cat target/changeling-run.txt; exit 1; }
+run_ms=$(( ($(date +%s%N) - start) / 1000000 ))
+
+tail -n 25 target/changeling-run.txt | grep -E "^(mutation score|  (maven|mutants|compiled|baseline):)" || true
+java -cp "$jar:$classes" RunFigures target/changeling/results.json "$maven_ms" "$run_ms"
