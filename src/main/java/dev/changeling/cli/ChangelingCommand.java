@@ -9,6 +9,7 @@ import picocli.CommandLine.Command;
         description = "Mutation analysis for code review: would your tests notice if this code were subtly wrong?",
         subcommands = {
             MutantsCommand.class,
+            OperatorsCommand.class,
         })
 final class ChangelingCommand {
 }

@@ -27,6 +27,10 @@ final class Comparisons {
         return !evidentlyUnordered(comparison.getLeft()) && !evidentlyUnordered(comparison.getRight());
     }
 
+    static boolean isEquality(BinaryExpr.Operator operator) {
+        return operator == BinaryExpr.Operator.EQUALS || operator == BinaryExpr.Operator.NOT_EQUALS;
+    }
+
     private static boolean evidentlyUnordered(Expression side) {
         return side instanceof NullLiteralExpr
                 || side instanceof BooleanLiteralExpr

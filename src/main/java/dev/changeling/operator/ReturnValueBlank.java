@@ -1,0 +1,51 @@
+package dev.changeling.operator;
+
+import com.github.javaparser.ast.Node;
+import com.github.javaparser.ast.body.CallableDeclaration;
+import com.github.javaparser.ast.body.InitializerDeclaration;
+import com.github.javaparser.ast.body.MethodDeclaration;
+import com.github.javaparser.ast.expr.Expression;
+import com.github.javaparser.ast.expr.LambdaExpr;
+import com.github.javaparser.ast.stmt.ReturnStmt;
+
+/**
+ * Replaces a returned value by a blank one of the method's declared return type: 0, the other
+ * boolean, {@code ""}, an empty collection or Optional, or {@code null} for other references.
+ */
+public final class ReturnValueBlank implements MutationOperator {
+
+    @Override
+    public String id() {
+        return "return-value-blank";
+    }
+
+    @Override
+    public void visit(Node node, Proposals out) {
+        if (!(node instanceof ReturnStmt statement) || statement.getExpression().isEmpty()) {
+            return;
+        }
+        MethodDeclaration method = enclosingMethod(statement);
+        if (method == null) {
+            return;
+        }
+        Expression value = statement.getExpression().get();
+        for (String blank : BlankValues.of(method.getType())) {
+            if (!BlankValues.alreadyIs(value, blank)) {
+                out.replaceWhole(value, blank, "returned " + blank);
+            }
+        }
+    }
+
+    /** The method a return belongs to; null inside a lambda, whose return type is not written down. */
+    private static MethodDeclaration enclosingMethod(ReturnStmt statement) {
+        for (Node at = statement; at != null; at = at.getParentNode().orElse(null)) {
+            if (at instanceof LambdaExpr || at instanceof InitializerDeclaration) {
+                return null;
+            }
+            if (at instanceof CallableDeclaration<?> callable) {
+                return callable instanceof MethodDeclaration method ? method : null;
+            }
+        }
+        return null;
+    }
+}
