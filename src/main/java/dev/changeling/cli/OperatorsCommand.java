@@ -38,7 +38,8 @@ final class OperatorsCommand implements Callable<Integer> {
         List<Catalogue.Entry> entries = Catalogue.all();
         int width = entries.stream().mapToInt(entry -> entry.id().length()).max().orElse(0);
         for (Catalogue.Entry entry : entries) {
-            out.printf("%-" + width + "s  %-10s  %s%n", entry.id(), entry.set(), entry.summary());
+            // Backticks mark code in the markdown; on a terminal they are noise.
+            out.printf("%-" + width + "s  %-10s  %s%n", entry.id(), entry.set(), entry.summary().replace("`", ""));
         }
         out.println();
         out.println("Without --operators the default ones run; 'changeling operators --details ID' shows one in full.");
