@@ -1,13 +1,35 @@
 package dev.changeling.operator;
 
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.BINARY_OR;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.DIVIDE;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.LEFT_SHIFT;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.MINUS;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.MULTIPLY;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.PLUS;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.SIGNED_RIGHT_SHIFT;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.UNSIGNED_RIGHT_SHIFT;
+import static com.github.javaparser.ast.expr.BinaryExpr.Operator.XOR;
+
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.AssignExpr;
 import com.github.javaparser.ast.expr.BinaryExpr;
+import com.github.javaparser.ast.expr.Expression;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalLong;
+import java.util.Set;
 
-/** Binary operators that stand in for one another: each member is swapped for every other, plain or compound ({@code +=}). */
+/**
+ * Binary operators that stand in for one another: each member is swapped for every other, plain or
+ * compound ({@code +=}), except where both give the same value for the right operand written.
+ */
 final class OperatorFamily {
+
+    /** Operators that agree when the right operand is this integer literal: {@code x + 0} is {@code x - 0}. */
+    private static final Map<Long, List<Set<BinaryExpr.Operator>>> AGREE_ON = Map.of(
+            0L, List.of(Set.of(PLUS, MINUS), Set.of(LEFT_SHIFT, SIGNED_RIGHT_SHIFT, UNSIGNED_RIGHT_SHIFT), Set.of(BINARY_OR, XOR)),
+            1L, List.of(Set.of(MULTIPLY, DIVIDE)));
 
     private final List<BinaryExpr.Operator> members;
 
@@ -23,8 +45,9 @@ final class OperatorFamily {
     /** Proposes each other member in place of the one at {@code node}. */
     void swapEach(Node node, Proposals out) {
         BinaryExpr.Operator from = memberAt(node).orElseThrow();
+        OptionalLong right = IntegerLiterals.value(rightOperand(node));
         for (BinaryExpr.Operator to : members) {
-            if (to == from) {
+            if (to == from || right.isPresent() && agree(from, to, right.getAsLong())) {
                 continue;
             }
             if (node instanceof BinaryExpr binary) {
@@ -33,6 +56,14 @@ final class OperatorFamily {
                 OperatorRewrite.swap((AssignExpr) node, to.toAssignOperator().orElseThrow(), out);
             }
         }
+    }
+
+    private static boolean agree(BinaryExpr.Operator from, BinaryExpr.Operator to, long right) {
+        return AGREE_ON.getOrDefault(right, List.of()).stream().anyMatch(set -> set.contains(from) && set.contains(to));
+    }
+
+    private static Expression rightOperand(Node node) {
+        return node instanceof BinaryExpr binary ? binary.getRight() : ((AssignExpr) node).getValue();
     }
 
     private Optional<BinaryExpr.Operator> memberAt(Node node) {
