@@ -6,7 +6,6 @@ import com.github.javaparser.ast.body.TypeDeclaration;
 import com.github.javaparser.ast.expr.BooleanLiteralExpr;
 import com.github.javaparser.ast.expr.CharLiteralExpr;
 import com.github.javaparser.ast.expr.DoubleLiteralExpr;
-import com.github.javaparser.ast.expr.EnclosedExpr;
 import com.github.javaparser.ast.expr.Expression;
 import com.github.javaparser.ast.expr.NullLiteralExpr;
 import com.github.javaparser.ast.expr.StringLiteralExpr;
@@ -65,10 +64,7 @@ final class BlankValues {
 
     /** Whether {@code value} already is {@code blank}, so that returning the blank would change nothing. */
     static boolean alreadyIs(Expression value, String blank) {
-        Expression bare = value;
-        while (bare instanceof EnclosedExpr enclosed) {
-            bare = enclosed.getInner();
-        }
+        Expression bare = Precedence.unparenthesised(value);
         return switch (blank) {
             case "0", "0L" -> IntegerLiterals.isZero(bare);
             case "0.0f", "0.0" -> bare instanceof DoubleLiteralExpr literal && literal.asDouble() == 0

@@ -3,7 +3,6 @@ package dev.changeling.operator;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.AssignExpr;
 import com.github.javaparser.ast.expr.BinaryExpr;
-import com.github.javaparser.ast.expr.EnclosedExpr;
 import com.github.javaparser.ast.expr.Expression;
 import com.github.javaparser.ast.expr.StringLiteralExpr;
 import com.github.javaparser.ast.expr.TextBlockLiteralExpr;
@@ -28,10 +27,7 @@ final class Concatenation {
 
     /** A string or text-block literal, or an evident concatenation, possibly in parentheses. */
     private static boolean stringValued(Expression expression) {
-        Expression bare = expression;
-        while (bare instanceof EnclosedExpr enclosed) {
-            bare = enclosed.getInner();
-        }
+        Expression bare = Precedence.unparenthesised(expression);
         return bare instanceof StringLiteralExpr || bare instanceof TextBlockLiteralExpr || evident(bare);
     }
 }

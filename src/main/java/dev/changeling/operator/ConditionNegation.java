@@ -10,10 +10,7 @@ import com.github.javaparser.ast.expr.FieldAccessExpr;
 import com.github.javaparser.ast.expr.MethodCallExpr;
 import com.github.javaparser.ast.expr.NameExpr;
 import com.github.javaparser.ast.expr.UnaryExpr;
-import com.github.javaparser.ast.stmt.DoStmt;
-import com.github.javaparser.ast.stmt.ForStmt;
 import com.github.javaparser.ast.stmt.IfStmt;
-import com.github.javaparser.ast.stmt.WhileStmt;
 
 /** Negates the condition of an if, while, do, for or {@code ?:}: {@code c} becomes {@code !(c)}. */
 public final class ConditionNegation implements MutationOperator {
@@ -38,15 +35,9 @@ public final class ConditionNegation implements MutationOperator {
 
     private static boolean isCondition(Expression expression) {
         Node parent = expression.getParentNode().orElse(null);
-        Expression condition = null;
+        Expression condition = LoopConditions.conditionOf(parent);
         if (parent instanceof IfStmt statement) {
             condition = statement.getCondition();
-        } else if (parent instanceof WhileStmt loop) {
-            condition = loop.getCondition();
-        } else if (parent instanceof DoStmt loop) {
-            condition = loop.getCondition();
-        } else if (parent instanceof ForStmt loop) {
-            condition = loop.getCompare().orElse(null);
         } else if (parent instanceof ConditionalExpr conditional) {
             condition = conditional.getCondition();
         }

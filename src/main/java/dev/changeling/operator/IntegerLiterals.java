@@ -1,7 +1,7 @@
 package dev.changeling.operator;
 
 import com.github.javaparser.ast.Node;
-import com.github.javaparser.ast.expr.EnclosedExpr;
+import com.github.javaparser.ast.expr.Expression;
 import com.github.javaparser.ast.expr.IntegerLiteralExpr;
 import com.github.javaparser.ast.expr.LongLiteralExpr;
 import java.util.OptionalLong;
@@ -31,13 +31,9 @@ final class IntegerLiterals {
         return (node instanceof IntegerLiteralExpr || node instanceof LongLiteralExpr) && value(node).isEmpty();
     }
 
-    /** Whether {@code node} is an int or long literal zero, possibly in parentheses. */
-    static boolean isZero(Node node) {
-        Node bare = node;
-        while (bare instanceof EnclosedExpr enclosed) {
-            bare = enclosed.getInner();
-        }
-        OptionalLong value = value(bare);
+    /** Whether {@code expression} is an int or long literal zero, possibly in parentheses. */
+    static boolean isZero(Expression expression) {
+        OptionalLong value = value(Precedence.unparenthesised(expression));
         return value.isPresent() && value.getAsLong() == 0;
     }
 }

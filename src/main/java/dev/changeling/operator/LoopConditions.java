@@ -52,7 +52,8 @@ final class LoopConditions {
         return null;
     }
 
-    private static Expression conditionOf(Node node) {
+    /** The condition of a while, do or for loop; null for other nodes and for a for loop without one. */
+    static Expression conditionOf(Node node) {
         if (node instanceof WhileStmt loop) {
             return loop.getCondition();
         }

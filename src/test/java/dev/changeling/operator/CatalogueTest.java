@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.github.javaparser.ast.body.TypeDeclaration;
 import dev.changeling.mutant.Point;
-import dev.changeling.mutant.Snippets;
 import dev.changeling.source.JavaSources;
 import dev.changeling.source.SourceFile;
 import java.io.IOException;
@@ -58,8 +57,7 @@ class CatalogueTest {
     }
 
     private static String normalised(Catalogue.ExpectedMutant expected) {
-        String mutated = Snippets.normalise(expected.mutated());
-        return Snippets.normalise(expected.original()) + " => " + (mutated.isEmpty() ? Catalogue.REMOVED : mutated);
+        return Mutate.line(expected.original(), expected.mutated());
     }
 
     private static List<String> sorted(Stream<String> lines) {

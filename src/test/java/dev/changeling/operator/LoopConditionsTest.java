@@ -5,10 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.github.javaparser.ast.CompilationUnit;
 import com.github.javaparser.ast.Node;
-import com.github.javaparser.ast.expr.Expression;
-import com.github.javaparser.ast.stmt.DoStmt;
-import com.github.javaparser.ast.stmt.ForStmt;
-import com.github.javaparser.ast.stmt.WhileStmt;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.JavaSources;
 import dev.changeling.source.SourceFile;
@@ -62,22 +58,9 @@ class LoopConditionsTest {
     private static long constantLoopConditions(String source) {
         CompilationUnit unit = JavaSources.parse(SourceFile.of(Mutate.PATH, source)).unit();
         return unit.findAll(Node.class).stream()
-                .flatMap(node -> conditionOf(node).stream())
-                .filter(ConstantExpressions::literalOnly)
+                .map(LoopConditions::conditionOf)
+                .filter(condition -> condition != null && ConstantExpressions.literalOnly(condition))
                 .count();
-    }
-
-    private static List<Expression> conditionOf(Node node) {
-        if (node instanceof WhileStmt loop) {
-            return List.of(loop.getCondition());
-        }
-        if (node instanceof DoStmt loop) {
-            return List.of(loop.getCondition());
-        }
-        if (node instanceof ForStmt loop) {
-            return loop.getCompare().stream().toList();
-        }
-        return List.of();
     }
 
     @Test

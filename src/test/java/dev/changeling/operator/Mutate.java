@@ -29,9 +29,13 @@ final class Mutate {
     }
 
     /** {@code original => mutated}, white space normalised, with the catalogue's word for a removed statement. */
+    static String line(String original, String mutated) {
+        String after = Snippets.normalise(mutated);
+        return Snippets.normalise(original) + " => " + (after.isEmpty() ? Catalogue.REMOVED : after);
+    }
+
     static String line(Point point, String source) {
-        String mutated = Snippets.normalise(point.mutatedHost(source));
-        return point.snippet() + " => " + (mutated.isEmpty() ? Catalogue.REMOVED : mutated);
+        return line(point.snippet(), point.mutatedHost(source));
     }
 
     static List<String> lines(String source, MutationOperator... operators) {
