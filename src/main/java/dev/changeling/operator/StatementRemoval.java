@@ -3,6 +3,7 @@ package dev.changeling.operator;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.AssignExpr;
 import com.github.javaparser.ast.expr.Expression;
+import com.github.javaparser.ast.expr.LambdaExpr;
 import com.github.javaparser.ast.expr.MethodCallExpr;
 import com.github.javaparser.ast.stmt.BlockStmt;
 import com.github.javaparser.ast.stmt.ExpressionStmt;
@@ -26,8 +27,10 @@ public final class StatementRemoval implements MutationOperator {
             return;
         }
         Node parent = statement.getParentNode().orElse(null);
-        // An arrow case needs an expression, block or throw after the arrow; its schema form could not be an if.
-        if (parent instanceof SwitchEntry entry && entry.getType() != SwitchEntry.Type.STATEMENT_GROUP) {
+        // An expression lambda's body and an arrow case's body stand where an expression must; the
+        // schema form (an if) could not stand there either.
+        if (parent instanceof LambdaExpr
+                || parent instanceof SwitchEntry entry && entry.getType() != SwitchEntry.Type.STATEMENT_GROUP) {
             return;
         }
         if (DefiniteAssignment.dependsOn(statement)) {

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.changeling.mutant.HostKind;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.JavaSources;
 import dev.changeling.source.SourceFile;
@@ -182,6 +183,31 @@ class OperatorsTest {
             assertEquals(List.of("rows*12 => rows+12", "rows*12 => rows-12", "rows*12 => rows/12", "rows*12 => rows%12"),
                     lines(source, new ArithmeticSwap()));
             assertEquals(List.of(), lines(source, new ConnectiveSwap()));
+        }
+    }
+
+    @Nested
+    class HostKinds {
+
+        @Test
+        void theBodyOfAnExpressionLambda_keepsItsValue() {
+            String source = """
+                    import java.util.function.IntUnaryOperator;
+
+                    class Doubler {
+                        IntUnaryOperator twice() {
+                            return n -> n * 2;
+                        }
+
+                        void count(int n) {
+                            n += 2;
+                        }
+                    }
+                    """;
+            List<Point> points = Mutate.points(source, new ArithmeticSwap());
+            assertEquals(List.of(HostKind.EXPRESSION, HostKind.EXPRESSION, HostKind.EXPRESSION, HostKind.EXPRESSION,
+                    HostKind.STATEMENT_EXPRESSION, HostKind.STATEMENT_EXPRESSION, HostKind.STATEMENT_EXPRESSION,
+                    HostKind.STATEMENT_EXPRESSION), points.stream().map(Point::kind).toList());
         }
     }
 
