@@ -25,10 +25,10 @@ public final class ReturnValueBlank implements MutationOperator {
             return;
         }
         MethodDeclaration method = enclosingMethod(statement);
-        if (method == null) {
+        Expression value = statement.getExpression().get();
+        if (method == null || CatchClauses.wouldOrphan(value)) {
             return;
         }
-        Expression value = statement.getExpression().get();
         for (String blank : BlankValues.of(method.getType())) {
             if (!BlankValues.alreadyIs(value, blank)) {
                 out.replaceWhole(value, blank, "returned " + blank);

@@ -33,7 +33,7 @@ public final class StatementRemoval implements MutationOperator {
                 || parent instanceof SwitchEntry entry && entry.getType() != SwitchEntry.Type.STATEMENT_GROUP) {
             return;
         }
-        if (DefiniteAssignment.dependsOn(statement)) {
+        if (DefiniteAssignment.dependsOn(statement) || CatchClauses.wouldOrphan(statement)) {
             return;
         }
         String description = expression instanceof AssignExpr ? "removed the assignment" : "removed the call";
