@@ -1,11 +1,8 @@
 package dev.changeling.operator;
 
 import com.github.javaparser.ast.Node;
-import com.github.javaparser.ast.body.CallableDeclaration;
-import com.github.javaparser.ast.body.InitializerDeclaration;
 import com.github.javaparser.ast.body.MethodDeclaration;
 import com.github.javaparser.ast.expr.Expression;
-import com.github.javaparser.ast.expr.LambdaExpr;
 import com.github.javaparser.ast.stmt.ReturnStmt;
 
 /**
@@ -24,7 +21,7 @@ public final class ReturnValueBlank implements MutationOperator {
         if (!(node instanceof ReturnStmt statement) || statement.getExpression().isEmpty()) {
             return;
         }
-        MethodDeclaration method = enclosingMethod(statement);
+        MethodDeclaration method = DeclaredTypes.enclosingMethod(statement).orElse(null);
         Expression value = statement.getExpression().get();
         if (method == null || CatchClauses.wouldOrphan(value)) {
             return;
@@ -34,18 +31,5 @@ public final class ReturnValueBlank implements MutationOperator {
                 out.replaceWhole(value, blank, "returned " + blank);
             }
         }
-    }
-
-    /** The method a return belongs to; null inside a lambda, whose return type is not written down. */
-    private static MethodDeclaration enclosingMethod(ReturnStmt statement) {
-        for (Node at = statement; at != null; at = at.getParentNode().orElse(null)) {
-            if (at instanceof LambdaExpr || at instanceof InitializerDeclaration) {
-                return null;
-            }
-            if (at instanceof CallableDeclaration<?> callable) {
-                return callable instanceof MethodDeclaration method ? method : null;
-            }
-        }
-        return null;
     }
 }
