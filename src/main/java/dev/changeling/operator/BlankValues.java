@@ -52,7 +52,7 @@ final class BlankValues {
         if (type instanceof ClassOrInterfaceType named) {
             String name = named.getNameAsString();
             String scope = named.getScope().map(ClassOrInterfaceType::asString).orElse(null);
-            if (DeclaredTypes.isString(named) && !shadowed(named, name)) {
+            if (Declarations.isString(named) && !shadowed(named, name)) {
                 return List.of("\"\"");
             }
             if (JAVA_UTIL_EMPTY.containsKey(name) && isJavaUtil(named, name, scope)) {

@@ -22,11 +22,11 @@ final class Concatenation {
     static boolean evident(Node node) {
         if (node instanceof BinaryExpr binary && binary.getOperator() == BinaryExpr.Operator.PLUS) {
             return stringValued(binary.getLeft()) || stringValued(binary.getRight())
-                    || DeclaredTypes.ofDestination(binary).filter(DeclaredTypes::isString).isPresent();
+                    || Declarations.ofDestination(binary).filter(Declarations::isString).isPresent();
         }
         if (node instanceof AssignExpr assignment && assignment.getOperator() == AssignExpr.Operator.PLUS) {
             return stringValued(assignment.getValue())
-                    || DeclaredTypes.ofVariable(assignment.getTarget()).filter(DeclaredTypes::isString).isPresent();
+                    || Declarations.ofVariable(assignment.getTarget()).filter(Declarations::isString).isPresent();
         }
         return false;
     }
@@ -46,6 +46,6 @@ final class Concatenation {
                     && name.getNameAsString().equals("String")).isPresent();
             return toString || ofString;
         }
-        return evident(bare) || DeclaredTypes.ofVariable(bare).filter(DeclaredTypes::isString).isPresent();
+        return evident(bare) || Declarations.ofVariable(bare).filter(Declarations::isString).isPresent();
     }
 }

@@ -21,7 +21,7 @@ public final class ReturnValueBlank implements MutationOperator {
         if (!(node instanceof ReturnStmt statement) || statement.getExpression().isEmpty()) {
             return;
         }
-        MethodDeclaration method = DeclaredTypes.enclosingMethod(statement).orElse(null);
+        MethodDeclaration method = Declarations.enclosingMethod(statement).orElse(null);
         Expression value = statement.getExpression().get();
         if (method == null || CatchClauses.wouldOrphan(value)) {
             return;

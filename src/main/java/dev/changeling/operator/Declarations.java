@@ -16,7 +16,7 @@ import com.github.javaparser.ast.expr.LambdaExpr;
 import com.github.javaparser.ast.expr.NameExpr;
 import com.github.javaparser.ast.expr.ThisExpr;
 import com.github.javaparser.ast.expr.VariableDeclarationExpr;
-import com.github.javaparser.ast.stmt.BlockStmt;
+import com.github.javaparser.ast.nodeTypes.NodeWithStatements;
 import com.github.javaparser.ast.stmt.ExpressionStmt;
 import com.github.javaparser.ast.stmt.ForStmt;
 import com.github.javaparser.ast.stmt.ReturnStmt;
@@ -25,10 +25,10 @@ import com.github.javaparser.ast.type.Type;
 import java.util.Optional;
 import java.util.stream.Stream;
 
-/** Reads the types a source writes down (no type solving): of a variable, of where a value goes, of a method's result. */
-final class DeclaredTypes {
+/** Reads what a source declares, without solving types: where a name is declared, the type written for a variable, a destination or a method's result. */
+final class Declarations {
 
-    private DeclaredTypes() {
+    private Declarations() {
     }
 
     /** Whether {@code type} is written as {@code String} or {@code java.lang.String}. */
@@ -73,13 +73,22 @@ final class DeclaredTypes {
 
     /** The written type of a simple name or {@code this.name}: the nearest local, parameter or field of that name. */
     static Optional<Type> ofVariable(Expression target) {
+        return declarationOf(target).map(declaration -> declaration instanceof VariableDeclarator variable
+                ? variable.getType() : ((Parameter) declaration).getType());
+    }
+
+    /**
+     * Where a simple name or {@code this.name} is declared: the nearest local variable, parameter,
+     * field or record component of that name ({@link VariableDeclarator} or {@link Parameter}).
+     */
+    static Optional<Node> declarationOf(Expression target) {
         boolean field = target instanceof FieldAccessExpr access && access.getScope() instanceof ThisExpr;
         if (!(target instanceof NameExpr) && !field) {
             return Optional.empty();
         }
         String name = target instanceof NameExpr simple ? simple.getNameAsString() : ((FieldAccessExpr) target).getNameAsString();
         for (Node at = target; at != null; at = at.getParentNode().orElse(null)) {
-            Optional<Type> found = field && !(at instanceof TypeDeclaration<?>) ? Optional.empty() : declaredIn(at, name);
+            Optional<Node> found = field && !(at instanceof TypeDeclaration<?>) ? Optional.empty() : declaredIn(at, name);
             if (found.isPresent() || at instanceof LambdaExpr || at instanceof TypeDeclaration<?>) {
                 return found;
             }
@@ -87,18 +96,16 @@ final class DeclaredTypes {
         return Optional.empty();
     }
 
-    private static Optional<Type> declaredIn(Node scope, String name) {
+    private static Optional<Node> declaredIn(Node scope, String name) {
         Stream<VariableDeclarator> locals = Stream.empty();
         Stream<Parameter> parameters = Stream.empty();
-        if (scope instanceof BlockStmt block) {
+        if (scope instanceof NodeWithStatements<?> block) {
             locals = block.getStatements().stream()
                     .filter(ExpressionStmt.class::isInstance)
                     .map(statement -> ((ExpressionStmt) statement).getExpression())
-                    .filter(VariableDeclarationExpr.class::isInstance)
-                    .flatMap(declaration -> ((VariableDeclarationExpr) declaration).getVariables().stream());
+                    .flatMap(Declarations::variablesOf);
         } else if (scope instanceof ForStmt loop) {
-            locals = loop.getInitialization().stream().filter(VariableDeclarationExpr.class::isInstance)
-                    .flatMap(declaration -> ((VariableDeclarationExpr) declaration).getVariables().stream());
+            locals = loop.getInitialization().stream().flatMap(Declarations::variablesOf);
         } else if (scope instanceof CallableDeclaration<?> callable) {
             parameters = callable.getParameters().stream();
         } else if (scope instanceof LambdaExpr lambda) {
@@ -107,9 +114,13 @@ final class DeclaredTypes {
             locals = type.getFields().stream().flatMap(declaration -> declaration.getVariables().stream());
             parameters = type instanceof RecordDeclaration record ? record.getParameters().stream() : Stream.empty();
         }
-        return Stream.concat(
-                        locals.filter(variable -> variable.getNameAsString().equals(name)).map(VariableDeclarator::getType),
-                        parameters.filter(parameter -> parameter.getNameAsString().equals(name)).map(Parameter::getType))
+        return Stream.<Node>concat(
+                        locals.filter(variable -> variable.getNameAsString().equals(name)),
+                        parameters.filter(parameter -> parameter.getNameAsString().equals(name)))
                 .findFirst();
+    }
+
+    private static Stream<VariableDeclarator> variablesOf(Expression expression) {
+        return expression instanceof VariableDeclarationExpr declaration ? declaration.getVariables().stream() : Stream.empty();
     }
 }
