@@ -13,6 +13,7 @@ import picocli.CommandLine.Command;
             EquivalentsCommand.class,
             TriageCommand.class,
             RunCommand.class,
+            OperatorsCommand.class,
         })
 final class ChangelingCommand {
 }

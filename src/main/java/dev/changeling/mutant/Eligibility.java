@@ -10,19 +10,13 @@ import com.github.javaparser.ast.body.InitializerDeclaration;
 import com.github.javaparser.ast.body.TypeDeclaration;
 import com.github.javaparser.ast.body.VariableDeclarator;
 import com.github.javaparser.ast.expr.AnnotationExpr;
-import com.github.javaparser.ast.expr.BinaryExpr;
-import com.github.javaparser.ast.expr.CastExpr;
-import com.github.javaparser.ast.expr.ConditionalExpr;
-import com.github.javaparser.ast.expr.EnclosedExpr;
-import com.github.javaparser.ast.expr.Expression;
 import com.github.javaparser.ast.expr.LambdaExpr;
-import com.github.javaparser.ast.expr.LiteralExpr;
-import com.github.javaparser.ast.expr.UnaryExpr;
 import com.github.javaparser.ast.expr.VariableDeclarationExpr;
 import com.github.javaparser.ast.nodeTypes.NodeWithModifiers;
 import com.github.javaparser.ast.stmt.SwitchEntry;
 import com.github.javaparser.ast.body.ClassOrInterfaceDeclaration;
 import com.github.javaparser.ast.Modifier;
+import dev.changeling.operator.ConstantExpressions;
 
 /**
  * Where a mutant cannot mean anything or cannot compile by construction: annotations, case labels,
@@ -44,7 +38,7 @@ final class Eligibility {
                 return true;
             }
             if (at instanceof VariableDeclarator variable
-                    && variable.getInitializer().filter(init -> init == from && constantLike(init)).isPresent()
+                    && variable.getInitializer().filter(init -> init == from && ConstantExpressions.literalOnly(init)).isPresent()
                     && isFinal(variable)) {
                 return true;
             }
@@ -90,30 +84,6 @@ final class Eligibility {
                 .filter(ClassOrInterfaceDeclaration.class::isInstance)
                 .map(parent -> ((ClassOrInterfaceDeclaration) parent).isInterface())
                 .orElse(false);
-    }
-
-    /** Literals joined by operators only: a compile-time constant that a switch label may depend on. */
-    private static boolean constantLike(Expression expression) {
-        if (expression instanceof LiteralExpr) {
-            return true;
-        }
-        if (expression instanceof BinaryExpr binary) {
-            return constantLike(binary.getLeft()) && constantLike(binary.getRight());
-        }
-        if (expression instanceof UnaryExpr unary) {
-            return constantLike(unary.getExpression());
-        }
-        if (expression instanceof EnclosedExpr enclosed) {
-            return constantLike(enclosed.getInner());
-        }
-        if (expression instanceof CastExpr cast) {
-            return constantLike(cast.getExpression());
-        }
-        if (expression instanceof ConditionalExpr conditional) {
-            return constantLike(conditional.getCondition()) && constantLike(conditional.getThenExpr())
-                    && constantLike(conditional.getElseExpr());
-        }
-        return false;
     }
 
     private static boolean isGenerated(TypeDeclaration<?> type) {

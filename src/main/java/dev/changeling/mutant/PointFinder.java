@@ -1,6 +1,7 @@
 package dev.changeling.mutant;
 
 import com.github.javaparser.ast.Node;
+import com.github.javaparser.ast.expr.LambdaExpr;
 import com.github.javaparser.ast.stmt.ExpressionStmt;
 import com.github.javaparser.ast.stmt.ForStmt;
 import com.github.javaparser.ast.stmt.Statement;
@@ -61,7 +62,8 @@ public final class PointFinder {
             return HostKind.STATEMENT;
         }
         Node parent = host.getParentNode().orElse(null);
-        boolean standsAlone = parent instanceof ExpressionStmt
+        // JavaParser holds the body of an expression lambda in an ExpressionStmt, but its value is used.
+        boolean standsAlone = parent instanceof ExpressionStmt && !(parent.getParentNode().orElse(null) instanceof LambdaExpr)
                 || (parent instanceof ForStmt loop
                     && (loop.getInitialization().stream().anyMatch(init -> init == host)
                         || loop.getUpdate().stream().anyMatch(update -> update == host)));

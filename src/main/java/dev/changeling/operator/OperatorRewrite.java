@@ -24,15 +24,16 @@ public final class OperatorRewrite {
         boolean wrapWhole = level < Precedence.of(expression.getOperator())
                 && Precedence.needsParenthesesAt(expression, level);
         String description = "replaced " + expression.getOperator().asString() + " with " + to.asString();
+        String token = Tokens.spliced(file.text(), operatorSpan, to.asString());
         if (!wrapLeft && !wrapRight && !wrapWhole) {
-            out.replace(expression, operatorSpan, to.asString(), description);
+            out.replace(expression, operatorSpan, token, description);
             return;
         }
         Span whole = out.span(expression);
         String text = file.text();
         String rebuilt = parenthesised(out.text(expression.getLeft()), wrapLeft)
                 + text.substring(out.span(expression.getLeft()).end(), operatorSpan.begin())
-                + to.asString()
+                + token
                 + text.substring(operatorSpan.end(), out.span(expression.getRight()).begin())
                 + parenthesised(out.text(expression.getRight()), wrapRight);
         out.replace(expression, whole, parenthesised(rebuilt, wrapWhole), description);
@@ -41,7 +42,7 @@ public final class OperatorRewrite {
     public static void swap(AssignExpr assignment, AssignExpr.Operator to, Proposals out) {
         Span operatorSpan = operatorToken(out.file(), assignment.getTarget(), assignment.getValue(),
                 assignment.getOperator().asString());
-        out.replace(assignment, operatorSpan, to.asString(),
+        out.replace(assignment, operatorSpan, Tokens.spliced(out.file().text(), operatorSpan, to.asString()),
                 "replaced " + assignment.getOperator().asString() + " with " + to.asString());
     }
 

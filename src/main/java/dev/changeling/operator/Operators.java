@@ -9,10 +9,24 @@ import java.util.stream.Stream;
 public final class Operators {
 
     private static final List<MutationOperator> DEFAULTS = List.of(
-            new RelationalSubset());
+            new RelationalSubset(),
+            new ArithmeticSwap(),
+            new ConnectiveSwap(),
+            new ConditionNegation(),
+            new NegationRemoval(),
+            new IncrementSwap(),
+            new UnaryMinusRemoval(),
+            new BooleanLiteralFlip(),
+            new ReturnValueBlank(),
+            new StatementRemoval());
 
     private static final List<MutationOperator> ON_REQUEST = List.of(
-            new RelationalAll());
+            new RelationalAll(),
+            new IntegerLiteralNudge(),
+            new StringLiteralBlank(),
+            new BitwiseSwap(),
+            new ShiftSwap(),
+            new ComplementRemoval());
 
     private Operators() {
     }

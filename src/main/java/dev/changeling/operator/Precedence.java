@@ -6,6 +6,7 @@ import com.github.javaparser.ast.expr.AssignExpr;
 import com.github.javaparser.ast.expr.BinaryExpr;
 import com.github.javaparser.ast.expr.CastExpr;
 import com.github.javaparser.ast.expr.ConditionalExpr;
+import com.github.javaparser.ast.expr.EnclosedExpr;
 import com.github.javaparser.ast.expr.Expression;
 import com.github.javaparser.ast.expr.FieldAccessExpr;
 import com.github.javaparser.ast.expr.InstanceOfExpr;
@@ -56,6 +57,15 @@ final class Precedence {
             return UNARY;
         }
         return PRIMARY;
+    }
+
+    /** The expression inside any number of parentheses. */
+    static Expression unparenthesised(Expression expression) {
+        Expression bare = expression;
+        while (bare instanceof EnclosedExpr enclosed) {
+            bare = enclosed.getInner();
+        }
+        return bare;
     }
 
     /**

@@ -35,11 +35,17 @@ public final class Proposals {
         return file.textOf(node);
     }
 
-    /** Replaces part of {@code host} (the span {@code edit}) by {@code replacement}. */
+    /**
+     * Replaces part of {@code host} (the span {@code edit}) by {@code replacement}. A change that would
+     * leave a loop condition constant is dropped here, for every operator (see {@link LoopConditions}).
+     */
     public void replace(Node host, Span edit, String replacement, String description) {
         Span hostSpan = span(host);
         if (!hostSpan.contains(edit)) {
             throw new IllegalArgumentException("edit " + edit + " lies outside its host " + hostSpan);
+        }
+        if (LoopConditions.wouldBeConstant(file, host, edit, replacement)) {
+            return;
         }
         collected.add(new Proposal(operator, host, edit, replacement, description));
     }

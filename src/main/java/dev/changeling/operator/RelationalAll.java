@@ -3,7 +3,10 @@ package dev.changeling.operator;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.BinaryExpr;
 
-/** Replaces a comparison by each of the other five comparisons, by {@code true} and by {@code false}. */
+/**
+ * Replaces a comparison by each of the other five comparisons, by {@code true} and by {@code false};
+ * where an operand is evidently not a number, only {@code ==} and {@code !=} trade places.
+ */
 public final class RelationalAll implements MutationOperator {
 
     @Override
@@ -16,11 +19,12 @@ public final class RelationalAll implements MutationOperator {
         if (!(node instanceof BinaryExpr comparison) || !Comparisons.RELATIONAL.contains(comparison.getOperator())) {
             return;
         }
-        if (Comparisons.ordered(comparison)) {
-            for (BinaryExpr.Operator to : Comparisons.RELATIONAL) {
-                if (to != comparison.getOperator()) {
-                    OperatorRewrite.swap(comparison, to, out);
-                }
+        BinaryExpr.Operator from = comparison.getOperator();
+        boolean ordered = Comparisons.ordered(comparison);
+        for (BinaryExpr.Operator to : Comparisons.RELATIONAL) {
+            boolean compiles = ordered || Comparisons.isEquality(from) && Comparisons.isEquality(to);
+            if (to != from && compiles) {
+                OperatorRewrite.swap(comparison, to, out);
             }
         }
         out.replaceWhole(comparison, "true", "replaced the comparison with true");
