@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.tools.Diagnostic;
 import javax.tools.JavaFileObject;
@@ -57,12 +56,16 @@ final class ErrorAttribution {
     private static final Set<String> BAD_OPERANDS = Set.of(
             "compiler.err.operator.cant.be.applied", "compiler.err.operator.cant.be.applied.1");
 
-    /** Definite-assignment errors name their variable; the deletion that assigned it is the likely cause. */
+    /** Definite-assignment errors stand at their variable; the deletion that assigned it is the likely cause. */
     private static final Set<String> NAMES_A_VARIABLE = Set.of(
             "compiler.err.var.might.not.have.been.initialized",
             "compiler.err.var.not.initialized.in.default.constructor");
 
-    private static final Pattern VARIABLE = Pattern.compile("variable (\\S+) ");
+    private static final Map<String, Pattern> ENDING_THE_FLOW = Map.of(
+            "compiler.err.missing.ret.stmt", Pattern.compile("(?:return|throw)(?![\\w$])"),
+            "compiler.err.unreachable.stmt", Pattern.compile("break(?![\\w$])"));
+
+    private static final Pattern IDENTIFIER = Pattern.compile("[\\p{L}_$][\\p{L}\\p{N}_$]*");
 
     /**
      * What one file's errors decide.
@@ -186,9 +189,12 @@ final class ErrorAttribution {
         if (member != null) {
             List<Point> inMember = file.pointsWithin(member.begin(), member.end());
             List<Point> deletions = inMember.stream().filter(point -> point.kind() == HostKind.STATEMENT).toList();
-            List<Point> assigning = assigningTheVariable(file, deletions, error);
-            if (!assigning.isEmpty()) {
-                return assigning;
+            List<Point> likely = declaringOrAssigning(file, deletions, error);
+            if (likely.isEmpty()) {
+                likely = endingTheFlow(file, deletions, error);
+            }
+            if (!likely.isEmpty()) {
+                return likely;
             }
             if (!deletions.isEmpty()) {
                 return deletions;
@@ -200,24 +206,40 @@ final class ErrorAttribution {
         return file.points();
     }
 
-    /** For an error at a use of an unassigned variable, the deletions whose statement mentions it. */
-    private static List<Point> assigningTheVariable(RenderedFile file, List<Point> deletions,
+    /**
+     * For an error at a variable's name (unassigned, or no longer declared), the deletions whose
+     * statement declares or assigns it; none when the error stands elsewhere (a constructor's end).
+     */
+    private static List<Point> declaringOrAssigning(RenderedFile file, List<Point> deletions,
                                                     Diagnostic<? extends JavaFileObject> error) {
-        if (!NAMES_A_VARIABLE.contains(error.getCode())) {
-            return List.of();
-        }
-        Matcher variable = VARIABLE.matcher(error.getMessage(Locale.ROOT));
-        if (!variable.find()) {
-            return List.of();
-        }
-        // javac reports one error per position: at a constructor's end, the other unassigned fields stay unnamed
+        String code = error.getCode() == null ? "" : error.getCode();
         long begin = error.getStartPosition();
         long end = error.getEndPosition();
-        if (begin < 0 || end > file.text().length() || !file.text().substring((int) begin, (int) end).equals(variable.group(1))) {
+        if (!(NAMES_A_VARIABLE.contains(code) || code.startsWith(UNKNOWN_NAME))
+                || begin < 0 || end <= begin || end > file.text().length()) {
             return List.of();
         }
-        Pattern name = word(variable.group(1));
-        return deletions.stream().filter(point -> name.matcher(file.source().textOf(point.host())).find()).toList();
+        String name = file.text().substring((int) begin, (int) end);
+        if (!IDENTIFIER.matcher(name).matches()) {
+            return List.of();
+        }
+        // "name =" (not "=="), "name;" and "name," are how a declaration or an assignment writes it
+        Pattern setting = Pattern.compile("(?<![\\w$.])" + Pattern.quote(name) + "\\s*(?:=(?!=)|;|,)");
+        return deletions.stream().filter(point -> setting.matcher(file.source().textOf(point.host())).find()).toList();
+    }
+
+    /**
+     * For a method that may now run off its end, the deleted returns and throws; for code that is now
+     * unreachable, the deleted breaks (out of a loop that otherwise never ends).
+     */
+    private static List<Point> endingTheFlow(RenderedFile file, List<Point> deletions,
+                                             Diagnostic<? extends JavaFileObject> error) {
+        Pattern statement = ENDING_THE_FLOW.get(error.getCode());
+        if (statement == null) {
+            return List.of();
+        }
+        return deletions.stream().filter(point -> statement.matcher(file.source().textOf(point.host())).lookingAt())
+                .toList();
     }
 
     private static Pattern word(String name) {

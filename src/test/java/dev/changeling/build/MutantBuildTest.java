@@ -263,6 +263,11 @@ class MutantBuildTest {
             assertTrue(declaration.detail().contains("cannot find symbol"), declaration.detail());
             assertEquals(Placement.Kind.ALONE, result.placementOf(only(points, "return 0;", "")).kind(),
                     "a deletion beside the culprit moves with it");
+            Placement rate = result.placementOf(only(points, "rate=amount>100?20:10;", ""));
+            assertEquals("src/main/java/sample/Ledger.java:27: variable rate might not have been initialized", rate.detail());
+            Placement mark = result.placementOf(only(points, "mark(seen);", ""));
+            assertEquals(Placement.Kind.IN_SCHEMA, mark.kind(),
+                    "an error at a use of a variable moves only the deletions that set it: " + mark.detail());
             for (Point point : points) {
                 if (point.kind() != HostKind.STATEMENT) {
                     Placement placement = result.placementOf(Mutant.firstOrder(point));
@@ -271,6 +276,30 @@ class MutantBuildTest {
                 }
             }
             Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants, "sample.Ledger");
+        }
+
+        @Test
+        void mutantsOfSeveralFiles_compileAloneInSharedTasks_eachIntoItsOwnFolder() throws IOException {
+            TestProject project = TestProject.create(dir, Map.of("sample/Sacks.java", Samples.SACKS,
+                    "sample/Ledger.java", Samples.LEDGER));
+            List<Point> sacks = project.points("sample/Sacks.java", List.of(SampleOperators.LITERALS));
+            List<Point> ledger = project.points("sample/Ledger.java", List.of(deleteReturnsAndDeclarations));
+            Mutant narrowed = only(sacks, "10", "11");
+            Mutant early = only(ledger, "return 0;", "");
+            Mutant noReturn = only(ledger, "return net;", "");
+            BuildResult result = project.build(List.of(narrowed, early, noReturn));
+
+            assertEquals(Placement.Kind.ALONE, result.placementOf(narrowed).kind());
+            assertEquals(Placement.Kind.ALONE, result.placementOf(early).kind());
+            assertEquals(Placement.Kind.STILLBORN, result.placementOf(noReturn).kind());
+            assertEquals(3, result.timings().aloneCompiles());
+            assertTrue(result.timings().aloneTasks() < 3, result.timings().summary());
+            try (var walk = Files.walk(result.placementOf(narrowed).classes())) {
+                assertEquals(List.of("Sacks.class"), walk.filter(Files::isRegularFile)
+                        .map(path -> path.getFileName().toString()).toList());
+            }
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, List.of(narrowed), "sample.Sacks");
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, List.of(early, noReturn), "sample.Ledger");
         }
 
         @Test

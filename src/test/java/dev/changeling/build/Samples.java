@@ -160,6 +160,18 @@ final class Samples {
                     fee += 2;
                     return fee;
                 }
+
+                public static int tax(int amount) {
+                    int rate;
+                    int[] seen = {0};
+                    rate = amount > 100 ? 20 : 10;
+                    mark(seen);
+                    return amount * rate / 100 + seen[0];
+                }
+
+                static void mark(int[] seen) {
+                    seen[0] = 1;
+                }
             }
             """;
 
