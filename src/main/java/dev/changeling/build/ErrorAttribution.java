@@ -2,7 +2,6 @@ package dev.changeling.build;
 
 import dev.changeling.build.RenderedFile.Branch;
 import dev.changeling.build.RenderedFile.HostRegion;
-import dev.changeling.mutant.HostKind;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.Span;
 import java.util.ArrayList;
@@ -19,7 +18,7 @@ import javax.tools.JavaFileObject;
 /**
  * Traces javac's errors in one schema file back to the points that caused them: an error in a
  * mutated branch is that point's, an error elsewhere in a switch is its host's, and an error that
- * cannot be traced moves the statement deletions of its member, then the member, then the file.
+ * cannot be traced moves its likely {@link Culprits}. An error that may only echo another waits a round.
  */
 final class ErrorAttribution {
 
@@ -45,7 +44,7 @@ final class ErrorAttribution {
      * A name that cannot be found has usually left its scope (a deleted declaration, a pattern binding
      * now inside a switch), so its position names the cause only if the original host lacks the name.
      */
-    private static final String UNKNOWN_NAME = "compiler.err.cant.resolve";
+    static final String UNKNOWN_NAME = "compiler.err.cant.resolve";
 
     private static final String NEIGHBOURS = "moved with its neighbours after an error the schema could not trace: ";
 
@@ -55,17 +54,6 @@ final class ErrorAttribution {
      */
     private static final Set<String> BAD_OPERANDS = Set.of(
             "compiler.err.operator.cant.be.applied", "compiler.err.operator.cant.be.applied.1");
-
-    /** Definite-assignment errors stand at their variable; the deletion that assigned it is the likely cause. */
-    private static final Set<String> NAMES_A_VARIABLE = Set.of(
-            "compiler.err.var.might.not.have.been.initialized",
-            "compiler.err.var.not.initialized.in.default.constructor");
-
-    private static final Map<String, Pattern> ENDING_THE_FLOW = Map.of(
-            "compiler.err.missing.ret.stmt", Pattern.compile("(?:return|throw)(?![\\w$])"),
-            "compiler.err.unreachable.stmt", Pattern.compile("break(?![\\w$])"));
-
-    private static final Pattern IDENTIFIER = Pattern.compile("[\\p{L}_$][\\p{L}\\p{N}_$]*");
 
     /**
      * What one file's errors decide.
@@ -140,7 +128,7 @@ final class ErrorAttribution {
                 }
                 case FLOW, UNTRACED -> {
                     if (!deferred.get(i)) {
-                        untraced(file, member, error).forEach(point -> evicted.putIfAbsent(point, NEIGHBOURS + reason));
+                        Culprits.of(file, member, error).forEach(point -> evicted.putIfAbsent(point, NEIGHBOURS + reason));
                     }
                 }
                 default -> throw new IllegalStateException(traces.get(i).toString());
@@ -185,64 +173,7 @@ final class ErrorAttribution {
         return offset < 0 ? null : members.innermostAt(offset);
     }
 
-    private static List<Point> untraced(RenderedFile file, Span member, Diagnostic<? extends JavaFileObject> error) {
-        if (member != null) {
-            List<Point> inMember = file.pointsWithin(member.begin(), member.end());
-            List<Point> deletions = inMember.stream().filter(point -> point.kind() == HostKind.STATEMENT).toList();
-            List<Point> likely = declaringOrAssigning(file, deletions, error);
-            if (likely.isEmpty()) {
-                likely = endingTheFlow(file, deletions, error);
-            }
-            if (!likely.isEmpty()) {
-                return likely;
-            }
-            if (!deletions.isEmpty()) {
-                return deletions;
-            }
-            if (!inMember.isEmpty()) {
-                return inMember;
-            }
-        }
-        return file.points();
-    }
-
-    /**
-     * For an error at a variable's name (unassigned, or no longer declared), the deletions whose
-     * statement declares or assigns it; none when the error stands elsewhere (a constructor's end).
-     */
-    private static List<Point> declaringOrAssigning(RenderedFile file, List<Point> deletions,
-                                                    Diagnostic<? extends JavaFileObject> error) {
-        String code = error.getCode() == null ? "" : error.getCode();
-        long begin = error.getStartPosition();
-        long end = error.getEndPosition();
-        if (!(NAMES_A_VARIABLE.contains(code) || code.startsWith(UNKNOWN_NAME))
-                || begin < 0 || end <= begin || end > file.text().length()) {
-            return List.of();
-        }
-        String name = file.text().substring((int) begin, (int) end);
-        if (!IDENTIFIER.matcher(name).matches()) {
-            return List.of();
-        }
-        // "name =" (not "=="), "name;" and "name," are how a declaration or an assignment writes it
-        Pattern setting = Pattern.compile("(?<![\\w$.])" + Pattern.quote(name) + "\\s*(?:=(?!=)|;|,)");
-        return deletions.stream().filter(point -> setting.matcher(file.source().textOf(point.host())).find()).toList();
-    }
-
-    /**
-     * For a method that may now run off its end, the deleted returns and throws; for code that is now
-     * unreachable, the deleted breaks (out of a loop that otherwise never ends).
-     */
-    private static List<Point> endingTheFlow(RenderedFile file, List<Point> deletions,
-                                             Diagnostic<? extends JavaFileObject> error) {
-        Pattern statement = ENDING_THE_FLOW.get(error.getCode());
-        if (statement == null) {
-            return List.of();
-        }
-        return deletions.stream().filter(point -> statement.matcher(file.source().textOf(point.host())).lookingAt())
-                .toList();
-    }
-
-    private static Pattern word(String name) {
+    static Pattern word(String name) {
         return Pattern.compile("(?<![\\w$])" + Pattern.quote(name) + "(?![\\w$])");
     }
 

@@ -29,8 +29,8 @@ public final class MutantBuild {
     static final String ALONE = "alone";
     static final String SCRATCH = "scratch";
 
-    private static final String ONCE_PER_JVM = "runs once per JVM (a static initialiser or a constant), "
-            + "where switching at run time cannot reach it";
+    private static final String ONCE_PER_JVM = "runs once per JVM (a static initialiser, a static field's or an "
+            + "enum constant's initialiser), where switching at run time cannot reach it";
 
     private MutantBuild() {
     }

@@ -534,6 +534,17 @@ class MutantBuildTest {
         }
 
         @Test
+        void changeOutsideItsHost_isRefused() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Labels.java", Samples.LABELS));
+            Point point = project.points("sample/Labels.java", List.of(SampleOperators.BINARY)).get(0);
+            Point astray = new Point(point.file(), point.type(), point.member(), point.operator(), point.kind(),
+                    point.host(), new Span(point.host().end(), point.host().end() + 1), "-", point.snippet(),
+                    point.description(), point.line(), false, point.fingerprint());
+            assertThrows(IllegalArgumentException.class, () -> new BuildRequest(List.of(Mutant.firstOrder(astray)),
+                    project.files, project.classpath(), project.output));
+        }
+
+        @Test
         void mutantOfAFileNotGiven_isRefused() {
             TestProject project = TestProject.create(dir, Map.of("sample/Labels.java", Samples.LABELS));
             List<Mutant> mutants = firstOrder(project.points("sample/Labels.java", List.of(SampleOperators.BINARY)));
