@@ -72,7 +72,8 @@ final class ErrorAttribution {
 
     /**
      * Traces one file's errors. {@code leavingAnyway} are points already known to leave (a constant
-     * loop condition): flow errors in their members may be their doing, so those wait for the next round.
+     * loop condition, a lone body): flow errors in their members may be their doing, so those wait for
+     * the next round.
      */
     static Traced trace(RenderedFile file, List<Diagnostic<? extends JavaFileObject>> errors, MemberSpans members,
                         Set<Point> leavingAnyway) {

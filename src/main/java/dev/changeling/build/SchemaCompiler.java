@@ -131,14 +131,15 @@ final class SchemaCompiler {
         for (CompilationUnitTree unit : task.units()) {
             RenderedFile file = rendered.get(Javac.pathOf(unit.getSourceFile()));
             List<Diagnostic<? extends JavaFileObject>> errors = errorsByFile.getOrDefault(file.path(), List.of());
-            Map<Point, String> constantLoops = LoopConditions.constantSides(task, unit, file);
+            Map<Point, String> misfits = new LinkedHashMap<>(LoopConditions.constantSides(task, unit, file));
+            StatementContexts.outsideBlocks(task, unit, file).forEach(misfits::putIfAbsent);
             if (!errors.isEmpty()) {
                 ErrorAttribution.Traced traced = ErrorAttribution.trace(file, errors, MemberSpans.of(unit, positions),
-                        constantLoops.keySet());
+                        misfits.keySet());
                 traced.evicted().forEach(leaving::putIfAbsent);
                 traced.stillborn().forEach(stillborn::putIfAbsent);
             }
-            constantLoops.forEach(leaving::putIfAbsent);
+            misfits.forEach(leaving::putIfAbsent);
             BranchTypes.mismatches(task, unit, file).forEach(leaving::putIfAbsent);
         }
         return errorsByFile.keySet();

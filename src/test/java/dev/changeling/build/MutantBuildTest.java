@@ -364,6 +364,29 @@ class MutantBuildTest {
     }
 
     @Nested
+    class SwitchRules {
+
+        @Test
+        void armsOfSwitchesAndBodiesWithoutBraces_runExactlyAsTheirOwnFiles() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Months.java", Samples.SEASONS_SWITCH));
+            List<Point> points = project.points("sample/Months.java", SampleOperators.all());
+            List<Mutant> mutants = firstOrder(points);
+            BuildResult result = project.build(mutants);
+
+            Map<Placement.Kind, Integer> counts = Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants,
+                    "sample.Months");
+            assertTrue(count(counts, Placement.Kind.IN_SCHEMA) >= mutants.size() / 2, counts.toString());
+            assertEquals(Placement.Kind.IN_SCHEMA, result.placementOf(only(points, "month*10", "/")).kind());
+            assertEquals(Placement.Kind.STILLBORN, result.placementOf(only(points, "out+=\"fizz\";", "")).kind(),
+                    "an arrow case with its body deleted does not parse");
+            assertEquals(Placement.Kind.IN_SCHEMA, result.placementOf(only(points, "out=\"none\";", "")).kind(),
+                    "a deletion inside the arrow case's block is fine");
+            Placement unbraced = result.placementOf(only(points, "b++;", ""));
+            assertEquals(Placement.Kind.ALONE, unbraced.kind(), "its own file makes c++ the if's body: " + unbraced);
+        }
+    }
+
+    @Nested
     class LoopConditions {
 
         @Test
