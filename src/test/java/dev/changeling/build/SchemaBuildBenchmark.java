@@ -52,6 +52,7 @@ public final class SchemaBuildBenchmark {
             System.out.printf("greenhouse sample: %d files, %d lines, %d points%n", project.files.size(), lines, points.size());
 
             project.build(firstOrder);
+            plainCompile(project);
             report("first-order (warm JIT)", project, firstOrder, verify);
             report("first-order + second-order", project, withPairs, verify);
         } finally {
@@ -60,6 +61,18 @@ public final class SchemaBuildBenchmark {
             } else {
                 Outputs.deleteTree(root);
             }
+        }
+    }
+
+    /** The same files, unmutated, compiled once the same way: the yardstick for one schema round. */
+    private static void plainCompile(TestProject project) {
+        try (Javac javac = new Javac(project.classpath())) {
+            long started = System.nanoTime();
+            Javac.Task task = javac.task(project.files.values().stream()
+                    .map(file -> new Javac.Source(file.path(), file.text())).toList(), project.root.resolve("plain"));
+            task.analyze();
+            task.generate();
+            System.out.printf("plain compile of the unmutated files: %d ms%n", (System.nanoTime() - started) / 1_000_000);
         }
     }
 
