@@ -60,8 +60,9 @@ final class ErrorAttribution {
      *
      * @param evicted   the points to move out of the schema, each with the reason
      * @param stillborn of those, the ones whose own file is certain not to compile, with the error
+     * @param wholeFile  whether an error could be pinned on nothing narrower than the whole file
      */
-    record Traced(Map<Point, String> evicted, Map<Point, String> stillborn) {
+    record Traced(Map<Point, String> evicted, Map<Point, String> stillborn, boolean wholeFile) {
     }
 
     private ErrorAttribution() {
@@ -105,6 +106,7 @@ final class ErrorAttribution {
         }
         Map<Point, String> evicted = new LinkedHashMap<>();
         Map<Point, String> stillborn = new LinkedHashMap<>();
+        boolean wholeFile = false;
         for (int i = 0; i < errors.size(); i++) {
             Diagnostic<? extends JavaFileObject> error = errors.get(i);
             String reason = Javac.describe(error);
@@ -129,13 +131,15 @@ final class ErrorAttribution {
                 }
                 case FLOW, UNTRACED -> {
                     if (!deferred.get(i)) {
-                        Culprits.of(file, member, error).forEach(point -> evicted.putIfAbsent(point, NEIGHBOURS + reason));
+                        List<Point> culprits = Culprits.of(file, member, error);
+                        wholeFile |= culprits.size() == file.points().size();
+                        culprits.forEach(point -> evicted.putIfAbsent(point, NEIGHBOURS + reason));
                     }
                 }
                 default -> throw new IllegalStateException(traces.get(i).toString());
             }
         }
-        return new Traced(evicted, stillborn);
+        return new Traced(evicted, stillborn, wholeFile);
     }
 
     /** Whether the error is a bad-operands error at the text the point's edit put into its branch. */

@@ -56,6 +56,7 @@ final class SchemaCompiler {
     private final Path classes;
     private final Path sources;
     private final Path scratch;
+    private final Set<String> wholeFiles = new HashSet<>();
     private final Set<String> checkedOriginals = new HashSet<>();
     private final Map<Point, String> stillborn = new LinkedHashMap<>();
     private long renderNanos;
@@ -104,8 +105,9 @@ final class SchemaCompiler {
                     rendered.get(path).points().forEach(point -> leaving.putIfAbsent(point,
                             "its file's schema did not compile after " + ROUNDS_BEFORE_WHOLE_FILES + " rounds"));
                 }
+                wholeFiles.addAll(failing);
             }
-            checkWholeFilesCompile(rendered, leaving);
+            checkOriginalsCompile(rendered);
             leave(schema, evicted, leaving);
         }
     }
@@ -138,6 +140,9 @@ final class SchemaCompiler {
                         misfits.keySet());
                 traced.evicted().forEach(leaving::putIfAbsent);
                 traced.stillborn().forEach(stillborn::putIfAbsent);
+                if (traced.wholeFile()) {
+                    wholeFiles.add(file.path());
+                }
             }
             misfits.forEach(leaving::putIfAbsent);
             BranchTypes.mismatches(task, unit, file).forEach(leaving::putIfAbsent);
@@ -146,15 +151,15 @@ final class SchemaCompiler {
     }
 
     /**
-     * A file whose every point leaves is compiled once as it stands: if the original itself does not
-     * compile, the classpath is wrong and every mutant would look stillborn.
+     * A file whose errors could be pinned on nothing narrower than the file is compiled once as it
+     * stands: if the original itself does not compile, the classpath is wrong, and every mutant would
+     * otherwise look stillborn.
      */
-    private void checkWholeFilesCompile(Map<String, RenderedFile> rendered, Map<Point, String> leaving) {
-        for (RenderedFile file : rendered.values()) {
-            if (!checkedOriginals.contains(file.path()) && leaving.keySet().containsAll(file.points())) {
-                checkedOriginals.add(file.path());
+    private void checkOriginalsCompile(Map<String, RenderedFile> rendered) {
+        for (String path : wholeFiles) {
+            if (checkedOriginals.add(path)) {
                 Path output = scratch.resolve("original-check");
-                Javac.Task task = javac.task(List.of(new Javac.Source(file.path(), file.source().text())), output);
+                Javac.Task task = javac.task(List.of(new Javac.Source(path, rendered.get(path).source().text())), output);
                 task.analyze();
                 Outputs.deleteTree(output);
                 if (!task.errors().isEmpty()) {
