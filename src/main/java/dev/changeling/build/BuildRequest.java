@@ -1,6 +1,7 @@
 package dev.changeling.build;
 
 import dev.changeling.mutant.Mutant;
+import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
 import java.nio.file.Path;
 import java.util.List;
@@ -25,9 +26,17 @@ public record BuildRequest(List<Mutant> mutants, Map<String, SourceFile> files, 
         files = Map.copyOf(files);
         classpath = List.copyOf(classpath);
         for (Mutant mutant : mutants) {
-            if (!files.containsKey(mutant.file())) {
+            SourceFile file = files.get(mutant.file());
+            if (file == null) {
                 throw new IllegalArgumentException("mutant " + mutant.shortId() + " belongs to " + mutant.file()
                         + ", which is not among the files given");
+            }
+            for (Point point : mutant.points()) {
+                if (!point.file().equals(mutant.file()) || point.host().end() > file.text().length()
+                        || !point.host().contains(point.edit())) {
+                    throw new IllegalArgumentException("mutant " + mutant.shortId() + " has a change that does not fit "
+                            + mutant.file() + ": " + point.host() + " / " + point.edit() + " in " + point.file());
+                }
             }
         }
     }

@@ -2,7 +2,6 @@ package dev.changeling.build;
 
 import dev.changeling.build.RenderedFile.Branch;
 import dev.changeling.build.RenderedFile.HostRegion;
-import dev.changeling.mutant.HostKind;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.Span;
 import java.util.ArrayList;
@@ -12,7 +11,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.tools.Diagnostic;
 import javax.tools.JavaFileObject;
@@ -20,7 +18,7 @@ import javax.tools.JavaFileObject;
 /**
  * Traces javac's errors in one schema file back to the points that caused them: an error in a
  * mutated branch is that point's, an error elsewhere in a switch is its host's, and an error that
- * cannot be traced moves the statement deletions of its member, then the member, then the file.
+ * cannot be traced moves its likely {@link Culprits}. An error that may only echo another waits a round.
  */
 final class ErrorAttribution {
 
@@ -46,7 +44,7 @@ final class ErrorAttribution {
      * A name that cannot be found has usually left its scope (a deleted declaration, a pattern binding
      * now inside a switch), so its position names the cause only if the original host lacks the name.
      */
-    private static final String UNKNOWN_NAME = "compiler.err.cant.resolve";
+    static final String UNKNOWN_NAME = "compiler.err.cant.resolve";
 
     private static final String NEIGHBOURS = "moved with its neighbours after an error the schema could not trace: ";
 
@@ -57,20 +55,14 @@ final class ErrorAttribution {
     private static final Set<String> BAD_OPERANDS = Set.of(
             "compiler.err.operator.cant.be.applied", "compiler.err.operator.cant.be.applied.1");
 
-    /** Definite-assignment errors name their variable; the deletion that assigned it is the likely cause. */
-    private static final Set<String> NAMES_A_VARIABLE = Set.of(
-            "compiler.err.var.might.not.have.been.initialized",
-            "compiler.err.var.not.initialized.in.default.constructor");
-
-    private static final Pattern VARIABLE = Pattern.compile("variable (\\S+) ");
-
     /**
      * What one file's errors decide.
      *
      * @param evicted   the points to move out of the schema, each with the reason
      * @param stillborn of those, the ones whose own file is certain not to compile, with the error
+     * @param wholeFile  whether an error could be pinned on nothing narrower than the whole file
      */
-    record Traced(Map<Point, String> evicted, Map<Point, String> stillborn) {
+    record Traced(Map<Point, String> evicted, Map<Point, String> stillborn, boolean wholeFile) {
     }
 
     private ErrorAttribution() {
@@ -81,7 +73,8 @@ final class ErrorAttribution {
 
     /**
      * Traces one file's errors. {@code leavingAnyway} are points already known to leave (a constant
-     * loop condition): flow errors in their members may be their doing, so those wait for the next round.
+     * loop condition, a lone body): flow errors in their members may be their doing, so those wait for
+     * the next round.
      */
     static Traced trace(RenderedFile file, List<Diagnostic<? extends JavaFileObject>> errors, MemberSpans members,
                         Set<Point> leavingAnyway) {
@@ -113,6 +106,7 @@ final class ErrorAttribution {
         }
         Map<Point, String> evicted = new LinkedHashMap<>();
         Map<Point, String> stillborn = new LinkedHashMap<>();
+        boolean wholeFile = false;
         for (int i = 0; i < errors.size(); i++) {
             Diagnostic<? extends JavaFileObject> error = errors.get(i);
             String reason = Javac.describe(error);
@@ -137,13 +131,15 @@ final class ErrorAttribution {
                 }
                 case FLOW, UNTRACED -> {
                     if (!deferred.get(i)) {
-                        untraced(file, member, error).forEach(point -> evicted.putIfAbsent(point, NEIGHBOURS + reason));
+                        List<Point> culprits = Culprits.of(file, member, error);
+                        wholeFile |= culprits.size() == file.points().size();
+                        culprits.forEach(point -> evicted.putIfAbsent(point, NEIGHBOURS + reason));
                     }
                 }
                 default -> throw new IllegalStateException(traces.get(i).toString());
             }
         }
-        return new Traced(evicted, stillborn);
+        return new Traced(evicted, stillborn, wholeFile);
     }
 
     /** Whether the error is a bad-operands error at the text the point's edit put into its branch. */
@@ -182,45 +178,7 @@ final class ErrorAttribution {
         return offset < 0 ? null : members.innermostAt(offset);
     }
 
-    private static List<Point> untraced(RenderedFile file, Span member, Diagnostic<? extends JavaFileObject> error) {
-        if (member != null) {
-            List<Point> inMember = file.pointsWithin(member.begin(), member.end());
-            List<Point> deletions = inMember.stream().filter(point -> point.kind() == HostKind.STATEMENT).toList();
-            List<Point> assigning = assigningTheVariable(file, deletions, error);
-            if (!assigning.isEmpty()) {
-                return assigning;
-            }
-            if (!deletions.isEmpty()) {
-                return deletions;
-            }
-            if (!inMember.isEmpty()) {
-                return inMember;
-            }
-        }
-        return file.points();
-    }
-
-    /** For an error at a use of an unassigned variable, the deletions whose statement mentions it. */
-    private static List<Point> assigningTheVariable(RenderedFile file, List<Point> deletions,
-                                                    Diagnostic<? extends JavaFileObject> error) {
-        if (!NAMES_A_VARIABLE.contains(error.getCode())) {
-            return List.of();
-        }
-        Matcher variable = VARIABLE.matcher(error.getMessage(Locale.ROOT));
-        if (!variable.find()) {
-            return List.of();
-        }
-        // javac reports one error per position: at a constructor's end, the other unassigned fields stay unnamed
-        long begin = error.getStartPosition();
-        long end = error.getEndPosition();
-        if (begin < 0 || end > file.text().length() || !file.text().substring((int) begin, (int) end).equals(variable.group(1))) {
-            return List.of();
-        }
-        Pattern name = word(variable.group(1));
-        return deletions.stream().filter(point -> name.matcher(file.source().textOf(point.host())).find()).toList();
-    }
-
-    private static Pattern word(String name) {
+    static Pattern word(String name) {
         return Pattern.compile("(?<![\\w$])" + Pattern.quote(name) + "(?![\\w$])");
     }
 

@@ -4,6 +4,7 @@ import com.sun.source.tree.CompilationUnitTree;
 import com.sun.source.util.JavacTask;
 import com.sun.source.util.Trees;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.net.URI;
 import java.net.URISyntaxException;
@@ -13,6 +14,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import java.util.TreeSet;
@@ -163,20 +165,67 @@ final class Javac implements AutoCloseable {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+        return task(sources, (path, className, standard) -> standard.open());
+    }
+
+    /**
+     * A task over sources of distinct files that writes each file's classes to its own folder, so that
+     * mutants of different files can share one task.
+     */
+    Task task(List<Source> sources, Map<String, Path> outputByPath) {
+        return task(sources, (path, className, standard) -> {
+            Path folder = outputByPath.get(path);
+            if (folder == null) {
+                throw new IllegalStateException("no output folder for " + path);
+            }
+            return new ClassFile(folder.resolve(className.replace('.', '/') + ".class"));
+        });
+    }
+
+    /** Where the class {@code className}, compiled from {@code path}, is written. */
+    private interface Output {
+        JavaFileObject fileFor(String path, String className, StandardOutput standard) throws IOException;
+    }
+
+    /** The file the standard file manager would write to. */
+    private interface StandardOutput {
+        JavaFileObject open() throws IOException;
+    }
+
+    private Task task(List<Source> sources, Output output) {
         Set<String> written = new TreeSet<>();
         JavaFileManager recording = new ForwardingJavaFileManager<>(files) {
             @Override
             public JavaFileObject getJavaFileForOutput(Location location, String className, JavaFileObject.Kind kind,
                                                        FileObject sibling) throws IOException {
-                if (kind == JavaFileObject.Kind.CLASS) {
-                    written.add(className);
+                if (kind != JavaFileObject.Kind.CLASS) {
+                    return super.getJavaFileForOutput(location, className, kind, sibling);
                 }
-                return super.getJavaFileForOutput(location, className, kind, sibling);
+                written.add(className);
+                String path = sibling instanceof JavaFileObject source ? pathOf(source) : null;
+                return output.fileFor(path, className, () -> super.getJavaFileForOutput(location, className, kind, sibling));
             }
         };
         DiagnosticCollector<JavaFileObject> diagnostics = new DiagnosticCollector<>();
         JavacTask task = (JavacTask) compiler.getTask(null, recording, diagnostics, OPTIONS, null, sources);
         return new Task(task, diagnostics, written);
+    }
+
+    /** A class file written to a path of our choosing. */
+    private static final class ClassFile extends SimpleJavaFileObject {
+
+        private final Path path;
+
+        ClassFile(Path path) {
+            super(path.toUri(), Kind.CLASS);
+            this.path = path;
+        }
+
+        @Override
+        public OutputStream openOutputStream() throws IOException {
+            Files.createDirectories(path.getParent());
+            return Files.newOutputStream(path);
+        }
     }
 
     /** The project-relative path of one of our sources, also when javac hands it back wrapped. */

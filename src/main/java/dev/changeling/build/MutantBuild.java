@@ -29,8 +29,8 @@ public final class MutantBuild {
     static final String ALONE = "alone";
     static final String SCRATCH = "scratch";
 
-    private static final String ONCE_PER_JVM = "runs once per JVM (a static initialiser or a constant), "
-            + "where switching at run time cannot reach it";
+    private static final String ONCE_PER_JVM = "runs once per JVM (a static initialiser, a static field's or an "
+            + "enum constant's initialiser), where switching at run time cannot reach it";
 
     private MutantBuild() {
     }
@@ -61,25 +61,26 @@ public final class MutantBuild {
             schema.points().forEach(point -> ids.put(point, ids.size()));
 
             long fallbackStarted = System.nanoTime();
-            int aloneCompiles = 0;
+            List<AloneCompiler.Job> jobs = new ArrayList<>();
             for (Mutant mutant : runnable.values()) {
                 String reason = reasonToLeave(mutant, ids, schema.evicted());
+                String stillborn = reason == null ? null : certainlyStillborn(mutant, schema.stillborn());
                 if (reason == null) {
                     placements.put(mutant.fingerprint(),
                             Placement.inSchema(mutant.points().stream().map(ids::get).toList()));
-                } else if (certainlyStillborn(mutant, schema.stillborn()) != null) {
-                    placements.put(mutant.fingerprint(), Placement.stillborn(certainlyStillborn(mutant, schema.stillborn())));
+                } else if (stillborn != null) {
+                    placements.put(mutant.fingerprint(), Placement.stillborn(stillborn));
                 } else {
-                    SourceFile file = request.files().get(mutant.file());
-                    placements.put(mutant.fingerprint(), compileAlone(javac, mutant, file,
+                    jobs.add(new AloneCompiler.Job(mutant, request.files().get(mutant.file()),
                             output.resolve(ALONE).resolve(mutant.fingerprint()), reason));
-                    aloneCompiles++;
                 }
             }
+            AloneCompiler alone = new AloneCompiler(javac);
+            placements.putAll(alone.compile(jobs));
             long fallbackNanos = System.nanoTime() - fallbackStarted;
             Outputs.deleteTree(output.resolve(SCRATCH));
             BuildTimings timings = new BuildTimings(millis(schema.renderNanos()), millis(schema.compileNanos()),
-                    millis(fallbackNanos), schema.rounds(), aloneCompiles);
+                    millis(fallbackNanos), schema.rounds(), jobs.size(), alone.tasks());
             return new BuildResult(schema.points(), placements, output.resolve(SCHEMA),
                     new ArrayList<>(schema.classNames()), timings);
         }
@@ -106,17 +107,6 @@ public final class MutantBuild {
                 .min(Comparator.comparingInt(Point::line))
                 .map(stillborn::get)
                 .orElse(null);
-    }
-
-    private static Placement compileAlone(Javac javac, Mutant mutant, SourceFile file, Path classes, String reason) {
-        Javac.Task task = javac.task(List.of(new Javac.Source(file.path(), mutant.apply(file.text()))), classes);
-        task.analyze();
-        if (!task.errors().isEmpty()) {
-            Outputs.deleteTree(classes);
-            return Placement.stillborn(Javac.describe(task.errors().get(0)));
-        }
-        task.generate();
-        return Placement.alone(classes, reason);
     }
 
     private static void createFolder(Path folder) {

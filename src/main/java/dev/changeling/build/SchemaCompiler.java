@@ -56,6 +56,7 @@ final class SchemaCompiler {
     private final Path classes;
     private final Path sources;
     private final Path scratch;
+    private final Set<String> wholeFiles = new HashSet<>();
     private final Set<String> checkedOriginals = new HashSet<>();
     private final Map<Point, String> stillborn = new LinkedHashMap<>();
     private long renderNanos;
@@ -104,8 +105,9 @@ final class SchemaCompiler {
                     rendered.get(path).points().forEach(point -> leaving.putIfAbsent(point,
                             "its file's schema did not compile after " + ROUNDS_BEFORE_WHOLE_FILES + " rounds"));
                 }
+                wholeFiles.addAll(failing);
             }
-            checkWholeFilesCompile(rendered, leaving);
+            checkOriginalsCompile(rendered);
             leave(schema, evicted, leaving);
         }
     }
@@ -131,29 +133,33 @@ final class SchemaCompiler {
         for (CompilationUnitTree unit : task.units()) {
             RenderedFile file = rendered.get(Javac.pathOf(unit.getSourceFile()));
             List<Diagnostic<? extends JavaFileObject>> errors = errorsByFile.getOrDefault(file.path(), List.of());
-            Map<Point, String> constantLoops = LoopConditions.constantSides(task, unit, file);
+            Map<Point, String> misfits = new LinkedHashMap<>(LoopConditions.constantSides(task, unit, file));
+            StatementContexts.outsideBlocks(task, unit, file).forEach(misfits::putIfAbsent);
             if (!errors.isEmpty()) {
                 ErrorAttribution.Traced traced = ErrorAttribution.trace(file, errors, MemberSpans.of(unit, positions),
-                        constantLoops.keySet());
+                        misfits.keySet());
                 traced.evicted().forEach(leaving::putIfAbsent);
                 traced.stillborn().forEach(stillborn::putIfAbsent);
+                if (traced.wholeFile()) {
+                    wholeFiles.add(file.path());
+                }
             }
-            constantLoops.forEach(leaving::putIfAbsent);
+            misfits.forEach(leaving::putIfAbsent);
             BranchTypes.mismatches(task, unit, file).forEach(leaving::putIfAbsent);
         }
         return errorsByFile.keySet();
     }
 
     /**
-     * A file whose every point leaves is compiled once as it stands: if the original itself does not
-     * compile, the classpath is wrong and every mutant would look stillborn.
+     * A file whose errors could be pinned on nothing narrower than the file is compiled once as it
+     * stands: if the original itself does not compile, the classpath is wrong, and every mutant would
+     * otherwise look stillborn.
      */
-    private void checkWholeFilesCompile(Map<String, RenderedFile> rendered, Map<Point, String> leaving) {
-        for (RenderedFile file : rendered.values()) {
-            if (!checkedOriginals.contains(file.path()) && leaving.keySet().containsAll(file.points())) {
-                checkedOriginals.add(file.path());
+    private void checkOriginalsCompile(Map<String, RenderedFile> rendered) {
+        for (String path : wholeFiles) {
+            if (checkedOriginals.add(path)) {
                 Path output = scratch.resolve("original-check");
-                Javac.Task task = javac.task(List.of(new Javac.Source(file.path(), file.source().text())), output);
+                Javac.Task task = javac.task(List.of(new Javac.Source(path, rendered.get(path).source().text())), output);
                 task.analyze();
                 Outputs.deleteTree(output);
                 if (!task.errors().isEmpty()) {

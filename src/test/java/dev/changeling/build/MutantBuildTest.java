@@ -263,6 +263,11 @@ class MutantBuildTest {
             assertTrue(declaration.detail().contains("cannot find symbol"), declaration.detail());
             assertEquals(Placement.Kind.ALONE, result.placementOf(only(points, "return 0;", "")).kind(),
                     "a deletion beside the culprit moves with it");
+            Placement rate = result.placementOf(only(points, "rate=amount>100?20:10;", ""));
+            assertEquals("src/main/java/sample/Ledger.java:27: variable rate might not have been initialized", rate.detail());
+            Placement mark = result.placementOf(only(points, "mark(seen);", ""));
+            assertEquals(Placement.Kind.IN_SCHEMA, mark.kind(),
+                    "an error at a use of a variable moves only the deletions that set it: " + mark.detail());
             for (Point point : points) {
                 if (point.kind() != HostKind.STATEMENT) {
                     Placement placement = result.placementOf(Mutant.firstOrder(point));
@@ -271,6 +276,30 @@ class MutantBuildTest {
                 }
             }
             Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants, "sample.Ledger");
+        }
+
+        @Test
+        void mutantsOfSeveralFiles_compileAloneInSharedTasks_eachIntoItsOwnFolder() throws IOException {
+            TestProject project = TestProject.create(dir, Map.of("sample/Sacks.java", Samples.SACKS,
+                    "sample/Ledger.java", Samples.LEDGER));
+            List<Point> sacks = project.points("sample/Sacks.java", List.of(SampleOperators.LITERALS));
+            List<Point> ledger = project.points("sample/Ledger.java", List.of(deleteReturnsAndDeclarations));
+            Mutant narrowed = only(sacks, "10", "11");
+            Mutant early = only(ledger, "return 0;", "");
+            Mutant noReturn = only(ledger, "return net;", "");
+            BuildResult result = project.build(List.of(narrowed, early, noReturn));
+
+            assertEquals(Placement.Kind.ALONE, result.placementOf(narrowed).kind());
+            assertEquals(Placement.Kind.ALONE, result.placementOf(early).kind());
+            assertEquals(Placement.Kind.STILLBORN, result.placementOf(noReturn).kind());
+            assertEquals(3, result.timings().aloneCompiles());
+            assertTrue(result.timings().aloneTasks() < 3, result.timings().summary());
+            try (var walk = Files.walk(result.placementOf(narrowed).classes())) {
+                assertEquals(List.of("Sacks.class"), walk.filter(Files::isRegularFile)
+                        .map(path -> path.getFileName().toString()).toList());
+            }
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, List.of(narrowed), "sample.Sacks");
+            Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, List.of(early, noReturn), "sample.Ledger");
         }
 
         @Test
@@ -331,6 +360,29 @@ class MutantBuildTest {
             Placement bodyDeleted = result.placementOf(only(points, "count[0]+=n", ""));
             assertEquals(Placement.Kind.STILLBORN, bodyDeleted.kind(), "a lambda's expression body is no statement to delete");
             Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants, "sample.Sprinklers");
+        }
+    }
+
+    @Nested
+    class SwitchRules {
+
+        @Test
+        void armsOfSwitchesAndBodiesWithoutBraces_runExactlyAsTheirOwnFiles() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Months.java", Samples.SEASONS_SWITCH));
+            List<Point> points = project.points("sample/Months.java", SampleOperators.all());
+            List<Mutant> mutants = firstOrder(points);
+            BuildResult result = project.build(mutants);
+
+            Map<Placement.Kind, Integer> counts = Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants,
+                    "sample.Months");
+            assertTrue(count(counts, Placement.Kind.IN_SCHEMA) >= mutants.size() / 2, counts.toString());
+            assertEquals(Placement.Kind.IN_SCHEMA, result.placementOf(only(points, "month*10", "/")).kind());
+            assertEquals(Placement.Kind.STILLBORN, result.placementOf(only(points, "out+=\"fizz\";", "")).kind(),
+                    "an arrow case with its body deleted does not parse");
+            assertEquals(Placement.Kind.IN_SCHEMA, result.placementOf(only(points, "out=\"none\";", "")).kind(),
+                    "a deletion inside the arrow case's block is fine");
+            Placement unbraced = result.placementOf(only(points, "b++;", ""));
+            assertEquals(Placement.Kind.ALONE, unbraced.kind(), "its own file makes c++ the if's body: " + unbraced);
         }
     }
 
@@ -502,6 +554,17 @@ class MutantBuildTest {
 
             UserError error = assertThrows(UserError.class, () -> MutantBuild.compile(request));
             assertTrue(error.getMessage().startsWith("src/main/java/sample/Paths.java:9: cannot find symbol"), error.getMessage());
+        }
+
+        @Test
+        void changeOutsideItsHost_isRefused() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Labels.java", Samples.LABELS));
+            Point point = project.points("sample/Labels.java", List.of(SampleOperators.BINARY)).get(0);
+            Point astray = new Point(point.file(), point.type(), point.member(), point.operator(), point.kind(),
+                    point.host(), new Span(point.host().end(), point.host().end() + 1), "-", point.snippet(),
+                    point.description(), point.line(), false, point.fingerprint());
+            assertThrows(IllegalArgumentException.class, () -> new BuildRequest(List.of(Mutant.firstOrder(astray)),
+                    project.files, project.classpath(), project.output));
         }
 
         @Test

@@ -21,7 +21,7 @@ final class Outcomes {
             long.class, values(-4L, 0L, 3L),
             boolean.class, values(true, false),
             char.class, values('a', 'm', 'Z'),
-            String.class, values("", "ab", "fern"),
+            String.class, values(null, "", "ab", "fern"),
             Integer.class, values(null, 0, 4),
             int[].class, List.of(() -> new int[] {3, 1, 2}, () -> new int[0], () -> new int[] {-2, 7}));
 

@@ -80,6 +80,10 @@ final class Samples {
                     return a + b * c < c - a ? a : b;
                 }
 
+                public static boolean named(String tag) {
+                    return tag != null && tag.length() > 2 || tag == null && !tag.isEmpty();
+                }
+
                 public static boolean sorted(int[] values) {
                     for (int i = 1, guard = 0; i < values.length && guard < 40; i++, guard++) {
                         if (values[i - 1] > values[i]) {
@@ -159,6 +163,18 @@ final class Samples {
                     int fee = amount / 10;
                     fee += 2;
                     return fee;
+                }
+
+                public static int tax(int amount) {
+                    int rate;
+                    int[] seen = {0};
+                    rate = amount > 100 ? 20 : 10;
+                    mark(seen);
+                    return amount * rate / 100 + seen[0];
+                }
+
+                static void mark(int[] seen) {
+                    seen[0] = 1;
                 }
             }
             """;
@@ -348,6 +364,47 @@ final class Samples {
                         }
                         x += 2;
                     }
+                }
+            }
+            """;
+
+    /** Switch rules (an expression arm, a block arm with yield, arrow rules in a statement) and a body without braces. */
+    static final String SEASONS_SWITCH = """
+            package sample;
+
+            public final class Months {
+
+                private Months() {
+                }
+
+                public static int weight(int month) {
+                    return switch (month) {
+                        case 12, 1, 2 -> month * 10;
+                        case 3, 4, 5 -> {
+                            int base = month + 1;
+                            yield base * 2;
+                        }
+                        default -> month - 1;
+                    };
+                }
+
+                public static String kind(int n) {
+                    String out = "";
+                    switch (n % 3) {
+                        case 0 -> out += "fizz";
+                        case 1 -> out = out + n;
+                        default -> {
+                            out = "none";
+                        }
+                    }
+                    return out;
+                }
+
+                public static int tally(int a, int b) {
+                    int c = 0;
+                    if (a > 0) b++;
+                    c++;
+                    return b * 10 + c;
                 }
             }
             """;

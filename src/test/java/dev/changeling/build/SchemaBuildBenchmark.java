@@ -19,7 +19,8 @@ import java.util.Map;
  * Prints how long the build takes on the greenhouse sample (three files, a few hundred lines): all
  * first-order mutants of the sample operators, then those plus second-order ones. With
  * {@code --verify} it also compiles every mutant's own file the plain way and counts disagreements;
- * {@code --keep} leaves the project and its output in place for a look.
+ * {@code --keep} leaves the project and its output in place for a look; {@code --copies N} builds N
+ * copies of the sample in packages of their own, to see how the build scales.
  * Run after {@code mvn test-compile}:
  * {@code java -cp target/test-classes:target/classes:$(cat cp.txt) dev.changeling.build.SchemaBuildBenchmark}
  * where {@code cp.txt} comes from {@code mvn dependency:build-classpath -Dmdep.outputFile=cp.txt}.
@@ -34,21 +35,24 @@ public final class SchemaBuildBenchmark {
     public static void main(String[] args) throws IOException {
         boolean verify = List.of(args).contains("--verify");
         boolean keep = List.of(args).contains("--keep");
+        int copies = List.of(args).contains("--copies") ? Integer.parseInt(args[List.of(args).indexOf("--copies") + 1]) : 1;
         Path root = Files.createTempDirectory("changeling-benchmark");
         try {
-            TestProject project = greenhouse(root);
+            TestProject project = greenhouse(root, copies);
             List<Point> points = new ArrayList<>();
             long lines = 0;
-            for (String name : GREENHOUSE) {
-                points.addAll(project.points("greenhouse/" + name, SampleOperators.all()));
-                lines += project.file("greenhouse/" + name).lines().lineCount();
+            for (String path : project.files.keySet()) {
+                String name = path.substring(TestProject.SOURCE_ROOT.length());
+                points.addAll(project.points(name, SampleOperators.all()));
+                lines += project.file(name).lines().lineCount();
             }
             List<Mutant> firstOrder = points.stream().map(Mutant::firstOrder).toList();
             List<Mutant> withPairs = new ArrayList<>(firstOrder);
             withPairs.addAll(HigherOrder.combine(points, 2, HigherOrder.Scope.METHOD, 5L));
-            System.out.printf("greenhouse sample: %d files, %d lines, %d points%n", GREENHOUSE.size(), lines, points.size());
+            System.out.printf("greenhouse sample: %d files, %d lines, %d points%n", project.files.size(), lines, points.size());
 
             project.build(firstOrder);
+            plainCompile(project);
             report("first-order (warm JIT)", project, firstOrder, verify);
             report("first-order + second-order", project, withPairs, verify);
         } finally {
@@ -57,6 +61,18 @@ public final class SchemaBuildBenchmark {
             } else {
                 Outputs.deleteTree(root);
             }
+        }
+    }
+
+    /** The same files, unmutated, compiled once the same way: the yardstick for one schema round. */
+    private static void plainCompile(TestProject project) {
+        try (Javac javac = new Javac(project.classpath())) {
+            long started = System.nanoTime();
+            Javac.Task task = javac.task(project.files.values().stream()
+                    .map(file -> new Javac.Source(file.path(), file.text())).toList(), project.root.resolve("plain"));
+            task.analyze();
+            task.generate();
+            System.out.printf("plain compile of the unmutated files: %d ms%n", (System.nanoTime() - started) / 1_000_000);
         }
     }
 
@@ -94,11 +110,16 @@ public final class SchemaBuildBenchmark {
                 .forEach(p -> System.out.println("  " + p.kind() + ": " + p.detail()));
     }
 
-    static TestProject greenhouse(Path root) {
+    /** The greenhouse sources, {@code copies} times over in packages of their own when more than once. */
+    static TestProject greenhouse(Path root, int copies) {
         Map<String, String> sources = new LinkedHashMap<>();
         for (String name : GREENHOUSE) {
             try (InputStream in = SchemaBuildBenchmark.class.getResourceAsStream("greenhouse/greenhouse/" + name)) {
-                sources.put("greenhouse/" + name, new String(in.readAllBytes(), StandardCharsets.UTF_8));
+                String text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+                for (int copy = 0; copy < copies; copy++) {
+                    String pack = copies == 1 ? "greenhouse" : "greenhouse" + copy;
+                    sources.put(pack + "/" + name, text.replace("package greenhouse;", "package " + pack + ";"));
+                }
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
