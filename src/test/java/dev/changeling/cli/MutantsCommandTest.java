@@ -1,0 +1,102 @@
+package dev.changeling.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.changeling.ExitCode;
+import dev.changeling.support.Git;
+import dev.changeling.support.SampleCopy;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class MutantsCommandTest {
+
+    @TempDir
+    Path temp;
+
+    private record Outcome(int code, String out, String err) {
+    }
+
+    private static Outcome execute(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.execute(new PrintWriter(out, true), new PrintWriter(err, true), args);
+        return new Outcome(code, out.toString(), err.toString());
+    }
+
+    /** The printed diffs: the unified-diff lines that follow each "# mutant" header. */
+    private static List<String> diffs(String output) {
+        List<String> diffs = new ArrayList<>();
+        StringBuilder current = null;
+        for (String line : output.split("\n", -1)) {
+            boolean diffLine = !line.isEmpty() && " +-@\\".indexOf(line.charAt(0)) >= 0;
+            if (current != null && !diffLine) {
+                diffs.add(current.toString());
+                current = null;
+            }
+            if (line.startsWith("# mutant ")) {
+                current = new StringBuilder();
+            } else if (current != null) {
+                current.append(line).append('\n');
+            }
+        }
+        return diffs;
+    }
+
+    @Test
+    void everyPrintedDiffOfTheSampleAppliesWithGitOnACleanCheckout() throws IOException {
+        Path sample = SampleCopy.of("greenhouse", temp);
+        Git git = Git.initCommitted(sample);
+        Outcome listed = execute("mutants", sample.toString(), "--diffs", "--plain");
+        assertEquals(ExitCode.OK, listed.code(), listed.err());
+        List<String> diffs = diffs(listed.out());
+        assertTrue(diffs.size() > 50, "only " + diffs.size() + " diffs in:\n" + listed.out());
+        Path patch = temp.resolve("one.patch");
+        for (String diff : diffs) {
+            Files.writeString(patch, diff, StandardCharsets.UTF_8);
+            Git.Result check = git.tryRun("apply", "--check", patch.toString());
+            assertEquals(0, check.exitCode(), () -> check.output() + "\n" + diff);
+        }
+        assertEquals("", git.run("status", "--porcelain"), "listing mutants must not touch the project");
+    }
+
+    @Test
+    void countsPerOperatorAndFileAndTheTotal() {
+        Outcome listed = execute("mutants", SampleCopy.original("greenhouse").toString(), "--plain");
+        assertEquals(ExitCode.OK, listed.code(), listed.err());
+        assertTrue(listed.out().contains("by operator:\n"), listed.out());
+        assertTrue(listed.out().contains("by file:\n"), listed.out());
+        assertTrue(listed.out().matches("(?s).*\\n\\d+ mutants in 4 files\\n"), listed.out());
+        assertFalse(listed.out().contains("\u001b["), "no colour codes when asked for plain text");
+    }
+
+    @Test
+    void aFileThatDoesNotParseIsReportedWithItsLineAndSkipped() throws IOException {
+        Path project = temp.resolve("broken");
+        Files.createDirectories(project.resolve("src/main/java/p"));
+        Files.writeString(project.resolve("pom.xml"), "<project/>");
+        Files.writeString(project.resolve("src/main/java/p/Good.java"), "package p;\nclass Good { boolean f(int a) { return a < 3; } }\n");
+        Files.writeString(project.resolve("src/main/java/p/Bad.java"), "package p;\nclass Bad {\n  void f( {\n}\n");
+        Outcome listed = execute("mutants", project.toString(), "--plain");
+        assertEquals(ExitCode.OK, listed.code());
+        assertTrue(listed.err().contains("skipped src/main/java/p/Bad.java:3: "), listed.err());
+        assertTrue(listed.out().contains("in 1 files, 1 files skipped"), listed.out());
+    }
+
+    @Test
+    void anUnknownOperatorIsOneLineWithTheKnownOnes() {
+        Outcome listed = execute("mutants", SampleCopy.original("greenhouse").toString(), "--operators", "no-such-thing");
+        assertEquals(ExitCode.USER_ERROR, listed.code());
+        assertTrue(listed.err().startsWith("changeling: unknown operator 'no-such-thing'; known operators: relational-subset"), listed.err());
+        assertEquals(1, listed.err().strip().lines().count(), listed.err());
+    }
+}
