@@ -25,7 +25,10 @@ import com.github.javaparser.ast.type.Type;
 import java.util.Optional;
 import java.util.stream.Stream;
 
-/** Reads what a source declares, without solving types: where a name is declared, the type written for a variable, a destination or a method's result. */
+/**
+ * Reads what a source declares, without solving types: where a name is declared, and the type
+ * written for a variable, for the place a value goes to, or for a method's result.
+ */
 final class Declarations {
 
     private Declarations() {
@@ -37,7 +40,7 @@ final class Declarations {
                 && named.getScope().map(scope -> scope.asString().equals("java.lang")).orElse(true);
     }
 
-    /** The written type of the place a value goes to: the variable it initialises or is assigned to, or the method it is returned from. */
+    /** The written type of where a value goes: the variable it initialises or is assigned to, or the method returning it. */
     static Optional<Type> ofDestination(Expression value) {
         Node child = value;
         Node parent = value.getParentNode().orElse(null);
