@@ -83,6 +83,7 @@ class ReviewWorkflowTest {
         MutantResult equivalent = survivorWhoseDiffAdds(first, "if (seconds < 0) {");
         MutantResult needsTest = survivorWhoseDiffAdds(first, "if (false) {");
         int survivorsFirst = count(first, Verdict.SURVIVED);
+        assertTrue(firstRun.err().contains("mutants: " + first.size() + " in 1 file (changes since HEAD~1)"), firstRun.err());
         assertTrue(firstRun.out().contains("mutation score"), firstRun.out());
         assertTrue(firstRun.out().contains(survivorsFirst + " survivors to look at"), firstRun.out());
 
