@@ -73,6 +73,12 @@ public final class MutationRun {
         }
     }
 
+    /** Counts the files that hold mutants: the parsed files also include those only compiled alongside. */
+    static String inFiles(List<String> mutantFiles) {
+        long files = mutantFiles.stream().distinct().count();
+        return "in " + files + (files == 1 ? " file" : " files");
+    }
+
     private RunResults run() {
         long started = System.nanoTime();
         Map<String, Double> timings = new LinkedHashMap<>();
@@ -91,7 +97,7 @@ public final class MutationRun {
         timings.put("generate", millisSince(at));
         listener.phase("mutants: " + chosen.mutants().size()
                 + (chosen.sampled() ? " sampled from " + chosen.population() : "")
-                + " in " + chosen.generated().files().size() + " files"
+                + " " + inFiles(chosen.mutants().stream().map(Mutant::file).toList())
                 + request.change().map(change -> " (" + change.description() + ")").orElse(""));
         chosen.generated().problems().forEach(problem -> listener.phase("skipped " + problem));
         checkNotStopped();
