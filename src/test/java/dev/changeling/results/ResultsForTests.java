@@ -49,7 +49,7 @@ public final class ResultsForTests {
 
     /** Every mutant the real generator makes of these files at these orders (default operators), all as survivors. */
     public static List<MutantResult> survivorsOf(List<SourceFile> files, List<Integer> orders) {
-        MutantRequest request = new MutantRequest(Operators.defaults(), orders, HigherOrder.Scope.METHOD, 7L, point -> true);
+        MutantRequest request = new MutantRequest(Operators.named(List.of("relational-subset")), orders, HigherOrder.Scope.METHOD, 7L, point -> true);
         Generation.Generated generated = Generation.generate(files, request);
         if (!generated.problems().isEmpty()) {
             throw new IllegalArgumentException("sample does not parse: " + generated.problems());
