@@ -96,6 +96,33 @@ final class Suite {
     }
 
     /**
+     * Runs several tests in one request, which pays for discovery once instead of once per test; their
+     * outcomes come back in the order given. If the request cannot be discovered (an id that no longer
+     * selects anything), every test runs on its own instead, so that a missing test never looks like a kill.
+     */
+    List<SingleTestRun.Result> runTogether(List<String> uniqueIds) {
+        LAUNCHER_LOG.setLevel(Level.WARNING);
+        LauncherDiscoveryRequest request = LauncherDiscoveryRequestBuilder.request()
+                .selectors(uniqueIds.stream().map(id -> selectUniqueId(id)).toList())
+                .configurationParameter(PARALLEL, "false")
+                .build();
+        TestPlan plan;
+        try {
+            plan = launcher().discover(request);
+        } catch (RuntimeException notFound) {
+            return uniqueIds.stream().map(this::runOne).toList();
+        }
+        if (uniqueIds.stream().anyMatch(id -> plan.countTestIdentifiers(node -> id.equals(node.getUniqueId())) == 0)) {
+            return uniqueIds.stream().map(this::runOne).toList();
+        }
+        TogetherRun listener = new TogetherRun(uniqueIds);
+        launcher().execute(plan, listener);
+        Thread.interrupted();
+        Thread.currentThread().setContextClassLoader(ClassLoader.getSystemClassLoader());
+        return listener.results();
+    }
+
+    /**
      * Whether the plan has the test, or has no test at all but a container below the engine that may yet
      * register it (parameterised and dynamic tests appear only while they run). An id that selects
      * nothing is not run: engines report that as a failure of their own (a stand-in test, a failed

@@ -1,0 +1,75 @@
+package dev.changeling.worker;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.junit.platform.engine.TestExecutionResult;
+import org.junit.platform.launcher.TestExecutionListener;
+import org.junit.platform.launcher.TestIdentifier;
+
+/**
+ * Watches one request that runs several selected tests together: each target's own outcome and time,
+ * and a failing container (class setup, say) counting as a failure of the targets inside it.
+ */
+final class TogetherRun implements TestExecutionListener {
+
+    private final List<String> targets;
+    private final Map<String, SingleTestRun.Result> results = new HashMap<>();
+    private final Map<String, Long> started = new HashMap<>();
+    private final Map<String, String> failedContainers = new HashMap<>();
+
+    TogetherRun(List<String> targets) {
+        this.targets = List.copyOf(targets);
+    }
+
+    @Override
+    public void executionStarted(TestIdentifier identifier) {
+        started.put(identifier.getUniqueId(), System.nanoTime());
+    }
+
+    @Override
+    public void executionSkipped(TestIdentifier identifier, String reason) {
+        for (String target : targets) {
+            if (covers(identifier, target)) {
+                results.putIfAbsent(target, new SingleTestRun.Result(Wire.SKIPPED, 0, reason));
+            }
+        }
+    }
+
+    @Override
+    public void executionFinished(TestIdentifier identifier, TestExecutionResult result) {
+        String id = identifier.getUniqueId();
+        long nanos = System.nanoTime() - started.getOrDefault(id, System.nanoTime());
+        String message = result.getThrowable().map(Failures::describe).orElse(null);
+        if (targets.contains(id)) {
+            byte status = switch (result.getStatus()) {
+                case SUCCESSFUL -> Wire.PASSED;
+                case ABORTED -> Wire.ABORTED;
+                case FAILED -> Wire.FAILED;
+            };
+            results.put(id, new SingleTestRun.Result(status, nanos, message));
+        } else if (result.getStatus() == TestExecutionResult.Status.FAILED) {
+            failedContainers.put(id, message == null ? "failed" : message);
+        }
+    }
+
+    /** The outcome of each target, in the order given; a target inside a failed container failed with it. */
+    List<SingleTestRun.Result> results() {
+        return targets.stream().map(this::resultOf).toList();
+    }
+
+    private SingleTestRun.Result resultOf(String target) {
+        for (Map.Entry<String, String> container : failedContainers.entrySet()) {
+            if (target.startsWith(container.getKey() + "/")) {
+                return new SingleTestRun.Result(Wire.FAILED, results.containsKey(target) ? results.get(target).nanos() : 0,
+                        container.getValue());
+            }
+        }
+        return results.getOrDefault(target, new SingleTestRun.Result(Wire.MISSING, 0, null));
+    }
+
+    private static boolean covers(TestIdentifier identifier, String target) {
+        String id = identifier.getUniqueId();
+        return target.equals(id) || target.startsWith(id + "/");
+    }
+}
