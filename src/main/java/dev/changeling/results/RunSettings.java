@@ -18,6 +18,8 @@ import java.util.List;
  * @param timeExtraMillis constant added to every deadline
  * @param skipTests   test class patterns left out
  * @param skipTags    JUnit tags left out
+ * @param mavenArguments extra arguments given to every mvn call
+ * @param workerHeap  each worker's heap
  */
 public record RunSettings(
         String project,
@@ -32,10 +34,13 @@ public record RunSettings(
         double timeFactor,
         long timeExtraMillis,
         List<String> skipTests,
-        List<String> skipTags) {
+        List<String> skipTags,
+        List<String> mavenArguments,
+        String workerHeap) {
 
     public RunSettings {
         skipTests = skipTests == null ? List.of() : List.copyOf(skipTests);
         skipTags = skipTags == null ? List.of() : List.copyOf(skipTags);
+        mavenArguments = mavenArguments == null ? List.of() : List.copyOf(mavenArguments);
     }
 }

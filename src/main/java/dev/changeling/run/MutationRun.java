@@ -261,7 +261,7 @@ public final class MutationRun {
                 selection.sampleSeed(), chosen.sampled(), chosen.population(),
                 request.change().map(change -> change.description()).orElse(null),
                 request.workers(), request.deadlines().factor(), request.deadlines().constantMillis(),
-                request.skipTests(), request.skipTags());
+                request.skipTests(), request.skipTags(), request.discovery().mavenArguments(), request.workerHeap());
     }
 
     private static Map<String, String> hashes(Map<String, SourceFile> files, List<MutantResult> results) {

@@ -46,8 +46,9 @@ public final class Rerun implements MutantRerun {
             throw new UserError("cannot run " + mutant.shortId() + " again: " + e.getMessage());
         }
         RunRequest again = new RunRequest(projectRoot, List.of(), new Selection(request, null, null, settings.seed()),
-                Optional.empty(), DiscoveryOptions.defaults(), 1,
-                new Deadlines(settings.timeFactor(), settings.timeExtraMillis()), WorkerSettings.DEFAULT_MAX_HEAP,
+                Optional.empty(), DiscoveryOptions.defaults().withMavenArguments(settings.mavenArguments()), 1,
+                new Deadlines(settings.timeFactor(), settings.timeExtraMillis()),
+                settings.workerHeap() == null ? WorkerSettings.DEFAULT_MAX_HEAP : settings.workerHeap(),
                 WorkerSettings.DEFAULT_MUTANTS_PER_WORKER, settings.skipTests(), settings.skipTags());
         RunResults results = new MutationRun(again, RunListener.SILENT).execute();
         return results.mutants().stream()

@@ -69,7 +69,8 @@ public final class Progress {
         StringBuilder line = new StringBuilder();
         line.append(done).append('/').append(total).append(" mutants");
         if (counted > 0) {
-            line.append(String.format(Locale.ROOT, ", score so far %.2f", (double) detected / counted));
+            // Rounded down, as the final summary is, so that the two never disagree.
+            line.append(String.format(Locale.ROOT, ", score so far %.2f", Math.floor(100.0 * detected / counted) / 100));
         }
         if (done > 0 && done < total) {
             long left = (nowNanos - startNanos) / done * (total - done);
