@@ -154,13 +154,14 @@ final class BaselineRecorder implements TestExecutionListener {
     }
 
     /**
-     * The time the test's containers spend on their own (class setup and teardown, engine start), which
-     * running the test alone pays again in full.
+     * The time the test's containers spend on their own (class setup and teardown), which running the
+     * test alone pays again in full. The engine's own time is left out: a worker pays it once, when it
+     * is prepared, and in a large suite it adds up to seconds that would inflate every deadline.
      */
     private long containerOverhead(TestIdentifier test) {
         long overhead = 0;
         Optional<TestIdentifier> container = plan.getParent(test);
-        while (container.isPresent()) {
+        while (container.isPresent() && plan.getParent(container.get()).isPresent()) {
             String id = container.get().getUniqueId();
             overhead += Math.max(0, durations.getOrDefault(id, 0L) - childrenDurations.getOrDefault(id, 0L));
             container = plan.getParent(container.get());
