@@ -6,19 +6,7 @@
 #   src/bench/run.sh [extra changeling run options...]
 set -euo pipefail
 
-repo_root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
-jar="$repo_root/target/changeling.jar"
-project="$repo_root/target/bench/commons-cli"
-classes="$repo_root/target/bench/classes"
-
-if [[ ! -f "$jar" ]]; then
-  echo "error: $jar is missing; build it first with: mvn -q package -DskipTests" >&2
-  exit 1
-fi
-"$repo_root/src/bench/commons-cli/setup.sh" "$project"
-rm -rf "$classes"
-mkdir -p "$classes"
-javac --release 17 -cp "$jar" -d "$classes" "$repo_root/src/bench/java/RunFigures.java"
+source "$(dirname "${BASH_SOURCE[0]}")/prepare.sh" RunFigures.java
 
 cd "$project"
 # One untimed build so that both timed commands start from the same warm local repository.

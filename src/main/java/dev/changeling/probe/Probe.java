@@ -75,31 +75,6 @@ public final class Probe {
         }
     }
 
-    /** Lets a value-producing expression stand as a statement in a schema ({@code i++;}, a for-loop update). */
-    public static void discard(boolean value) {
-        // the expression was evaluated for its side effect; nothing to keep
-    }
-
-    public static void discard(int value) {
-        // as above
-    }
-
-    public static void discard(long value) {
-        // as above
-    }
-
-    public static void discard(float value) {
-        // as above
-    }
-
-    public static void discard(double value) {
-        // as above
-    }
-
-    public static void discard(Object value) {
-        // as above
-    }
-
     /**
      * Hands its argument back, so that a switch standing where a statement expression stood ({@code i++;},
      * a for-loop update, a lambda body such as {@code () -> count++}) is still one, with the same value.
