@@ -116,13 +116,15 @@ final class WorkerSlot {
      * A fresh worker loads the test engine and the tests' classes while it runs its first tests, which on a busy
      * machine takes seconds, far more than the few milliseconds of running them again; charged to the first
      * mutant's deadline, it turned mutants that merely fail or pass into false timeouts (and each timeout starts
-     * another fresh worker). So the job's tests run once unmutated first, under the start timeout.
+     * another fresh worker). So the job's first test runs once unmutated first, under the start timeout; one test
+     * is enough to load the engine, and keeps the cost low for a mutant that thousands of tests reach.
      */
     private void warmUp(MutantJob job) {
-        if (warm) {
+        if (warm || job.tests().isEmpty()) {
             return;
         }
-        JobResult warming = worker.run(MutantJob.schema(job.key(), new int[0], job.tests(), settings.startTimeout().toMillis()));
+        JobResult warming = worker.run(MutantJob.schema(job.key(), new int[0], job.tests().subList(0, 1),
+                settings.startTimeout().toMillis()));
         if (warming.outcome() == Outcome.TIMED_OUT || warming.outcome() == Outcome.CRASHED) {
             // The unmutated tests did not come back: the mutant runs in a fresh worker as it would have without this.
             retire();

@@ -169,6 +169,7 @@ class InterruptedRunTest {
             }
         }
 
+        /** 130 is 128 + 2, SIGINT's number: the shells' convention for a command ended by a signal (POSIX sh, "Exit Status"). */
         @Test
         void exitsWith130_andSaysWhereTheVerdictsAre() {
             assertEquals(ExitCode.INTERRUPTED, exitCode, stderr::toString);

@@ -16,7 +16,9 @@ import java.util.concurrent.Future;
 
 /**
  * The check of the tool's verdicts against Maven itself: each mutant's stored unified diff is applied with
- * the real {@code git apply} to a fresh copy of the sample, and the real {@code mvn test} runs there.
+ * the real {@code git apply} to a fresh copy of the sample, and the real {@code mvn test} runs there. The
+ * reference is Maven Surefire's own verdict on the project's tests; the diff must apply as {@code git apply}
+ * reads unified diffs (git's documentation of git-apply; the format of GNU diffutils' {@code diff -u}).
  */
 final class MavenAgreement {
 
@@ -60,12 +62,18 @@ final class MavenAgreement {
         };
     }
 
-    /** Applies and tests every mutant in its own copy of {@code sample} below {@code work}, two at a time. */
+    /**
+     * Applies and tests every mutant in its own copy of {@code sample} below {@code work}, two at a time; mutants
+     * the tool skipped (code run once per JVM) have no verdict to confirm and are left out.
+     */
     static List<Judged> judge(String sample, List<MutantResult> mutants, Path work) {
         ExecutorService maven = Executors.newFixedThreadPool(PARALLEL);
         try {
             List<Future<Judged>> pending = new ArrayList<>();
             for (MutantResult mutant : mutants) {
+                if (expected(mutant.verdict()) == null) {
+                    continue;
+                }
                 pending.add(maven.submit(() -> judgeOne(sample, mutant, work.resolve("mutant-" + mutant.shortId()))));
             }
             List<Judged> judged = new ArrayList<>();
@@ -83,7 +91,7 @@ final class MavenAgreement {
         }
     }
 
-    /** "agreement 23/24 on greenhouse", counting only the mutants Maven can confirm. */
+    /** "agreement 23/24 on greenhouse": how many of the judged mutants Maven agrees with. */
     static String figure(String sample, List<Judged> judged) {
         long agreeing = judged.stream().filter(Judged::agrees).count();
         return "agreement " + agreeing + "/" + judged.size() + " on " + sample;
