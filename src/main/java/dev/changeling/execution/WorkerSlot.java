@@ -25,6 +25,7 @@ final class WorkerSlot {
     private WorkerProcess worker;
     private WorkerProcess.Prepared prepared;
     private int mutantsOnWorker;
+    private boolean warm;
     private volatile WorkerProcess live;
     private volatile WorkerProcess liveAlone;
 
@@ -43,7 +44,9 @@ final class WorkerSlot {
     Baseline baseline(Consumer<String> onTestFinished) {
         ensureWorker();
         try {
-            return worker.baseline(prepared, onTestFinished, settings.baselineTimeout().toMillis());
+            Baseline baseline = worker.baseline(prepared, onTestFinished, settings.baselineTimeout().toMillis());
+            warm = true;
+            return baseline;
         } catch (RuntimeException e) {
             // The conversation broke off in the middle (a listener threw, the worker said something odd).
             retire();
@@ -63,6 +66,7 @@ final class WorkerSlot {
         ensureWorker();
         JobResult result;
         try {
+            warmUp(job);
             result = worker.run(job);
         } catch (RuntimeException e) {
             retire();
@@ -118,6 +122,29 @@ final class WorkerSlot {
         }
     }
 
+    /**
+     * A fresh worker loads the test engine and the tests' classes while it runs its first tests, which on a busy
+     * machine takes seconds, far more than the few milliseconds of running them again; charged to the first
+     * mutant's deadline, it turned mutants that merely fail or pass into false timeouts (and each timeout starts
+     * another fresh worker). So the job's first test runs once unmutated first, under the start timeout; one test
+     * is enough to load the engine, and keeps the cost low for a mutant that thousands of tests reach.
+     */
+    private void warmUp(MutantJob job) {
+        if (warm || job.tests().isEmpty()) {
+            return;
+        }
+        JobResult warming = worker.run(MutantJob.schema(job.key(), new int[0], job.tests().subList(0, 1),
+                settings.startTimeout().toMillis()));
+        if (warming.outcome() == Outcome.TIMED_OUT || warming.outcome() == Outcome.CRASHED) {
+            // The unmutated tests did not come back: the mutant runs in a fresh worker as it would have without this.
+            retire();
+            pool.throwIfStopped();
+            ensureWorker();
+            return;
+        }
+        warm = true;
+    }
+
     private void ensureWorker() {
         if (worker != null) {
             return;
@@ -137,6 +164,7 @@ final class WorkerSlot {
         }
         worker = started;
         mutantsOnWorker = 0;
+        warm = false;
     }
 
     private WorkerProcess launch(List<Path> first, Path folder, Path arguments, boolean alone) {

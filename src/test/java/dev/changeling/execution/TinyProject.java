@@ -23,6 +23,10 @@ import javax.tools.ToolProvider;
  * reads turns bad; 6 reached by no test; 7 in a static initialiser; 8 {@code depth} recurses without
  * end; 9 {@code spawn} starts a child process and then waits forever; 10 {@code leak} starts a thread
  * that never ends.
+ *
+ * <p>A launcher started in a JVM with {@code -Dshop.slowStart=<ms>} takes that long to start, once per JVM, as
+ * loading a large suite's engines and classes can: {@code shop.SlowStart}, a registered test execution listener,
+ * sleeps in its static initialiser.
  */
 final class TinyProject {
 
@@ -172,6 +176,21 @@ final class TinyProject {
                         @Test void addsSlowly() { assertEquals(5, Prices.add(2, 3)); }
                     }
                     """),
+            Map.entry("shop/SlowStart.java", """
+                    package shop;
+
+                    import org.junit.platform.launcher.TestExecutionListener;
+
+                    public final class SlowStart implements TestExecutionListener {
+                        static {
+                            try {
+                                Thread.sleep(Long.getLong("shop.slowStart", 0));
+                            } catch (InterruptedException e) {
+                                Thread.currentThread().interrupt();
+                            }
+                        }
+                    }
+                    """),
             Map.entry("shop/PriceChecks.java", """
                     package shop;
 
@@ -212,6 +231,9 @@ final class TinyProject {
         List<Path> testPath = new ArrayList<>(junitJars());
         testPath.add(project.classes);
         compile(testSources, testPath, project.testClasses);
+        Path services = project.testClasses.resolve("META-INF/services");
+        Files.createDirectories(services);
+        Files.writeString(services.resolve("org.junit.platform.launcher.TestExecutionListener"), "shop.SlowStart\n");
         return project;
     }
 

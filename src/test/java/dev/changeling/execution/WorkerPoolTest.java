@@ -299,6 +299,26 @@ class WorkerPoolTest {
     }
 
     @Nested
+    class ColdStart {
+
+        /** The worker starts its launcher when it runs its first tests; here that takes 3 s, beyond the mutants' deadlines. */
+        @Test
+        void aFreshWorkersStartIsNotChargedToItsFirstMutant_evenAfterATimeout() {
+            WorkerSettings slow = settings("cold").withJvmArguments(List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC",
+                    "-Dshop.slowStart=3000"));
+            try (WorkerPool pool = WorkerPool.open(slow, setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        MutantJob.schema("loops", new int[] {2}, List.of(method("HostileTest", "countsToThree")), 2_000),
+                        MutantJob.schema("fails", new int[] {0}, List.of(method("PricesTest", "addsTwoNumbers")), 2_000),
+                        MutantJob.schema("passes", new int[] {0}, List.of(method("PricesTest", "addsZero")), 2_000)), result -> { });
+                assertEquals(List.of(Outcome.TIMED_OUT, Outcome.KILLED, Outcome.SURVIVED), results.stream().map(JobResult::outcome).toList(),
+                        results::toString);
+                assertEquals(2, pool.workersStarted());
+            }
+        }
+    }
+
+    @Nested
     class Crashes {
 
         @Test

@@ -1,0 +1,159 @@
+package dev.changeling.run;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.changeling.ExitCode;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.PointRecord;
+import dev.changeling.results.Verdict;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
+import org.junit.jupiter.api.Timeout;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Every mutant of the hostile sample (endless loops, System.exit, endless recursion, memory exhaustion, a thread
+ * blocked for good) run once by {@code changeling run}: each gets the verdict its code calls for, and no worker
+ * JVM outlives the run.
+ */
+@Tag("e2e")
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
+class HostileRunTest {
+
+    /**
+     * The verdict each mutant's code calls for, by "Type original-expression → replacement". The reasons are
+     * worked out from the sample's code and tests (samples/README.md names the hostile spots).
+     */
+    static final Map<String, Verdict> EXPECTED = new TreeMap<>(Map.ofEntries(
+            // perPass 0 passes the guard, and the recursion on readings - 0 ends in a StackOverflowError, not the exception expected
+            Map.entry("Backlog perPass<=0 → <", Verdict.KILLED),
+            // no test passes a negative perPass
+            Map.entry("Backlog perPass<=0 → ==", Verdict.SURVIVED),
+            Map.entry("Backlog perPass<=0 → true", Verdict.KILLED),
+            Map.entry("Backlog readings<=0 → <", Verdict.KILLED),
+            // hostile: 250 steps past 0 and recurses until the stack overflows, an error JUnit reports inside the JVM
+            Map.entry("Backlog readings<=0 → ==", Verdict.KILLED),
+            Map.entry("Backlog readings<=0 → true", Verdict.KILLED),
+            // an interval of 0 then divides by zero: ArithmeticException where IllegalArgumentException is expected
+            Map.entry("ReadingSchedule intervalSeconds<=0 → <", Verdict.KILLED),
+            Map.entry("ReadingSchedule intervalSeconds<=0 → ==", Verdict.SURVIVED),
+            Map.entry("ReadingSchedule intervalSeconds<=0 → true", Verdict.KILLED),
+            Map.entry("ReadingSchedule second<toSecond → <=", Verdict.KILLED),
+            // the counter steps by one from below, so it meets toSecond exactly
+            Map.entry("ReadingSchedule second<toSecond → !=", Verdict.SURVIVED),
+            // javac: a for loop whose condition is the constant false has an unreachable body
+            Map.entry("ReadingSchedule second<toSecond → false", Verdict.STILLBORN),
+            // the remainder of non-negative numbers is never below 0
+            Map.entry("ReadingSchedule second%intervalSeconds==0 → <=", Verdict.SURVIVED),
+            Map.entry("ReadingSchedule second%intervalSeconds==0 → >=", Verdict.KILLED),
+            Map.entry("ReadingSchedule second%intervalSeconds==0 → false", Verdict.KILLED),
+            Map.entry("SampleBuffer reservedBytes<wantedBytes → <=", Verdict.KILLED),
+            // hostile: the total jumps over a size that is no whole number of chunks, so it allocates until the heap is gone
+            Map.entry("SampleBuffer reservedBytes<wantedBytes → !=", Verdict.CRASHED),
+            Map.entry("SampleBuffer reservedBytes<wantedBytes → false", Verdict.STILLBORN),
+            // hostile: the uploader waits for a fourth batch that never comes, and the test's join() with it
+            Map.entry("Uploader count<expectedBatches → <=", Verdict.TIMED_OUT),
+            Map.entry("Uploader count<expectedBatches → !=", Verdict.SURVIVED),
+            Map.entry("Uploader count<expectedBatches → false", Verdict.STILLBORN),
+            // the tests try 0 and 2 faults only, for which these guards stay false
+            Map.entry("Watchdog faults>=FATAL_FAULTS → >", Verdict.SURVIVED),
+            Map.entry("Watchdog faults>=FATAL_FAULTS → ==", Verdict.SURVIVED),
+            // hostile: System.exit(70) ends the worker JVM
+            Map.entry("Watchdog faults>=FATAL_FAULTS → true", Verdict.CRASHED),
+            // faults are never negative
+            Map.entry("Watchdog faults==0 → <=", Verdict.SURVIVED),
+            Map.entry("Watchdog faults==0 → >=", Verdict.KILLED),
+            Map.entry("Watchdog faults==0 → false", Verdict.KILLED)));
+
+    ToolRun run;
+
+    /**
+     * A small worker heap makes the memory-hungry mutant fail fast and always the same way. The limit only keeps a
+     * hang from blocking the build; the run's time is printed, not judged.
+     */
+    @BeforeAll
+    @Timeout(value = 10, unit = TimeUnit.MINUTES)
+    void runEveryMutant(@TempDir Path temporary) {
+        run = ToolRun.onCopyOf("hostile", temporary.resolve("station"), "--worker-heap", "256m");
+        assertNotNull(run.results(), run::transcript);
+    }
+
+    static String key(MutantResult mutant) {
+        PointRecord point = mutant.first();
+        return point.type() + " " + point.snippet() + " → " + point.replacement();
+    }
+
+    MutantResult mutant(String key) {
+        return run.results().mutants().stream().filter(mutant -> key(mutant).equals(key)).findFirst()
+                .orElseThrow(() -> new AssertionError("no mutant " + key));
+    }
+
+    @Nested
+    class TheRun {
+
+        @Test
+        void completes() {
+            assertEquals(ExitCode.OK, run.exitCode(), run::transcript);
+            assertTrue(run.results().complete());
+        }
+
+        @Test
+        void leavesNoWorkerJvm() {
+            assertEquals(List.of(), Workers.aliveFor(run.project()));
+        }
+
+        @Test
+        void leavesTheSourceTreeAsItWas() {
+            assertEquals(run.filesBefore(), run.filesAfter());
+        }
+    }
+
+    @Nested
+    class Verdicts {
+
+        @Test
+        void everyMutantGetsTheVerdictItsCodeCallsFor() {
+            Map<String, Verdict> actual = new TreeMap<>();
+            run.results().mutants().forEach(mutant -> actual.put(key(mutant), mutant.verdict()));
+            assertEquals(EXPECTED, actual);
+        }
+
+        @Test
+        void theEndlessWait_timesOut_inTheTestThatWaits() {
+            MutantResult blocked = mutant("Uploader count<expectedBatches → <=");
+            assertEquals(Verdict.TIMED_OUT, blocked.verdict());
+            assertTrue(blocked.killedBy().contains("sendsEveryBatchItWasToldOfAndStops"), blocked::toString);
+        }
+
+        @Test
+        void systemExit_crashesTheWorker_withItsExitCode() {
+            MutantResult exits = mutant("Watchdog faults>=FATAL_FAULTS → true");
+            assertEquals(Verdict.CRASHED, exits.verdict());
+            assertTrue(exits.detail().contains("exited with code 70"), exits::toString);
+        }
+
+        @Test
+        void exhaustedMemory_crashesTheWorker_sayingSo() {
+            MutantResult hog = mutant("SampleBuffer reservedBytes<wantedBytes → !=");
+            assertEquals(Verdict.CRASHED, hog.verdict());
+            assertTrue(hog.detail().contains("OutOfMemoryError"), hog::toString);
+        }
+
+        @Test
+        void endlessRecursion_isKilledByTheStackOverflowError() {
+            MutantResult recurses = mutant("Backlog readings<=0 → ==");
+            assertEquals(Verdict.KILLED, recurses.verdict());
+            assertTrue(recurses.detail().startsWith("StackOverflowError"), recurses::toString);
+        }
+    }
+}
