@@ -43,6 +43,9 @@ final class RunCommand implements Callable<Integer> {
     @Mixin
     ChangeOptions change = new ChangeOptions();
 
+    @Mixin
+    ExplicitOptions explicit = new ExplicitOptions();
+
     @Option(names = "--workers", paramLabel = "N", description = "Worker JVMs running tests at once (default: one per core).")
     Integer workers;
 
@@ -104,7 +107,7 @@ final class RunCommand implements Callable<Integer> {
             throw new UserError("--workers takes a positive number, not " + workerCount);
         }
         RunRequest request = new RunRequest(layout.root(), project.limits(layout), mutants.selection(point -> true),
-                change.scope(layout.root()), DiscoveryOptions.defaults().withMavenArguments(mavenArguments),
+                change.scope(layout.root()), explicit.applyTo(DiscoveryOptions.defaults().withMavenArguments(mavenArguments)),
                 workerCount, deadlines, workerHeap, mutantsPerWorker, skipTests, skipTags);
         Style style = plain ? Style.plain() : Style.forStandardOutput();
         ProgressListener listener = new ProgressListener(err, plain);

@@ -33,7 +33,7 @@ public final class ProjectDiscovery {
         }
         if (!Files.isRegularFile(root.resolve("pom.xml"))) {
             throw new UserError(folder + ": no pom.xml here; give a Maven project folder, or name the source folders,"
-                    + " classes, test classes and classpath by hand");
+                    + " classes, test classes and classpath by hand (--source-root, --classes, --test-classes, --classpath)");
         }
         MavenDiscovery.Compiled compiled = MavenDiscovery.compile(folder, root, maven.get());
         List<Path> compileClasspath = new ArrayList<>();
