@@ -1,7 +1,6 @@
 package dev.changeling.mutant;
 
 import com.github.javaparser.ast.Node;
-import com.github.javaparser.ast.expr.LambdaExpr;
 import com.github.javaparser.ast.stmt.ExpressionStmt;
 import com.github.javaparser.ast.stmt.ForStmt;
 import com.github.javaparser.ast.stmt.Statement;
@@ -62,8 +61,9 @@ public final class PointFinder {
             return HostKind.STATEMENT;
         }
         Node parent = host.getParentNode().orElse(null);
-        // JavaParser holds the body of an expression lambda in an ExpressionStmt, but its value is used.
-        boolean standsAlone = parent instanceof ExpressionStmt && !(parent.getParentNode().orElse(null) instanceof LambdaExpr)
+        // An expression lambda's body (held in an ExpressionStmt by JavaParser) counts too: the schema's
+        // wrapper there hands the value back, so it suits void and value-returning lambdas alike.
+        boolean standsAlone = parent instanceof ExpressionStmt
                 || (parent instanceof ForStmt loop
                     && (loop.getInitialization().stream().anyMatch(init -> init == host)
                         || loop.getUpdate().stream().anyMatch(update -> update == host)));

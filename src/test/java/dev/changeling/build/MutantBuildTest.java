@@ -392,8 +392,10 @@ class MutantBuildTest {
         @Test
         void conditionBecomingConstantFalse_isStillborn_asJavacFindsTheBodyUnreachable() {
             TestProject project = TestProject.create(dir, Map.of("sample/Ladders.java", Samples.LADDERS));
+            // The operators never propose a constant loop condition; the build still guards against one made by hand.
             List<Point> points = project.points("sample/Ladders.java", List.of(new dev.changeling.operator.RelationalSubset()));
-            List<Mutant> mutants = List.of(only(points, "left>0", "false"), only(points, "left>0", ">="));
+            List<Mutant> mutants = List.of(Mutant.firstOrder(LoopPoints.constant(project.file("sample/Ladders.java"), "left > 0", "false")),
+                    only(points, "left>0", ">="));
             BuildResult result = project.build(mutants);
 
             Placement never = result.placementOf(mutants.get(0));
@@ -406,9 +408,8 @@ class MutantBuildTest {
         @Test
         void constantConditionMadeVariable_leavesTheSchemaAtOnce_withoutDisturbingItsMember() {
             TestProject project = TestProject.create(dir, Map.of("sample/Ladders.java", Samples.LADDERS));
-            List<Point> points = project.points("sample/Ladders.java", List.of(SampleOperators.LITERALS,
-                    new dev.changeling.operator.RelationalSubset()));
-            Mutant loopForEver = only(points, "true", "false");
+            List<Point> points = project.points("sample/Ladders.java", List.of(new dev.changeling.operator.RelationalSubset()));
+            Mutant loopForEver = Mutant.firstOrder(LoopPoints.constant(project.file("sample/Ladders.java"), "true", "false"));
             Mutant higher = only(points, "x>3", ">=");
             BuildResult result = project.build(List.of(loopForEver, higher));
 
