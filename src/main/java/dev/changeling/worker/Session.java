@@ -74,16 +74,23 @@ final class Session {
         Suite current = requireSuite();
         Probe.activate(points);
         try {
-            // The fastest reaching test runs alone: it is the likeliest to kill, and most mutants stop there.
-            // If it passes, the rest run in one request, which pays for discovery once rather than per test.
-            if (!tests.isEmpty() && report(tests.get(0), current.runOne(tests.get(0))) && tests.size() > 1) {
-                List<String> rest = tests.subList(1, tests.size());
-                List<SingleTestRun.Result> results = current.runTogether(rest);
-                for (int i = 0; i < rest.size(); i++) {
-                    if (!report(rest.get(i), results.get(i))) {
-                        break;
-                    }
+            // Tests run in chunks of doubling size, fastest first: the first alone (the likeliest to kill;
+            // most mutants stop there), then 2, 4, 8, ... together in one request each. A kill stops the
+            // run after its chunk, and a survivor pays for a handful of discoveries, not one per test.
+            int at = 0;
+            for (int size = 1; at < tests.size(); size *= 2) {
+                List<String> chunk = tests.subList(at, Math.min(tests.size(), at + size));
+                List<SingleTestRun.Result> results = chunk.size() == 1
+                        ? List.of(current.runOne(chunk.get(0)))
+                        : current.runTogether(chunk);
+                boolean passed = true;
+                for (int i = 0; i < chunk.size() && passed; i++) {
+                    passed = report(chunk.get(i), results.get(i));
                 }
+                if (!passed) {
+                    break;
+                }
+                at += chunk.size();
             }
         } finally {
             Probe.activate();
