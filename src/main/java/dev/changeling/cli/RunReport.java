@@ -6,7 +6,7 @@ import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
 import dev.changeling.results.Verdict;
-import dev.changeling.review.EquivalentsList;
+import dev.changeling.review.Settled;
 import dev.changeling.review.export.Summary;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
@@ -14,7 +14,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Set;
 import java.util.stream.Collectors;
 
 /** The terminal report of a run: the summary line, figures per file and operator, and the survivors' ids. */
@@ -28,20 +27,17 @@ final class RunReport {
         this.style = style;
     }
 
-    static Set<String> equivalents(ProjectLayout layout) {
-        return EquivalentsList.load(layout.root()).entries().stream().map(entry -> entry.fingerprint()).collect(Collectors.toSet());
-    }
 
     static double scoreOf(RunResults results, ProjectLayout layout) {
-        return Score.of(results.mutants(), equivalents(layout)).overall().score().orElse(1.0);
+        return Score.of(results.mutants(), Settled.load(layout.root()).equivalent()).overall().score().orElse(1.0);
     }
 
     void print(PrintWriter out, RunResults results, Path resultsFile, ProjectLayout layout) {
-        Set<String> equivalent = equivalents(layout);
-        Score score = Score.of(results.mutants(), equivalent);
+        Settled settled = Settled.load(layout.root());
+        Score score = Score.of(results.mutants(), settled.equivalent());
         Tally all = score.overall();
         List<MutantResult> survivors = results.mutants().stream()
-                .filter(mutant -> mutant.verdict() == Verdict.SURVIVED && !equivalent.contains(mutant.id()))
+                .filter(mutant -> mutant.verdict() == Verdict.SURVIVED && !settled.equivalent().contains(mutant.id()))
                 .toList();
         out.println();
         out.println(style.bold(Summary.line(results, all, survivors.size())));
