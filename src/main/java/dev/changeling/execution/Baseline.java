@@ -101,14 +101,14 @@ public final class Baseline {
         return passing.stream().map(RecordedTest::id).toList();
     }
 
-    /** What running the given tests one at a time costs by the baseline ({@link RecordedTest#aloneNanos}); an unknown id counts as zero. */
-    public long nanosOf(List<String> testIds) {
-        long sum = 0;
-        for (String id : testIds) {
-            RecordedTest test = byId.get(id);
-            sum += test == null ? 0 : test.aloneNanos();
+    /** Each test's time alone, in the order given; 0 for an id the baseline does not know. */
+    public long[] aloneNanos(List<String> testIds) {
+        long[] nanos = new long[testIds.size()];
+        for (int i = 0; i < nanos.length; i++) {
+            RecordedTest test = byId.get(testIds.get(i));
+            nanos[i] = test == null ? 0 : test.aloneNanos();
         }
-        return sum;
+        return nanos;
     }
 
     @Override

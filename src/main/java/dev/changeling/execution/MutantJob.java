@@ -6,35 +6,59 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * One mutant to run: switch on its points, run its tests one at a time in the given order, stop at
- * the first failure.
+ * One mutant to run: switch on its points, run its tests in the given order, stop at the first failure.
+ * The worker runs the tests in steps (one request each); every step has its own deadline, from the
+ * baseline times of the tests in it, so a mutant that loops in its first test is stopped after that
+ * test's allowance, not after the allowance of every test that could have run.
  *
- * @param key            the caller's name for it (a fingerprint), handed back in the result
- * @param points         the mutation points to switch on
- * @param tests          JUnit unique ids, in the order to run them
- * @param deadlineMillis how long the tests may take together before the worker is killed
- * @param aloneClasses   for a mutant compiled on its own: the folder of its classes, put first on the
- *                       classpath of a fresh worker used for this job only; null for schema mutants
+ * @param key          the caller's name for it (a fingerprint), handed back in the result
+ * @param points       the mutation points to switch on
+ * @param tests        JUnit unique ids, in the order to run them
+ * @param testNanos    each test's time alone in the baseline, in the order of {@code tests}
+ * @param deadlines    how a step's deadline follows from the baseline times of its tests
+ * @param aloneClasses for a mutant compiled on its own: the folder of its classes, put first on the
+ *                     classpath of a fresh worker used for this job only; null for schema mutants
  */
-public record MutantJob(String key, int[] points, List<String> tests, long deadlineMillis, Path aloneClasses) {
+public record MutantJob(String key, int[] points, List<String> tests, long[] testNanos, Deadlines deadlines, Path aloneClasses) {
 
     public MutantJob {
         Objects.requireNonNull(key, "key");
         points = points.clone();
         tests = List.copyOf(tests);
-        if (deadlineMillis <= 0) {
-            throw new IllegalArgumentException("the deadline of " + key + " must be positive, not " + deadlineMillis);
+        testNanos = testNanos.clone();
+        Objects.requireNonNull(deadlines, "deadlines");
+        if (testNanos.length != tests.size()) {
+            throw new IllegalArgumentException(key + " has " + tests.size() + " tests but " + testNanos.length + " baseline times");
         }
     }
 
     /** A mutant of the schema classes: it runs in a shared worker with its points switched on. */
-    public static MutantJob schema(String key, int[] points, List<String> tests, long deadlineMillis) {
-        return new MutantJob(key, points, tests, deadlineMillis, null);
+    public static MutantJob schema(String key, int[] points, List<String> tests, Deadlines deadlines, Baseline baseline) {
+        return new MutantJob(key, points, tests, baseline.aloneNanos(tests), deadlines, null);
     }
 
     /** A mutant compiled on its own into {@code classes}; it needs a fresh worker of its own. */
-    public static MutantJob alone(String key, Path classes, int[] points, List<String> tests, long deadlineMillis) {
-        return new MutantJob(key, points, tests, deadlineMillis, Objects.requireNonNull(classes, "classes"));
+    public static MutantJob alone(String key, Path classes, List<String> tests, Deadlines deadlines, Baseline baseline) {
+        return new MutantJob(key, new int[0], tests, baseline.aloneNanos(tests), deadlines, Objects.requireNonNull(classes, "classes"));
+    }
+
+    /** A schema mutant whose every step may take {@code stepMillis}, whatever its tests cost in the baseline. */
+    public static MutantJob schema(String key, int[] points, List<String> tests, long stepMillis) {
+        return new MutantJob(key, points, tests, new long[tests.size()], flat(stepMillis), null);
+    }
+
+    /** A mutant compiled alone whose every step may take {@code stepMillis}. */
+    public static MutantJob alone(String key, Path classes, List<String> tests, long stepMillis) {
+        return new MutantJob(key, new int[0], tests, new long[tests.size()], flat(stepMillis), Objects.requireNonNull(classes, "classes"));
+    }
+
+    /** The deadline for the step that runs {@code count} tests from index {@code from} on. */
+    public long stepMillis(int from, int count, boolean firstRunOfAClass) {
+        long nanos = 0;
+        for (int i = Math.max(0, from); i < Math.min(testNanos.length, from + count); i++) {
+            nanos += testNanos[i];
+        }
+        return deadlines.millisFor(nanos, firstRunOfAClass);
     }
 
     @Override
@@ -43,19 +67,32 @@ public record MutantJob(String key, int[] points, List<String> tests, long deadl
     }
 
     @Override
+    public long[] testNanos() {
+        return testNanos.clone();
+    }
+
+    @Override
     public boolean equals(Object other) {
         return other instanceof MutantJob job && key.equals(job.key) && Arrays.equals(points, job.points)
-                && tests.equals(job.tests) && deadlineMillis == job.deadlineMillis && Objects.equals(aloneClasses, job.aloneClasses);
+                && tests.equals(job.tests) && Arrays.equals(testNanos, job.testNanos) && deadlines.equals(job.deadlines)
+                && Objects.equals(aloneClasses, job.aloneClasses);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(key, Arrays.hashCode(points), tests, deadlineMillis, aloneClasses);
+        return Objects.hash(key, Arrays.hashCode(points), tests, Arrays.hashCode(testNanos), deadlines, aloneClasses);
     }
 
     @Override
     public String toString() {
         return "MutantJob[" + key + ", points " + Arrays.toString(points) + ", " + tests.size() + " tests, "
-                + deadlineMillis + " ms" + (aloneClasses == null ? "" : ", alone in " + aloneClasses) + "]";
+                + deadlines + (aloneClasses == null ? "" : ", alone in " + aloneClasses) + "]";
+    }
+
+    private static Deadlines flat(long stepMillis) {
+        if (stepMillis <= 0) {
+            throw new IllegalArgumentException("a step's deadline must be positive, not " + stepMillis + " ms");
+        }
+        return new Deadlines(1, stepMillis);
     }
 }

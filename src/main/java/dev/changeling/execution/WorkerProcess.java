@@ -18,7 +18,9 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 import java.util.UUID;
 import java.util.concurrent.TimeUnit;
 import java.util.function.Consumer;
@@ -56,6 +58,7 @@ final class WorkerProcess {
     private DataInputStream in;
     private DataOutputStream out;
     private volatile boolean killed;
+    private final Set<String> containersRun = new HashSet<>();
 
     private WorkerProcess(Process process, ServerSocket server, String token, Path log) {
         this.process = process;
@@ -92,6 +95,7 @@ final class WorkerProcess {
             command.add("-XX:+ExitOnOutOfMemoryError");
         }
         command.add("-Djava.io.tmpdir=" + temp.toAbsolutePath());
+        command.addAll(WorkerSettings.TUNING);
         command.addAll(settings.jvmArguments());
         command.add("@" + argumentFile.toAbsolutePath());
         command.add(WorkerClasses.MAIN_CLASS);
@@ -206,10 +210,14 @@ final class WorkerProcess {
         }
     }
 
-    /** Runs one mutant's tests; a deadline or the worker's death becomes the outcome, the worker then gone. */
+    /**
+     * Runs one mutant's tests; a deadline or the worker's death becomes the outcome, the worker then gone.
+     * Each step the worker announces gets its own deadline, from the baseline times of the tests in it.
+     */
     JobResult run(MutantJob job) {
         long start = System.nanoTime();
-        long deadline = start + TimeUnit.MILLISECONDS.toNanos(job.deadlineMillis());
+        long allowed = job.stepMillis(0, 0, false);
+        long deadline = start + TimeUnit.MILLISECONDS.toNanos(allowed);
         long mark = logSize();
         List<TestRun> runs = new ArrayList<>();
         try {
@@ -218,7 +226,13 @@ final class WorkerProcess {
             Wire.writeStrings(out, job.tests());
             out.flush();
             byte code;
-            while ((code = next(deadline)) == Wire.TEST_DONE) {
+            while ((code = next(deadline)) == Wire.TEST_DONE || code == Wire.STEP) {
+                if (code == Wire.STEP) {
+                    int count = in.readInt();
+                    allowed = job.stepMillis(runs.size(), count, firstRunOfAClass(job.tests(), runs.size(), count));
+                    deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(allowed);
+                    continue;
+                }
                 String id = Wire.readString(in);
                 TestStatus status = TestStatus.fromWire(in.readByte());
                 long nanos = in.readLong();
@@ -228,7 +242,7 @@ final class WorkerProcess {
         } catch (SocketTimeoutException e) {
             kill();
             return new JobResult(job.key(), Outcome.TIMED_OUT, running(job, runs),
-                    "no answer within " + job.deadlineMillis() + " ms", runs, System.nanoTime() - start);
+                    "no answer within " + allowed + " ms", runs, System.nanoTime() - start);
         } catch (IOException e) {
             Lost lost = died(mark);
             return new JobResult(job.key(), Outcome.CRASHED, running(job, runs), lost.getMessage(), runs, System.nanoTime() - start);
@@ -240,6 +254,16 @@ final class WorkerProcess {
             }
         }
         return new JobResult(job.key(), Outcome.SURVIVED, null, null, runs, nanos);
+    }
+
+    /** Whether these tests include one whose class (or other container) this worker has not run a test of yet. */
+    private boolean firstRunOfAClass(List<String> tests, int from, int count) {
+        boolean first = false;
+        for (String test : tests.subList(Math.min(from, tests.size()), Math.min(tests.size(), from + count))) {
+            int parent = test.lastIndexOf("/[");
+            first |= containersRun.add(parent < 0 ? test : test.substring(0, parent));
+        }
+        return first;
     }
 
     /** The test that was running when the answer stopped: the first one not reported. */

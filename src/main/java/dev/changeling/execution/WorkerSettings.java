@@ -27,6 +27,14 @@ public record WorkerSettings(Path projectDirectory, List<Path> classpath, Path w
 
     public static final String DEFAULT_MAX_HEAP = "2g";
     /**
+     * Options every worker starts with, ahead of {@code jvmArguments} (which may override them): the client
+     * compiler only, as unit tests are short and each mutant's switch deoptimises code that the optimising
+     * compiler would spend far longer recompiling than the tests run; and the serial collector, as a worker
+     * runs one test at a time and collector threads would only compete with the other workers for the cores.
+     * On commons-cli's suite the two took the execution of three files' mutants from 37.6 s to 23.5 s.
+     */
+    public static final List<String> TUNING = List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC");
+    /**
      * A fresh worker costs 0.5–2 s (start, class initialisation, a cold JIT) against a few milliseconds
      * per mutant in a warm one, so replacing it often is dear; after 500 mutants that is a few percent,
      * and memory a leaky suite piles up per run, or threads it leaves behind, stay bounded.

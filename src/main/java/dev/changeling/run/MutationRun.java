@@ -169,10 +169,9 @@ public final class MutationRun {
                 }
                 byKey.put(mutant.fingerprint(), mutant);
                 reaching.put(mutant.fingerprint(), reachedBy);
-                long deadline = request.deadlines().millisFor(reachedBy, baseline);
                 jobs.add(placement.kind() == Placement.Kind.IN_SCHEMA
-                        ? MutantJob.schema(mutant.fingerprint(), placement.activation(), reachedBy, deadline)
-                        : MutantJob.alone(mutant.fingerprint(), placement.classes(), new int[0], reachedBy, deadline));
+                        ? MutantJob.schema(mutant.fingerprint(), placement.activation(), reachedBy, request.deadlines(), baseline)
+                        : MutantJob.alone(mutant.fingerprint(), placement.classes(), reachedBy, request.deadlines(), baseline));
             }
             results.values().forEach(listener::finished);
             listener.running(jobs.size());

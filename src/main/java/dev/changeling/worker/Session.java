@@ -28,6 +28,9 @@ final class Session {
                 return;
             }
             if (command == Wire.QUIT) {
+                if (suite != null) {
+                    suite.close();
+                }
                 return;
             }
             try {
@@ -80,6 +83,9 @@ final class Session {
             int at = 0;
             for (int size = 1; at < tests.size(); size *= 2) {
                 List<String> chunk = tests.subList(at, Math.min(tests.size(), at + size));
+                out.writeByte(Wire.STEP);
+                out.writeInt(chunk.size());
+                out.flush();
                 List<SingleTestRun.Result> results = chunk.size() == 1
                         ? List.of(current.runOne(chunk.get(0)))
                         : current.runTogether(chunk);

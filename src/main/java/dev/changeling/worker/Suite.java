@@ -13,11 +13,12 @@ import java.util.List;
 import java.util.Set;
 import java.util.logging.Level;
 import java.util.logging.Logger;
+import org.junit.platform.engine.ConfigurationParameters;
 import org.junit.platform.engine.discovery.ClassNameFilter;
 import org.junit.platform.launcher.Launcher;
 import org.junit.platform.launcher.LauncherDiscoveryRequest;
+import org.junit.platform.launcher.LauncherSession;
 import org.junit.platform.launcher.TagFilter;
-import org.junit.platform.launcher.TestIdentifier;
 import org.junit.platform.launcher.TestPlan;
 import org.junit.platform.launcher.core.LauncherDiscoveryRequestBuilder;
 import org.junit.platform.launcher.core.LauncherFactory;
@@ -38,7 +39,8 @@ final class Suite {
     private final List<String> includes;
     private final List<String> excludes;
     private final List<String> excludedTags;
-    private Launcher launcher;
+    private LauncherSession session;
+    private ConfigurationParameters implicitParameters;
 
     Suite(List<String> testRoots, List<String> includes, List<String> excludes, List<String> excludedTags) {
         testRoots.forEach(root -> this.testRoots.add(Path.of(root)));
@@ -73,10 +75,7 @@ final class Suite {
 
     SingleTestRun.Result runOne(String uniqueId) {
         LAUNCHER_LOG.setLevel(Level.WARNING);
-        LauncherDiscoveryRequest request = LauncherDiscoveryRequestBuilder.request()
-                .selectors(selectUniqueId(uniqueId))
-                .configurationParameter(PARALLEL, "false")
-                .build();
+        LauncherDiscoveryRequest request = request(List.of(uniqueId));
         SingleTestRun listener = new SingleTestRun(uniqueId);
         long start = System.nanoTime();
         TestPlan plan;
@@ -86,7 +85,7 @@ final class Suite {
             // Newer platforms refuse a selector that selects nothing; older ones return an empty plan.
             return new SingleTestRun.Result(Wire.MISSING, System.nanoTime() - start, Failures.describe(notFound));
         }
-        if (mayHold(plan, uniqueId)) {
+        if (PlannedIds.of(plan).mayHold(uniqueId)) {
             launcher().execute(plan, listener);
         }
         long nanos = System.nanoTime() - start;
@@ -97,22 +96,21 @@ final class Suite {
 
     /**
      * Runs several tests in one request, which pays for discovery once instead of once per test; their
-     * outcomes come back in the order given. If the request cannot be discovered (an id that no longer
-     * selects anything), every test runs on its own instead, so that a missing test never looks like a kill.
+     * outcomes come back in the order given. If the request cannot be discovered, or one of the ids is not
+     * in the plan at all (an id that no longer selects anything), every test runs on its own instead, so
+     * that a missing test never looks like a kill.
      */
     List<SingleTestRun.Result> runTogether(List<String> uniqueIds) {
         LAUNCHER_LOG.setLevel(Level.WARNING);
-        LauncherDiscoveryRequest request = LauncherDiscoveryRequestBuilder.request()
-                .selectors(uniqueIds.stream().map(id -> selectUniqueId(id)).toList())
-                .configurationParameter(PARALLEL, "false")
-                .build();
+        LauncherDiscoveryRequest request = request(uniqueIds);
         TestPlan plan;
         try {
             plan = launcher().discover(request);
         } catch (RuntimeException notFound) {
             return uniqueIds.stream().map(this::runOne).toList();
         }
-        if (uniqueIds.stream().anyMatch(id -> plan.countTestIdentifiers(node -> id.equals(node.getUniqueId())) == 0)) {
+        PlannedIds planned = PlannedIds.of(plan);
+        if (!uniqueIds.stream().allMatch(planned::mayHold)) {
             return uniqueIds.stream().map(this::runOne).toList();
         }
         TogetherRun listener = new TogetherRun(uniqueIds);
@@ -123,17 +121,22 @@ final class Suite {
     }
 
     /**
-     * Whether the plan has the test, or has no test at all but a container below the engine that may yet
-     * register it (parameterised and dynamic tests appear only while they run). An id that selects
-     * nothing is not run: engines report that as a failure of their own (a stand-in test, a failed
-     * engine), which must not count as a kill.
+     * A request for these tests. The configuration parameters the platform reads from the system properties
+     * and the classpath's {@code junit-platform.properties} are read for the first request only and handed
+     * to every later one, as reading that file again was an eighth of a killed mutant's time.
      */
-    private static boolean mayHold(TestPlan plan, String uniqueId) {
-        if (plan.countTestIdentifiers(node -> uniqueId.equals(node.getUniqueId())) > 0) {
-            return true;
+    private LauncherDiscoveryRequest request(List<String> uniqueIds) {
+        LauncherDiscoveryRequestBuilder builder = LauncherDiscoveryRequestBuilder.request()
+                .selectors(uniqueIds.stream().map(id -> selectUniqueId(id)).toList())
+                .configurationParameter(PARALLEL, "false");
+        if (implicitParameters != null) {
+            builder.parentConfigurationParameters(implicitParameters).enableImplicitConfigurationParameters(false);
         }
-        return plan.countTestIdentifiers(TestIdentifier::isTest) == 0
-                && plan.countTestIdentifiers(node -> node.getParentId().isPresent() && uniqueId.startsWith(node.getUniqueId() + "/")) > 0;
+        LauncherDiscoveryRequest request = builder.build();
+        if (implicitParameters == null) {
+            implicitParameters = request.getConfigurationParameters();
+        }
+        return request;
     }
 
     /**
@@ -145,11 +148,24 @@ final class Suite {
         launcher().execute(empty);
     }
 
+    /**
+     * The launcher of one session that lasts as long as the worker. A launcher made without a session opens
+     * a new one for every request, looking up its listeners on the classpath each time: that lookup was
+     * two fifths of a killed mutant's time. Build tools run a suite in one session, so tests see the same.
+     */
     private Launcher launcher() {
-        if (launcher == null) {
-            launcher = LauncherFactory.create();
+        if (session == null) {
+            session = LauncherFactory.openSession();
         }
-        return launcher;
+        return session.getLauncher();
+    }
+
+    /** Ends the session, which tells the project's session listeners, if it has any. */
+    void close() {
+        if (session != null) {
+            session.close();
+            session = null;
+        }
     }
 
     private static void progress(DataOutputStream out, String name) {

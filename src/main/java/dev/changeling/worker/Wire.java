@@ -20,7 +20,8 @@ import java.util.List;
  *                            BASELINE_DONE n:int {id name className:str status:byte nanos aloneNanos:long message:str reached:ints}*n
  *                                          m:int {id name message:str}*m   (failed containers)
  * tool -> worker  RUN        points:ints tests:strs
- *                   reply    TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE
+ *                   reply    STEP count:int (before each group of tests run in one request: the next count tests)
+ *                            TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE
  * tool -> worker  QUIT       (no reply; the worker exits)
  * any reply may instead be   FAILURE message:str   (the command failed inside the worker; the worker goes on)
  * </pre>
@@ -30,7 +31,7 @@ import java.util.List;
  */
 public final class Wire {
 
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
     private static final int MAX_SIZE = 1 << 26;
 
     public static final byte HELLO = 1;
@@ -44,6 +45,7 @@ public final class Wire {
     public static final byte RUN_DONE = 9;
     public static final byte QUIT = 10;
     public static final byte FAILURE = 11;
+    public static final byte STEP = 12;
 
     /** The test passed. */
     public static final byte PASSED = 0;

@@ -28,12 +28,17 @@ class DeadlinesTest {
         }
 
         @Test
-        void addsWhatEachTestRunCostsAloneInTheBaseline() {
+        void aStepIsAllowedWhatItsOwnTestsCostAloneInTheBaseline() {
             Baseline baseline = new Baseline(List.of(
                     new RecordedTest("a", "A", null, TestStatus.PASSED, null, 1, 100_000_000L, new int[0]),
                     new RecordedTest("b", "B", null, TestStatus.PASSED, null, 1, 300_000_000L, new int[0])),
                     List.of(), new int[0], List.of(), 0);
-            assertEquals(500 + 2 * 400, new Deadlines(2, 500).millisFor(List.of("a", "b", "unknown"), baseline));
+            MutantJob job = MutantJob.schema("m", new int[] {0}, List.of("a", "b", "unknown"), new Deadlines(2, 500), baseline);
+            assertEquals(500 + 2 * 100, job.stepMillis(0, 1, false));
+            assertEquals(500 + 2 * 300, job.stepMillis(1, 2, false));
+            assertEquals(500 + 2 * 400, job.stepMillis(0, 3, false));
+            assertEquals(500, job.stepMillis(0, 0, false), "before the worker says what it runs");
+            assertEquals(500 + 2 * 100 + Deadlines.FIRST_RUN_EXTRA_MILLIS, job.stepMillis(0, 1, true));
         }
     }
 

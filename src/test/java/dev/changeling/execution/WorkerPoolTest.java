@@ -282,6 +282,22 @@ class WorkerPoolTest {
             }
         }
 
+        /** Under one deadline for the whole mutant, the loop would run for the 30 s the second test is allowed. */
+        @Test
+        void givesEachStepItsOwnDeadline_soALoopInTheFirstTestIsStoppedAfterThatTestsAllowance() {
+            MutantJob loops = new MutantJob("loops", new int[] {2},
+                    List.of(method("HostileTest", "countsToThree"), method("PricesTest", "addsZero")),
+                    new long[] {0, 30_000_000_000L}, new dev.changeling.execution.Deadlines(1, 500), null);
+            try (WorkerPool pool = WorkerPool.open(settings("steps"), setup())) {
+                JobResult result = pool.run(List.of(loops), done -> { }).get(0);
+                assertEquals(Outcome.TIMED_OUT, result.outcome());
+                assertEquals(method("HostileTest", "countsToThree"), result.testId());
+                // The fresh worker ran the first test once unmutated to warm up, so its class is no longer new to it.
+                assertEquals("no answer within 500 ms", result.message());
+                assertTrue(result.nanos() < 5_000_000_000L, "stopped after " + result.nanos() / 1_000_000 + " ms");
+            }
+        }
+
         @Test
         void killsTheProcessesATestStarted() throws Exception {
             assumeTrue(Files.isExecutable(Path.of("/bin/sleep")) || Files.isExecutable(Path.of("/usr/bin/sleep")),
@@ -378,8 +394,8 @@ class WorkerPoolTest {
             Path alone = project.compileAlone("or", TinyProject.PRICES.replace("a + b;", "a | b;"));
             try (WorkerPool pool = WorkerPool.open(settings("alone"), setup())) {
                 List<JobResult> results = pool.run(List.of(
-                        MutantJob.alone("or-killed", alone, new int[0], List.of(method("PricesTest", "addsTwoNumbers")), GENEROUS),
-                        MutantJob.alone("or-survived", alone, new int[0], List.of(method("PricesTest", "addsZero")), GENEROUS),
+                        MutantJob.alone("or-killed", alone, List.of(method("PricesTest", "addsTwoNumbers")), GENEROUS),
+                        MutantJob.alone("or-survived", alone, List.of(method("PricesTest", "addsZero")), GENEROUS),
                         job("schema", 0, method("PricesTest", "addsZero"))), result -> { });
                 assertEquals(List.of(Outcome.KILLED, Outcome.SURVIVED, Outcome.SURVIVED), results.stream().map(JobResult::outcome).toList());
                 assertEquals(3, pool.workersStarted());
