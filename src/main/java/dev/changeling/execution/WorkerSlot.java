@@ -63,11 +63,16 @@ final class WorkerSlot {
         if (job.aloneClasses() != null) {
             return executeAlone(job);
         }
-        ensureWorker();
         JobResult result;
         try {
-            warmUp(job);
-            result = worker.run(job);
+            result = runInWorker(job);
+            if (result.outcome() == Outcome.KILLED && !passesUnmutated(job.key(), result.testId())) {
+                // The killing test fails without the mutant too: an earlier mutant's tests left this worker's
+                // static state broken (a test class's shared fixture, say). Only a fresh worker gives the verdict.
+                retire();
+                pool.throwIfStopped();
+                result = runInWorker(job);
+            }
         } catch (RuntimeException e) {
             retire();
             throw e;
@@ -80,6 +85,26 @@ final class WorkerSlot {
             retire();
         }
         return result;
+    }
+
+    private JobResult runInWorker(MutantJob job) {
+        ensureWorker();
+        warmUp(job);
+        return worker.run(job);
+    }
+
+    /**
+     * Runs the test that killed a mutant once more with no mutant switched on. Under Maven every test
+     * class starts from fresh static state; in a worker it carries whatever the tests of earlier mutants
+     * left, so a kill counts only if the same test still passes on the unmutated code. A test that does not
+     * come back leaves the worker gone, which also means "not passing".
+     */
+    private boolean passesUnmutated(String key, String testId) {
+        if (testId == null || worker == null) {
+            return true;
+        }
+        JobResult check = worker.run(MutantJob.schema(key, new int[0], List.of(testId), settings.startTimeout().toMillis()));
+        return check.outcome() == Outcome.SURVIVED;
     }
 
     /** Kills whatever this slot has running, at once. */

@@ -22,7 +22,7 @@ import javax.tools.ToolProvider;
  * {@code checkout} calls System.exit(7); 4 {@code hog} fills the heap; 5 the value a class setup
  * reads turns bad; 6 reached by no test; 7 in a static initialiser; 8 {@code depth} recurses without
  * end; 9 {@code spawn} starts a child process and then waits forever; 10 {@code leak} starts a thread
- * that never ends.
+ * that never ends; 11 {@code write} writes one mark too many on a sheet that a test class shares between its tests.
  *
  * <p>A launcher started in a JVM with {@code -Dshop.slowStart=<ms>} takes that long to start, once per JVM, as
  * loading a large suite's engines and classes can: {@code shop.SlowStart}, a registered test execution listener,
@@ -30,7 +30,7 @@ import javax.tools.ToolProvider;
  */
 final class TinyProject {
 
-    static final int POINTS = 11;
+    static final int POINTS = 12;
 
     static final String PRICES = """
             package shop;
@@ -67,6 +67,10 @@ final class TinyProject {
                         Files.writeString(Path.of("target", "child.pid"), Long.toString(child.pid()));
                         while (true) { Thread.sleep(50); }
                     }
+                }
+                public static void write(StringBuilder sheet) {
+                    sheet.append('x');
+                    if (Probe.on(11)) { sheet.append('x'); }
                 }
                 public static void leak() {
                     if (Probe.on(10)) {
@@ -147,6 +151,19 @@ final class TinyProject {
                         @Test void measuresDepth() { assertEquals(5, Prices.depth(5)); }
                         @Test void spawns() throws Exception { Prices.spawn(); }
                         @Test void leaks() { Prices.leak(); }
+                    }
+                    """),
+            Map.entry("shop/SharedSheetTest.java", """
+                    package shop;
+
+                    import static org.junit.jupiter.api.Assertions.assertEquals;
+
+                    import org.junit.jupiter.api.Test;
+
+                    class SharedSheetTest {
+                        static final StringBuilder SHEET = new StringBuilder();
+                        @Test void writesOneMark() { Prices.write(SHEET); assertEquals("x", SHEET.toString()); SHEET.setLength(0); }
+                        @Test void findsTheSheetClean() { assertEquals("", SHEET.toString()); }
                     }
                     """),
             Map.entry("shop/RatesTest.java", """

@@ -315,6 +315,26 @@ class WorkerPoolTest {
     }
 
     @Nested
+    class LeftoverState {
+
+        /**
+         * The first mutant's test fails before it cleans the sheet its class shares, which stays dirty in that
+         * worker; the second mutant does not touch the sheet, yet its test fails there. Under Maven, with only the
+         * second mutant applied, the sheet starts clean and the test passes.
+         */
+        @Test
+        void aKillWhoseTestAlsoFailsUnmutatedIsRunAgainInAFreshWorker() {
+            try (WorkerPool pool = WorkerPool.open(settings("leftover"), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        job("dirties", 11, method("SharedSheetTest", "writesOneMark")),
+                        job("innocent", 0, method("SharedSheetTest", "findsTheSheetClean"))), result -> { });
+                assertEquals(List.of(Outcome.KILLED, Outcome.SURVIVED), results.stream().map(JobResult::outcome).toList(),
+                        results::toString);
+            }
+        }
+    }
+
+    @Nested
     class ColdStart {
 
         /** The worker starts its launcher when it runs its first tests; here that takes 3 s, beyond the mutants' deadlines. */
