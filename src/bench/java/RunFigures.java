@@ -1,8 +1,8 @@
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.File;
-import java.util.HashMap;
-import java.util.Map;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * Prints the figures of a timed run next to its Maven baseline: the ratio of wall times, mutants per
@@ -17,8 +17,9 @@ public final class RunFigures {
         JsonNode results = new ObjectMapper().readTree(new File(args[0]));
         double mavenMillis = Double.parseDouble(args[1]);
         double runMillis = Double.parseDouble(args[2]);
-        Map<String, Double> testMillis = new HashMap<>();
-        results.get("tests").forEach(test -> testMillis.put(test.get("id").asText(), test.get("millis").asDouble()));
+        // A mutant's tests are stored as numbers into "tests" (docs/results-format.md).
+        List<Double> testMillis = new ArrayList<>();
+        results.get("tests").forEach(test -> testMillis.add(test.get("millis").asDouble()));
         int mutants = results.get("mutants").size();
         double executed = 0;
         double stopped = 0;
@@ -28,7 +29,7 @@ public final class RunFigures {
                 stopped += mutant.path("millis").asDouble();
             }
             for (JsonNode test : mutant.get("testsRun")) {
-                executed += testMillis.getOrDefault(test.asText(), 0.0);
+                executed += test.isInt() ? testMillis.get(test.asInt()) : 0.0;
                 testRuns++;
             }
         }

@@ -1,5 +1,7 @@
 package dev.changeling.results;
 
+import com.fasterxml.jackson.databind.annotation.JsonDeserialize;
+import com.fasterxml.jackson.databind.annotation.JsonSerialize;
 import java.util.List;
 
 /**
@@ -12,8 +14,8 @@ import java.util.List;
  * @param verdict   what became of it
  * @param killedBy  the test that failed, for killed mutants
  * @param detail    the failure message, the reason it was skipped, or the compiler's error
- * @param testsRun  the tests run against it, in the order they ran
- * @param reachedBy every test that reaches its points in the baseline
+ * @param testsRun  the tests run against it, in the order they ran (stored as numbers into the run's tests)
+ * @param reachedBy every test that reaches its points in the baseline (stored the same way)
  * @param millis    the time spent running its tests
  * @param diff      the unified diff of exactly what was run
  */
@@ -25,8 +27,8 @@ public record MutantResult(
         Verdict verdict,
         String killedBy,
         String detail,
-        List<String> testsRun,
-        List<String> reachedBy,
+        @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> testsRun,
+        @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> reachedBy,
         double millis,
         String diff) {
 

@@ -1,6 +1,7 @@
 package dev.changeling.results;
 
 import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.changeling.AtomicFiles;
@@ -8,6 +9,10 @@ import dev.changeling.UserError;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
 
 /** Reads and writes the results file; writes are atomic (a temporary file, then a rename). */
 public final class ResultsFile {
@@ -27,7 +32,12 @@ public final class ResultsFile {
     }
 
     public static void write(Path file, RunResults results) throws IOException {
-        AtomicFiles.write(file, out -> JSON.writeValue(out, results));
+        Map<String, Integer> index = new HashMap<>();
+        List<TestRecord> tests = results.tests() == null ? List.of() : results.tests();
+        for (int i = 0; i < tests.size(); i++) {
+            index.putIfAbsent(tests.get(i).id(), i);
+        }
+        AtomicFiles.write(file, out -> JSON.writer().withAttribute(TestRefs.SUITE, index).writeValue(out, results));
     }
 
     public static RunResults read(Path file) {
@@ -35,12 +45,15 @@ public final class ResultsFile {
             throw new UserError(file + ": no results yet; run 'changeling run' in the project first");
         }
         try {
-            RunResults results = JSON.readValue(file.toFile(), RunResults.class);
-            if (results.format() != RunResults.FORMAT) {
-                throw new UserError(file + ": results format " + results.format() + " is not "
+            JsonNode tree = JSON.readTree(file.toFile());
+            int format = tree.path("format").asInt(-1);
+            if (format != RunResults.FORMAT) {
+                throw new UserError(file + ": results format " + format + " is not "
                         + RunResults.FORMAT + "; run 'changeling run' again to rewrite it");
             }
-            return results;
+            List<String> suite = new ArrayList<>();
+            tree.path("tests").forEach(test -> suite.add(test.path("id").asText(null)));
+            return JSON.readerFor(RunResults.class).withAttribute(TestRefs.SUITE, suite).readValue(tree);
         } catch (IOException e) {
             throw new UserError(file + ": cannot read the results (" + firstLine(e.getMessage())
                     + "); run 'changeling run' again to rewrite it");

@@ -26,7 +26,7 @@ public record RunResults(
         List<String> problems,
         Map<String, String> sourceHashes) {
 
-    public static final int FORMAT = 1;
+    public static final int FORMAT = 2;
 
     /** Only the mutants in the files and folders named (absolute paths), or all when none are named. */
     public RunResults limitedTo(java.nio.file.Path projectRoot, List<java.nio.file.Path> limits) {

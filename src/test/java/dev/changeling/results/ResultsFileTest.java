@@ -1,0 +1,66 @@
+package dev.changeling.results;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.changeling.UserError;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ResultsFileTest {
+
+    private static final String FIRST = "[engine:junit-jupiter]/[class:shop.PricesTest]/[method:addsTwoNumbers()]";
+    private static final String SECOND = "[engine:junit-jupiter]/[class:shop.PricesTest]/[method:addsZero()]";
+    private static final String UNLISTED = "[engine:junit-jupiter]/[class:shop.Gone]/[method:gone()]";
+
+    @TempDir
+    Path folder;
+
+    private static RunResults results() {
+        PointRecord point = new PointRecord("f1", "arithmetic-swap", "Prices", "add(int, int)", 3, 5, 3, 9,
+                "a + b", "a - b", "a + b", "replaced + with -");
+        MutantResult killed = new MutantResult("f1", "src/main/java/shop/Prices.java", 1, List.of(point), Verdict.KILLED, FIRST,
+                "expected 5", List.of(SECOND, FIRST), List.of(SECOND, FIRST, UNLISTED), 3.5, "--- a\n+++ b\n");
+        RunResults template = ResultsForTests.run(List.of(killed), false, 1);
+        return new RunResults(RunResults.FORMAT, true, template.settings(),
+                List.of(new TestRecord(FIRST, "addsTwoNumbers()", 1.0), new TestRecord(SECOND, "addsZero()", 0.5)),
+                Map.of("total", 10.0), List.of(killed), List.of(), Map.of());
+    }
+
+    @Test
+    void readsBackWhatItWrote_withEachTestStoredAsItsNumberInTheSuite() throws Exception {
+        Path file = folder.resolve("results.json");
+        ResultsFile.write(file, results());
+        assertEquals(results(), ResultsFile.read(file));
+
+        JsonNode mutant = new ObjectMapper().readTree(file.toFile()).get("mutants").get(0);
+        assertEquals("[1,0]", mutant.get("testsRun").toString());
+        assertEquals("[1,0,\"" + UNLISTED.replace("\"", "\\\"") + "\"]", mutant.get("reachedBy").toString(),
+                "an id the suite does not list is kept as itself");
+        String text = Files.readString(file);
+        assertEquals(text.indexOf(SECOND), text.lastIndexOf(SECOND), "the id is written once, in the suite");
+    }
+
+    @Test
+    void refusesATestNumberOutsideTheSuite_andAnOlderFormat_withOneLineSayingWhatToDo() throws Exception {
+        Path file = folder.resolve("results.json");
+        ResultsFile.write(file, results());
+        String text = Files.readString(file);
+
+        Files.writeString(file, text.replaceFirst("\"testsRun\" : \\[ 1, 0 \\]", "\"testsRun\" : [ 7 ]"));
+        UserError outside = assertThrows(UserError.class, () -> ResultsFile.read(file));
+        assertTrue(outside.getMessage().contains("test number 7"), outside.getMessage());
+
+        Files.writeString(file, text.replaceFirst("\"format\" : " + RunResults.FORMAT, "\"format\" : 1"));
+        UserError older = assertThrows(UserError.class, () -> ResultsFile.read(file));
+        assertTrue(older.getMessage().contains("results format 1 is not " + RunResults.FORMAT), older.getMessage());
+        assertTrue(older.getMessage().contains("run 'changeling run' again"), older.getMessage());
+    }
+}
