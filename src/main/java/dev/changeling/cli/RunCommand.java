@@ -50,11 +50,11 @@ final class RunCommand implements Callable<Integer> {
     Integer workers;
 
     @Option(names = "--time-factor", paramLabel = "F",
-            description = "A mutant's tests may take F times their unmutated time (default: ${DEFAULT-VALUE}) ...")
+            description = "Each step of a mutant's tests (the group a worker runs in one go) may take F times its tests' unmutated time (default: ${DEFAULT-VALUE}) ...")
     double timeFactor = Deadlines.DEFAULT.factor();
 
     @Option(names = "--time-extra", paramLabel = "MS",
-            description = "... plus this many milliseconds, before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
+            description = "... plus this many milliseconds (" + Deadlines.FIRST_RUN_EXTRA_MILLIS + " more when the worker first meets a test class), before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
     long timeExtraMillis = Deadlines.DEFAULT.constantMillis();
 
     @Option(names = "--worker-heap", paramLabel = "SIZE",
