@@ -1,5 +1,6 @@
 package dev.changeling.execution;
 
+import dev.changeling.worker.UniqueIds;
 import dev.changeling.worker.Wire;
 import java.io.BufferedInputStream;
 import java.io.BufferedOutputStream;
@@ -260,8 +261,8 @@ final class WorkerProcess {
     private boolean firstRunOfAClass(List<String> tests, int from, int count) {
         boolean first = false;
         for (String test : tests.subList(Math.min(from, tests.size()), Math.min(tests.size(), from + count))) {
-            int parent = test.lastIndexOf("/[");
-            first |= containersRun.add(parent < 0 ? test : test.substring(0, parent));
+            String parent = UniqueIds.parent(test);
+            first |= containersRun.add(parent == null ? test : parent);
         }
         return first;
     }

@@ -103,8 +103,12 @@ final class WorkerSlot {
         if (testId == null || worker == null) {
             return true;
         }
-        JobResult check = worker.run(MutantJob.schema(key, new int[0], List.of(testId), settings.startTimeout().toMillis()));
-        return check.outcome() == Outcome.SURVIVED;
+        return runUnmutated(key, testId).outcome() == Outcome.SURVIVED;
+    }
+
+    /** Runs one test in the current worker with no point switched on, under the start timeout. */
+    private JobResult runUnmutated(String key, String testId) {
+        return worker.run(MutantJob.schema(key, new int[0], List.of(testId), settings.startTimeout().toMillis()));
     }
 
     /** Kills whatever this slot has running, at once. */
@@ -158,8 +162,7 @@ final class WorkerSlot {
         if (warm || job.tests().isEmpty()) {
             return;
         }
-        JobResult warming = worker.run(MutantJob.schema(job.key(), new int[0], job.tests().subList(0, 1),
-                settings.startTimeout().toMillis()));
+        JobResult warming = runUnmutated(job.key(), job.tests().get(0));
         if (warming.outcome() == Outcome.TIMED_OUT || warming.outcome() == Outcome.CRASHED) {
             // The unmutated tests did not come back: the mutant runs in a fresh worker as it would have without this.
             retire();

@@ -14,9 +14,6 @@ import org.junit.platform.launcher.TestPlan;
  */
 final class PlannedIds {
 
-    /** Unique ids join their segments ({@code [type:value]}) with a slash, and a value's own slashes are encoded. */
-    private static final String SEGMENT = "/[";
-
     private final Set<String> all = new HashSet<>();
     private final Set<String> containersBelowEngines = new HashSet<>();
     private final Set<String> holdingTests = new HashSet<>();
@@ -48,8 +45,7 @@ final class PlannedIds {
         if (all.contains(uniqueId)) {
             return true;
         }
-        for (int at = uniqueId.lastIndexOf(SEGMENT); at > 0; at = uniqueId.lastIndexOf(SEGMENT, at - 1)) {
-            String ancestor = uniqueId.substring(0, at);
+        for (String ancestor = UniqueIds.parent(uniqueId); ancestor != null; ancestor = UniqueIds.parent(ancestor)) {
             if (all.contains(ancestor)) {
                 return containersBelowEngines.contains(ancestor) && !holdingTests.contains(ancestor);
             }

@@ -25,7 +25,7 @@ final class SingleTestRun implements TestExecutionListener {
 
     @Override
     public void executionSkipped(TestIdentifier identifier, String reason) {
-        if (covers(identifier)) {
+        if (UniqueIds.isWithin(target, identifier.getUniqueId())) {
             status = Wire.SKIPPED;
             message = reason;
         }
@@ -41,7 +41,7 @@ final class SingleTestRun implements TestExecutionListener {
             status = outcome == TestExecutionResult.Status.SUCCESSFUL ? Wire.PASSED
                     : outcome == TestExecutionResult.Status.ABORTED ? Wire.ABORTED : Wire.FAILED;
             message = result.getThrowable().map(Failures::describe).orElse(null);
-        } else if (outcome == TestExecutionResult.Status.ABORTED && covers(identifier) && status == Wire.MISSING) {
+        } else if (outcome == TestExecutionResult.Status.ABORTED && UniqueIds.isWithin(target, identifier.getUniqueId()) && status == Wire.MISSING) {
             status = Wire.ABORTED;
             message = result.getThrowable().map(Failures::describe).orElse(null);
         }
@@ -49,11 +49,5 @@ final class SingleTestRun implements TestExecutionListener {
 
     Result result(long nanos) {
         return failure != null ? new Result(Wire.FAILED, nanos, failure) : new Result(status, nanos, message);
-    }
-
-    /** Unique ids nest by segments, so an ancestor's id is a prefix of the target's up to a separator. */
-    private boolean covers(TestIdentifier identifier) {
-        String id = identifier.getUniqueId();
-        return target.equals(id) || target.startsWith(id + "/");
     }
 }

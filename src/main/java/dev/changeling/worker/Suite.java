@@ -19,6 +19,7 @@ import org.junit.platform.launcher.Launcher;
 import org.junit.platform.launcher.LauncherDiscoveryRequest;
 import org.junit.platform.launcher.LauncherSession;
 import org.junit.platform.launcher.TagFilter;
+import org.junit.platform.launcher.TestExecutionListener;
 import org.junit.platform.launcher.TestPlan;
 import org.junit.platform.launcher.core.LauncherDiscoveryRequestBuilder;
 import org.junit.platform.launcher.core.LauncherFactory;
@@ -86,19 +87,16 @@ final class Suite {
             return new SingleTestRun.Result(Wire.MISSING, System.nanoTime() - start, Failures.describe(notFound));
         }
         if (PlannedIds.of(plan).mayHold(uniqueId)) {
-            launcher().execute(plan, listener);
+            execute(plan, listener);
         }
-        long nanos = System.nanoTime() - start;
-        Thread.interrupted();
-        Thread.currentThread().setContextClassLoader(ClassLoader.getSystemClassLoader());
-        return listener.result(nanos);
+        return listener.result(System.nanoTime() - start);
     }
 
     /**
      * Runs several tests in one request, which pays for discovery once instead of once per test; their
-     * outcomes come back in the order given. If the request cannot be discovered, or one of the ids is not
-     * in the plan at all (an id that no longer selects anything), every test runs on its own instead, so
-     * that a missing test never looks like a kill.
+     * outcomes come back in the order given. If the request cannot be discovered, or the plan cannot hold one
+     * of the ids ({@link PlannedIds}: an id that no longer selects anything), every test runs on its own
+     * instead, so that a missing test never looks like a kill.
      */
     List<SingleTestRun.Result> runTogether(List<String> uniqueIds) {
         LAUNCHER_LOG.setLevel(Level.WARNING);
@@ -107,17 +105,21 @@ final class Suite {
         try {
             plan = launcher().discover(request);
         } catch (RuntimeException notFound) {
-            return uniqueIds.stream().map(this::runOne).toList();
+            plan = null;
         }
-        PlannedIds planned = PlannedIds.of(plan);
-        if (!uniqueIds.stream().allMatch(planned::mayHold)) {
+        if (plan == null || !uniqueIds.stream().allMatch(PlannedIds.of(plan)::mayHold)) {
             return uniqueIds.stream().map(this::runOne).toList();
         }
         TogetherRun listener = new TogetherRun(uniqueIds);
+        execute(plan, listener);
+        return listener.results();
+    }
+
+    /** Runs a plan, then clears what its tests may have left on this thread: an interrupt, a context class loader. */
+    private void execute(TestPlan plan, TestExecutionListener listener) {
         launcher().execute(plan, listener);
         Thread.interrupted();
         Thread.currentThread().setContextClassLoader(ClassLoader.getSystemClassLoader());
-        return listener.results();
     }
 
     /**

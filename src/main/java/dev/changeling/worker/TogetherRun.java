@@ -30,7 +30,7 @@ final class TogetherRun implements TestExecutionListener {
     @Override
     public void executionSkipped(TestIdentifier identifier, String reason) {
         for (String target : targets) {
-            if (covers(identifier, target)) {
+            if (UniqueIds.isWithin(target, identifier.getUniqueId())) {
                 results.putIfAbsent(target, new SingleTestRun.Result(Wire.SKIPPED, 0, reason));
             }
         }
@@ -60,16 +60,11 @@ final class TogetherRun implements TestExecutionListener {
 
     private SingleTestRun.Result resultOf(String target) {
         for (Map.Entry<String, String> container : failedContainers.entrySet()) {
-            if (target.startsWith(container.getKey() + "/")) {
+            if (UniqueIds.isWithin(target, container.getKey())) {
                 return new SingleTestRun.Result(Wire.FAILED, results.containsKey(target) ? results.get(target).nanos() : 0,
                         container.getValue());
             }
         }
         return results.getOrDefault(target, new SingleTestRun.Result(Wire.MISSING, 0, null));
-    }
-
-    private static boolean covers(TestIdentifier identifier, String target) {
-        String id = identifier.getUniqueId();
-        return target.equals(id) || target.startsWith(id + "/");
     }
 }
