@@ -21,6 +21,7 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -58,8 +59,9 @@ final class RunCommand implements Callable<Integer> {
     long timeExtraMillis = Deadlines.DEFAULT.constantMillis();
 
     @Option(names = "--worker-heap", paramLabel = "SIZE",
-            description = "Heap of each worker JVM, e.g. 512m or 2g (default: ${DEFAULT-VALUE}).")
-    String workerHeap = WorkerSettings.DEFAULT_MAX_HEAP;
+            description = "Heap of each worker JVM, e.g. 512m or 2g (default: the -Xmx of the pom's Surefire argLine, else "
+                    + WorkerSettings.DEFAULT_MAX_HEAP + ").")
+    String workerHeap;
 
     @Option(names = "--mutants-per-worker", paramLabel = "N",
             description = "Replace a worker JVM after this many mutants (default: ${DEFAULT-VALUE}).")
@@ -108,7 +110,7 @@ final class RunCommand implements Callable<Integer> {
         }
         RunRequest request = new RunRequest(layout.root(), project.limits(layout), mutants.selection(point -> true),
                 change.scope(layout.root()), explicit.applyTo(DiscoveryOptions.defaults().withMavenArguments(mavenArguments)),
-                workerCount, deadlines, workerHeap, mutantsPerWorker, skipTests, skipTags);
+                workerCount, deadlines, Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags);
         Style style = plain ? Style.plain() : Style.forStandardOutput();
         ProgressListener listener = new ProgressListener(err, plain);
         MutationRun run = new MutationRun(request, listener);

@@ -20,6 +20,7 @@ public final class Baseline {
     private final int[] reachedWhileInitialising;
     private final List<String> initialisationFailures;
     private final long nanos;
+    private final List<String> classesRunInFreshWorkers;
     private final Map<String, RecordedTest> byId = new LinkedHashMap<>();
     private final Map<Integer, BitSet> testsByPoint = new HashMap<>();
 
@@ -33,6 +34,12 @@ public final class Baseline {
      */
     public Baseline(List<RecordedTest> tests, List<FailedContainer> failedContainers,
                     int[] reachedWhileInitialising, List<String> initialisationFailures, long nanos) {
+        this(tests, failedContainers, reachedWhileInitialising, initialisationFailures, nanos, List.of());
+    }
+
+    private Baseline(List<RecordedTest> tests, List<FailedContainer> failedContainers, int[] reachedWhileInitialising,
+                     List<String> initialisationFailures, long nanos, List<String> classesRunInFreshWorkers) {
+        this.classesRunInFreshWorkers = List.copyOf(classesRunInFreshWorkers);
         this.tests = List.copyOf(tests);
         this.failedContainers = List.copyOf(failedContainers);
         this.reachedWhileInitialising = reachedWhileInitialising.clone();
@@ -46,6 +53,30 @@ public final class Baseline {
                 testsByPoint.computeIfAbsent(point, p -> new BitSet()).set(index);
             }
         }
+    }
+
+    /**
+     * The runs of parts of the suite (a test class each, say) as one; what initialising the classes reached is
+     * the same in every worker, and the first part's is kept.
+     *
+     * @param nanos                    wall time of all the parts
+     * @param classesRunInFreshWorkers test classes whose part ran in a worker of its own
+     */
+    static Baseline merge(List<Baseline> parts, long nanos, List<String> classesRunInFreshWorkers) {
+        List<RecordedTest> tests = new ArrayList<>();
+        List<FailedContainer> containers = new ArrayList<>();
+        parts.forEach(part -> {
+            tests.addAll(part.tests);
+            containers.addAll(part.failedContainers);
+        });
+        int[] reached = parts.isEmpty() ? new int[0] : parts.get(0).reachedWhileInitialising;
+        List<String> failures = parts.isEmpty() ? List.of() : parts.get(0).initialisationFailures;
+        return new Baseline(tests, containers, reached, failures, nanos, classesRunInFreshWorkers);
+    }
+
+    /** Test classes that ran in a worker of their own, as the build runs every class in a fresh JVM. */
+    public List<String> classesRunInFreshWorkers() {
+        return classesRunInFreshWorkers;
     }
 
     public List<RecordedTest> tests() {

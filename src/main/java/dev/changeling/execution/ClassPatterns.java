@@ -1,12 +1,20 @@
 package dev.changeling.execution;
 
 import dev.changeling.UserError;
+import java.util.List;
+import java.util.function.Predicate;
 import java.util.regex.Pattern;
 
 /** Turns the test class name patterns users write into the regular expressions the JUnit Platform filters by. */
-final class ClassPatterns {
+public final class ClassPatterns {
 
     private ClassPatterns() {
+    }
+
+    /** Whether a fully qualified class name matches any of the patterns (see {@link #toRegex}). */
+    public static Predicate<String> anyOf(List<String> patterns) {
+        List<Predicate<String>> matchers = patterns.stream().map(pattern -> Pattern.compile(toRegex(pattern)).asMatchPredicate()).toList();
+        return name -> matchers.stream().anyMatch(matcher -> matcher.test(name));
     }
 
     /**

@@ -2,11 +2,13 @@ package dev.changeling.execution;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
+import java.util.stream.Collectors;
 
 /** The worker pool: one thread per slot takes the next job from a shared list until none are left. */
 final class DefaultWorkerPool implements WorkerPool {
@@ -30,10 +32,43 @@ final class DefaultWorkerPool implements WorkerPool {
         Reaper.watch(this);
     }
 
+    /**
+     * Every worker takes the next test class until none is left, each class one request (as the build's own
+     * runner does when it reads classes lazily); a class goes together with its nested classes, which the engine
+     * would otherwise find and run twice. Where the build gives every class a fresh JVM, a class that fails in a
+     * shared worker runs again in a fresh one, and that run counts.
+     */
     @Override
     public synchronized Baseline baseline(Consumer<String> onTestFinished) {
         throwIfStopped();
-        return slots[0].baseline(onTestFinished);
+        long start = System.nanoTime();
+        List<List<String>> classes = new ArrayList<>(setup.testClasses().stream()
+                .collect(Collectors.groupingBy(name -> name.contains("$") ? name.substring(0, name.indexOf('$')) : name,
+                        LinkedHashMap::new, Collectors.toList()))
+                .values());
+        Baseline[] parts = new Baseline[classes.size()];
+        AtomicInteger next = new AtomicInteger();
+        Consumer<String> progress = name -> {
+            synchronized (listenerLock) {
+                onTestFinished.accept(name);
+            }
+        };
+        onSlots(classes.size(), slot -> {
+            for (int index = next.getAndIncrement(); index < classes.size() && !stopped; index = next.getAndIncrement()) {
+                parts[index] = slot.baseline(classes.get(index), false, progress);
+            }
+        });
+        throwIfStopped();
+        List<String> fresh = new ArrayList<>();
+        if (setup.freshJvmPerClass()) {
+            for (int index = 0; index < parts.length; index++) {
+                if (!parts[index].green()) {
+                    parts[index] = slots[0].baseline(classes.get(index), true, progress);
+                    fresh.add(classes.get(index).get(0));
+                }
+            }
+        }
+        return Baseline.merge(List.of(parts), System.nanoTime() - start, fresh);
     }
 
     @Override
@@ -47,21 +82,7 @@ final class DefaultWorkerPool implements WorkerPool {
         }
         JobResult[] results = new JobResult[jobs.size()];
         AtomicInteger next = new AtomicInteger();
-        AtomicReference<RuntimeException> failure = new AtomicReference<>();
-        List<Thread> threads = new ArrayList<>();
-        for (int i = 0; i < Math.min(slots.length, jobs.size()) && !stopped; i++) {
-            WorkerSlot slot = slots[i];
-            Thread thread = new Thread(() -> work(slot, jobs, next, results, onResult, failure), "changeling-worker-slot-" + (i + 1));
-            thread.setDaemon(true);
-            threads.add(thread);
-            thread.start();
-        }
-        for (Thread thread : threads) {
-            joinStoppingOnInterrupt(thread);
-        }
-        if (failure.get() != null) {
-            throw failure.get();
-        }
+        onSlots(jobs.size(), slot -> work(slot, jobs, next, results, onResult));
         List<JobResult> finished = new ArrayList<>();
         for (JobResult result : results) {
             if (result != null) {
@@ -71,26 +92,49 @@ final class DefaultWorkerPool implements WorkerPool {
         return finished;
     }
 
-    private void work(WorkerSlot slot, List<MutantJob> jobs, AtomicInteger next, JobResult[] results,
-                      Consumer<JobResult> onResult, AtomicReference<RuntimeException> failure) {
-        try {
-            for (int index = next.getAndIncrement(); index < jobs.size() && !stopped; index = next.getAndIncrement()) {
-                JobResult result = slot.execute(jobs.get(index));
-                boolean lostToStop = stopped && (result.outcome() == Outcome.CRASHED || result.outcome() == Outcome.TIMED_OUT);
-                if (lostToStop) {
-                    return;
-                }
-                results[index] = result;
-                synchronized (listenerLock) {
-                    onResult.accept(result);
-                }
+    private void work(WorkerSlot slot, List<MutantJob> jobs, AtomicInteger next, JobResult[] results, Consumer<JobResult> onResult) {
+        for (int index = next.getAndIncrement(); index < jobs.size() && !stopped; index = next.getAndIncrement()) {
+            JobResult result = slot.execute(jobs.get(index));
+            boolean lostToStop = stopped && (result.outcome() == Outcome.CRASHED || result.outcome() == Outcome.TIMED_OUT);
+            if (lostToStop) {
+                return;
             }
-        } catch (CancellationException stoppedMeanwhile) {
-            // the pool was stopped; what finished is kept
-        } catch (RuntimeException e) {
-            if (!stopped && failure.compareAndSet(null, e)) {
-                stop();
+            results[index] = result;
+            synchronized (listenerLock) {
+                onResult.accept(result);
             }
+        }
+    }
+
+    /**
+     * Runs the body on as many slots as there are tasks (all at most), one thread each, and waits for them. The
+     * first failure stops the pool and is thrown once every thread has ended; a stop meanwhile just ends them.
+     */
+    private void onSlots(int tasks, Consumer<WorkerSlot> body) {
+        AtomicReference<RuntimeException> failure = new AtomicReference<>();
+        List<Thread> threads = new ArrayList<>();
+        for (int i = 0; i < Math.min(slots.length, tasks) && !stopped; i++) {
+            WorkerSlot slot = slots[i];
+            Thread thread = new Thread(() -> {
+                try {
+                    body.accept(slot);
+                } catch (CancellationException stoppedMeanwhile) {
+                    // the pool was stopped; what finished is kept
+                } catch (RuntimeException e) {
+                    if (!stopped && failure.compareAndSet(null, e)) {
+                        stop();
+                    }
+                }
+            }, "changeling-worker-slot-" + (i + 1));
+            thread.setDaemon(true);
+            threads.add(thread);
+            thread.start();
+        }
+        for (Thread thread : threads) {
+            joinStoppingOnInterrupt(thread);
+        }
+        if (failure.get() != null) {
+            throw failure.get();
         }
     }
 

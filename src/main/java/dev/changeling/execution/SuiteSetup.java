@@ -1,64 +1,56 @@
 package dev.changeling.execution;
 
-import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 
 /**
  * What every worker is told before it runs anything: how many mutation points there are, which
- * production classes to initialise first, and where and how to find the tests.
+ * production classes to initialise first, and which tests make up the suite.
  *
- * @param pointCount    mutation points in the schema classes (ids 0 to pointCount - 1)
- * @param preinitialise production classes to initialise once with no mutant on, so their static state
- *                      is the original's; a class that fails to initialise is reported, not fatal
- * @param testRoots     the folders of compiled test classes to discover tests in
- * @param includes      test class name patterns; {@code *} stands for any part of a name without dots,
- *                      {@code **} for anything; a pattern without a dot is matched against the simple
- *                      name, one with a dot against the qualified name; {@code **}{@code /*Test.java} also works
- * @param excludes      test class name patterns to leave out, same syntax
- * @param excludedTags  JUnit tags (tag expressions) whose tests are left out
+ * @param pointCount              mutation points in the schema classes (ids 0 to pointCount - 1)
+ * @param preinitialise           production classes to initialise once with no mutant on, so their static state
+ *                                is the original's; a class that fails to initialise is reported, not fatal
+ * @param testClasses             binary names of the test classes whose tests make up the suite, as the build selects them
+ * @param includedTags            JUnit tag expressions a test must match; empty for every test
+ * @param excludedTags            JUnit tag expressions whose tests are left out
+ * @param configurationParameters JUnit Platform configuration parameters for every request, beside those the
+ *                                platform reads itself (system properties, {@code junit-platform.properties})
+ * @param freshJvmPerClass        whether the build runs every test class in a fresh JVM, which the baseline then
+ *                                honours for the classes that fail in a shared worker
  */
-public record SuiteSetup(int pointCount, List<String> preinitialise, List<Path> testRoots,
-                         List<String> includes, List<String> excludes, List<String> excludedTags) {
-
-    /** The test classes a Maven build runs when it is not told otherwise (its test plugin's defaults). */
-    public static final List<String> DEFAULT_INCLUDES = List.of("Test*", "*Test", "*Tests", "*TestCase");
-    /**
-     * Likewise left out by default: nested classes found on their own. JUnit Jupiter's {@code @Nested}
-     * classes still run, found through the class that encloses them.
-     */
-    public static final List<String> DEFAULT_EXCLUDES = List.of("*$*");
+public record SuiteSetup(int pointCount, List<String> preinitialise, List<String> testClasses,
+                         List<String> includedTags, List<String> excludedTags, Map<String, String> configurationParameters,
+                         boolean freshJvmPerClass) {
 
     public SuiteSetup {
         if (pointCount < 0) {
             throw new IllegalArgumentException("the point count must not be negative, not " + pointCount);
         }
         preinitialise = List.copyOf(preinitialise);
-        testRoots = testRoots.stream().map(root -> root.toAbsolutePath().normalize()).toList();
-        includes = List.copyOf(includes);
-        excludes = List.copyOf(excludes);
+        testClasses = List.copyOf(testClasses);
+        includedTags = List.copyOf(includedTags);
         excludedTags = List.copyOf(excludedTags);
-        includes.forEach(ClassPatterns::toRegex);
-        excludes.forEach(ClassPatterns::toRegex);
+        configurationParameters = Map.copyOf(configurationParameters);
     }
 
-    /** The default test classes below the given roots, nothing pre-initialised. */
-    public static SuiteSetup of(int pointCount, List<Path> testRoots) {
-        return new SuiteSetup(pointCount, List.of(), testRoots, DEFAULT_INCLUDES, DEFAULT_EXCLUDES, List.of());
+    /** These test classes, every tag, nothing pre-initialised. */
+    public static SuiteSetup of(int pointCount, List<String> testClasses) {
+        return new SuiteSetup(pointCount, List.of(), testClasses, List.of(), List.of(), Map.of(), false);
     }
 
     public SuiteSetup withPreinitialise(List<String> classNames) {
-        return new SuiteSetup(pointCount, classNames, testRoots, includes, excludes, excludedTags);
+        return new SuiteSetup(pointCount, classNames, testClasses, includedTags, excludedTags, configurationParameters, freshJvmPerClass);
     }
 
-    public SuiteSetup withIncludes(List<String> patterns) {
-        return new SuiteSetup(pointCount, preinitialise, testRoots, patterns, excludes, excludedTags);
+    public SuiteSetup withTags(List<String> included, List<String> excluded) {
+        return new SuiteSetup(pointCount, preinitialise, testClasses, included, excluded, configurationParameters, freshJvmPerClass);
     }
 
-    public SuiteSetup withExcludes(List<String> patterns) {
-        return new SuiteSetup(pointCount, preinitialise, testRoots, includes, patterns, excludedTags);
+    public SuiteSetup withFreshJvmPerClass(boolean fresh) {
+        return new SuiteSetup(pointCount, preinitialise, testClasses, includedTags, excludedTags, configurationParameters, fresh);
     }
 
-    public SuiteSetup withExcludedTags(List<String> tags) {
-        return new SuiteSetup(pointCount, preinitialise, testRoots, includes, excludes, tags);
+    public SuiteSetup withConfigurationParameters(Map<String, String> parameters) {
+        return new SuiteSetup(pointCount, preinitialise, testClasses, includedTags, excludedTags, parameters, freshJvmPerClass);
     }
 }

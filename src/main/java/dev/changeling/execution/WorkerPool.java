@@ -16,9 +16,10 @@ public interface WorkerPool extends AutoCloseable {
     }
 
     /**
-     * Runs the whole unmutated suite once in one worker, recording each test's result, time and reach.
+     * Runs the whole unmutated suite once, its test classes spread over the workers, recording each test's
+     * result, time and reach.
      *
-     * @param onTestFinished told the name of each test as it finishes (for progress), on the calling thread
+     * @param onTestFinished told the name of each test as it finishes (for progress), one call at a time, from the pool's threads
      * @throws dev.changeling.UserError                 when the worker cannot start, dies or runs out of time
      * @throws java.util.concurrent.CancellationException when the pool was stopped
      */

@@ -92,12 +92,11 @@ final class WorkerProcess {
         List<String> command = new ArrayList<>();
         command.add(settings.javaExecutable().toString());
         command.add("-Xmx" + settings.maxHeap());
-        if (settings.exitOnOutOfMemory()) {
-            command.add("-XX:+ExitOnOutOfMemoryError");
-        }
         command.add("-Djava.io.tmpdir=" + temp.toAbsolutePath());
         command.addAll(WorkerSettings.TUNING);
         command.addAll(settings.jvmArguments());
+        // After the options, as the build's test JVM sets them after its argLine: the last -D of a name wins.
+        settings.systemProperties().forEach((name, value) -> command.add("-D" + name + "=" + value));
         command.add("@" + argumentFile.toAbsolutePath());
         command.add(WorkerClasses.MAIN_CLASS);
         command.add(Integer.toString(server.getLocalPort()));
@@ -107,9 +106,10 @@ final class WorkerProcess {
         Files.writeString(log, "---- worker started " + Instant.now() + "\n", StandardCharsets.UTF_8,
                 StandardOpenOption.CREATE, StandardOpenOption.APPEND);
         ProcessBuilder builder = new ProcessBuilder(command)
-                .directory(settings.projectDirectory().toFile())
+                .directory(settings.workingDirectory().toFile())
                 .redirectErrorStream(true)
                 .redirectOutput(ProcessBuilder.Redirect.appendTo(log.toFile()));
+        builder.environment().putAll(settings.environment());
         Process process;
         try {
             process = builder.start();
@@ -159,10 +159,10 @@ final class WorkerProcess {
             out.writeByte(Wire.PREPARE);
             out.writeInt(setup.pointCount());
             Wire.writeStrings(out, setup.preinitialise());
-            Wire.writeStrings(out, setup.testRoots().stream().map(Path::toString).toList());
-            Wire.writeStrings(out, setup.includes().stream().map(ClassPatterns::toRegex).toList());
-            Wire.writeStrings(out, setup.excludes().stream().map(ClassPatterns::toRegex).toList());
+            Wire.writeStrings(out, setup.includedTags());
             Wire.writeStrings(out, setup.excludedTags());
+            Wire.writeStrings(out, setup.configurationParameters().entrySet().stream()
+                    .flatMap(parameter -> java.util.stream.Stream.of(parameter.getKey(), parameter.getValue())).toList());
             out.flush();
             expect(Wire.PREPARED, next(deadline));
             return new Prepared(Wire.readInts(in), Wire.readStrings(in));
@@ -174,12 +174,14 @@ final class WorkerProcess {
         }
     }
 
-    Baseline baseline(Prepared prepared, Consumer<String> onTestFinished, long timeoutMillis) throws Lost {
+    /** Runs the unmutated tests of these classes, recording each test's result, time and reach. */
+    Baseline baseline(Prepared prepared, List<String> testClasses, Consumer<String> onTestFinished, long timeoutMillis) throws Lost {
         long start = System.nanoTime();
         long deadline = start + TimeUnit.MILLISECONDS.toNanos(timeoutMillis);
         long mark = logSize();
         try {
             out.writeByte(Wire.BASELINE);
+            Wire.writeStrings(out, testClasses);
             out.flush();
             byte code;
             while ((code = next(deadline)) == Wire.PROGRESS) {

@@ -41,10 +41,19 @@ final class WorkerSlot {
         this.aloneArgumentFile = folder.resolve("worker-" + number + "-alone.args");
     }
 
-    Baseline baseline(Consumer<String> onTestFinished) {
+    /** Runs these test classes unmutated in this slot's worker; in a fresh one, if asked, that is then replaced. */
+    Baseline baseline(List<String> testClasses, boolean freshWorker, Consumer<String> onTestFinished) {
+        if (freshWorker) {
+            close();
+            emptyFolder(temp);
+        }
         ensureWorker();
         try {
-            Baseline baseline = worker.baseline(prepared, onTestFinished, settings.baselineTimeout().toMillis());
+            Baseline baseline = worker.baseline(prepared, testClasses, onTestFinished, settings.baselineTimeout().toMillis());
+            if (freshWorker) {
+                close();
+                emptyFolder(temp);
+            }
             warm = true;
             return baseline;
         } catch (RuntimeException e) {
@@ -78,13 +87,21 @@ final class WorkerSlot {
             throw e;
         }
         mutantsOnWorker++;
-        if (result.outcome() == Outcome.TIMED_OUT || result.outcome() == Outcome.CRASHED) {
+        if (result.outcome() == Outcome.TIMED_OUT || result.outcome() == Outcome.CRASHED || exhaustedMemory(result)) {
             retire();
         } else if (mutantsOnWorker >= settings.mutantsPerWorker()) {
             worker.close();
             retire();
         }
         return result;
+    }
+
+    /**
+     * A mutant that ran the heap out failed its test like any error, but the worker it ran in may limp on (a
+     * thread of a test or of the engine may have met the error too), so it is replaced.
+     */
+    private static boolean exhaustedMemory(JobResult result) {
+        return result.outcome() == Outcome.KILLED && result.message() != null && result.message().startsWith("OutOfMemoryError");
     }
 
     private JobResult runInWorker(MutantJob job) {

@@ -9,7 +9,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.regex.Pattern;
 import java.util.stream.Collectors;
@@ -111,6 +113,22 @@ final class Maven {
             Thread.currentThread().interrupt();
             throw new UserError("stopped while mvn was running in " + directory, ExitCode.INTERRUPTED);
         }
+    }
+
+    /** The {@code -Dname=value} arguments given for every call ({@code -Dname} alone means true), as Maven's user properties. */
+    Map<String, String> userProperties() {
+        Map<String, String> properties = new LinkedHashMap<>();
+        for (String argument : extraArguments) {
+            if (argument.startsWith("-D") && argument.length() > 2) {
+                int equals = argument.indexOf('=');
+                if (equals < 0) {
+                    properties.put(argument.substring(2), "true");
+                } else {
+                    properties.put(argument.substring(2, equals), argument.substring(equals + 1));
+                }
+            }
+        }
+        return properties;
     }
 
     /** The time of every run so far, added up. */

@@ -21,14 +21,14 @@ final class MavenDiscovery {
             "Failed to collect dependencies", "Failed to read artifact descriptor", "Non-resolvable parent POM");
 
     /** What the mvn call left behind, before the JUnit launcher is aligned. */
-    record Compiled(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies) {
+    record Compiled(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies, SuiteConfiguration suite) {
     }
 
     private MavenDiscovery() {
     }
 
     /**
-     * Runs {@code mvn test-compile dependency:build-classpath} in the module; when the module needs siblings
+     * Runs {@code mvn test-compile dependency:build-classpath help:effective-pom} in the module; when the module needs siblings
      * that are not installed, runs it again from the outermost aggregator with {@code -pl module -am}, and
      * remembers that for the next run.
      */
@@ -43,15 +43,18 @@ final class MavenDiscovery {
         Path work = folders.directory().resolve("changeling");
         Path classpathFile = work.resolve("classpath.txt");
         Path log = work.resolve("maven.log");
+        Path effectivePom = work.resolve("effective-pom.xml");
         Path reactorMarker = work.resolve("maven-reactor.txt");
         try {
             Files.createDirectories(work);
             Files.deleteIfExists(classpathFile);
+            Files.deleteIfExists(effectivePom);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
         List<String> build = List.of("test-compile", CachedMavenResolver.DEPENDENCY_PLUGIN + ":build-classpath",
-                "-Dmdep.outputFile=" + classpathFile, "-Dmdep.includeScope=test");
+                "-Dmdep.outputFile=" + classpathFile, "-Dmdep.includeScope=test",
+                EffectivePom.HELP_PLUGIN + ":effective-pom", "-Doutput=" + effectivePom);
         Optional<Reactor> reactor = Reactor.around(module);
         Maven.Run run;
         if (reactor.isPresent() && Files.isRegularFile(reactorMarker)) {
@@ -75,8 +78,13 @@ final class MavenDiscovery {
             throw new UserError(module + ": mvn compiled no tests (there is no " + folders.testClasses()
                     + "); changeling needs the project's own tests, in " + folders.testSources());
         }
+        if (!Files.isRegularFile(effectivePom)) {
+            throw run.failure("mvn finished but wrote no effective POM to " + effectivePom);
+        }
         ProjectLayout layout = new ProjectLayout(module, List.of(folders.sources()), List.of(folders.testSources()), folders.directory());
-        return new Compiled(layout, folders.classes(), folders.testClasses(), read(classpathFile));
+        SuiteConfiguration suite = SurefireReader.read(EffectivePom.read(effectivePom, folders.directory()), module,
+                folders.testClasses(), maven.userProperties());
+        return new Compiled(layout, folders.classes(), folders.testClasses(), read(classpathFile), suite);
     }
 
     private static Maven.Run inReactor(Reactor reactor, List<String> build, Path log, Maven maven) {

@@ -1,24 +1,19 @@
 package dev.changeling.project;
 
+import static dev.changeling.project.XmlElements.child;
+import static dev.changeling.project.XmlElements.children;
+import static dev.changeling.project.XmlElements.text;
+
 import dev.changeling.UserError;
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import javax.xml.XMLConstants;
-import javax.xml.parsers.DocumentBuilder;
-import javax.xml.parsers.DocumentBuilderFactory;
-import javax.xml.parsers.ParserConfigurationException;
 import org.w3c.dom.Element;
-import org.w3c.dom.Node;
-import org.xml.sax.ErrorHandler;
 import org.xml.sax.SAXException;
-import org.xml.sax.SAXParseException;
 
 /**
  * What the tool needs to know of one pom.xml before running mvn: its packaging, its modules and its
@@ -35,7 +30,7 @@ record PomFile(Path file, String packaging, List<String> modules, Map<String, St
     static PomFile read(Path file) {
         Element project;
         try {
-            project = parser().parse(file.toFile()).getDocumentElement();
+            project = XmlElements.root(file);
         } catch (SAXException | IOException e) {
             throw new UserError(file + ": not a readable pom.xml (" + e.getMessage() + "); fix the file or give another folder");
         }
@@ -44,9 +39,9 @@ record PomFile(Path file, String packaging, List<String> modules, Map<String, St
         Map<String, String> properties = new LinkedHashMap<>();
         child(project, "properties").ifPresent(element -> children(element).forEach(property -> properties.put(property.getTagName(), text(property))));
         List<String> modules = child(project, "modules")
-                .map(element -> children(element).stream().filter(module -> module.getTagName().equals("module")).map(PomFile::text).toList())
+                .map(element -> children(element).stream().filter(module -> module.getTagName().equals("module")).map(XmlElements::text).toList())
                 .orElse(List.of());
-        String packaging = child(project, "packaging").map(PomFile::text).orElse("jar");
+        String packaging = child(project, "packaging").map(XmlElements::text).orElse("jar");
         return new PomFile(file, packaging, modules, build, properties);
     }
 
@@ -101,55 +96,5 @@ record PomFile(Path file, String packaging, List<String> modules, Map<String, St
             current = filled.toString();
         }
         return current.contains("${") ? null : current;
-    }
-
-    private static DocumentBuilder parser() {
-        try {
-            DocumentBuilderFactory factory = DocumentBuilderFactory.newInstance();
-            factory.setFeature(XMLConstants.FEATURE_SECURE_PROCESSING, true);
-            factory.setFeature("http://apache.org/xml/features/disallow-doctype-decl", true);
-            factory.setExpandEntityReferences(false);
-            DocumentBuilder builder = factory.newDocumentBuilder();
-            builder.setErrorHandler(new QuietErrors());
-            return builder;
-        } catch (ParserConfigurationException e) {
-            throw new IllegalStateException(e);
-        }
-    }
-
-    /** Lets a parse error become the exception the caller reports, instead of also being printed to stderr. */
-    private static final class QuietErrors implements ErrorHandler {
-
-        @Override
-        public void warning(SAXParseException exception) {
-        }
-
-        @Override
-        public void error(SAXParseException exception) throws SAXParseException {
-            throw exception;
-        }
-
-        @Override
-        public void fatalError(SAXParseException exception) throws SAXParseException {
-            throw exception;
-        }
-    }
-
-    private static Optional<Element> child(Element parent, String name) {
-        return children(parent).stream().filter(element -> element.getTagName().equals(name)).findFirst();
-    }
-
-    private static List<Element> children(Element parent) {
-        List<Element> elements = new ArrayList<>();
-        for (Node node = parent.getFirstChild(); node != null; node = node.getNextSibling()) {
-            if (node instanceof Element element) {
-                elements.add(element);
-            }
-        }
-        return elements;
-    }
-
-    private static String text(Element element) {
-        return element.getTextContent().strip();
     }
 }

@@ -22,6 +22,7 @@ import dev.changeling.mutant.Selection;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.ProjectDiscovery;
 import dev.changeling.project.ProjectLayout;
+import dev.changeling.project.SuiteConfiguration;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Records;
 import dev.changeling.results.RunResults;
@@ -131,14 +132,9 @@ public final class MutationRun {
         List<Path> classpath = new ArrayList<>();
         classpath.add(build.schemaClasses());
         classpath.addAll(project.testClasspath());
-        WorkerSettings settings = WorkerSettings.of(layout.root(), classpath, work.resolve("workers"))
-                .withWorkers(request.workers())
-                .withMaxHeap(request.workerHeap())
-                .withMutantsPerWorker(request.mutantsPerWorker());
-        SuiteSetup setup = SuiteSetup.of(build.pointCount(), project.testClassRoots())
-                .withPreinitialise(project.productionClasses())
-                .withExcludes(request.skipTests())
-                .withExcludedTags(request.skipTags());
+        SuiteConfiguration suite = project.suite();
+        WorkerSettings settings = TestJvm.settings(suite, request, classpath, work.resolve("workers"), layout);
+        SuiteSetup setup = TestJvm.setup(suite, request, build.pointCount(), project.productionClasses(), listener);
         List<TestRecord> tests = List.of();
         boolean complete = false;
         try (WorkerPool workers = WorkerPool.open(settings, setup)) {
@@ -147,12 +143,12 @@ public final class MutationRun {
             at = System.nanoTime();
             Baseline baseline = workers.baseline(name -> { });
             timings.put("baseline", millisSince(at));
-            requireGreen(baseline);
+            requireGreen(baseline, setup);
             tests = baseline.tests().stream()
                     .map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6))
                     .toList();
-            listener.phase(String.format(java.util.Locale.ROOT, "baseline: %d tests green in %.1f s",
-                    baseline.tests().size(), baseline.nanos() / 1e9));
+            listener.phase(String.format(java.util.Locale.ROOT, "baseline: %d tests green in %.1f s%s",
+                    baseline.tests().size(), baseline.nanos() / 1e9, freshWorkers(baseline)));
 
             Map<String, Mutant> byKey = new HashMap<>();
             Map<String, List<String>> reaching = new HashMap<>();
@@ -234,9 +230,16 @@ public final class MutationRun {
                 job.nanos() / 1e6, base.diff());
     }
 
-    private void requireGreen(Baseline baseline) {
+    private static String freshWorkers(Baseline baseline) {
+        int count = baseline.classesRunInFreshWorkers().size();
+        return count == 0 ? "" : "; " + count + (count == 1 ? " class" : " classes")
+                + " failed in a shared worker and ran again in a fresh one, as the pom runs every class in its own JVM (reuseForks=false)";
+    }
+
+    private void requireGreen(Baseline baseline, SuiteSetup setup) {
         if (baseline.tests().isEmpty()) {
-            throw new UserError("no tests found in " + request.folder() + " (test classes named like Test*, *Test, *Tests or *TestCase);"
+            throw new UserError("no tests found in " + request.folder() + " (" + setup.testClasses().size()
+                    + " test classes selected as `mvn test` selects them, none holding a test that runs);"
                     + " mutation analysis needs the project's tests", ExitCode.BASELINE_RED);
         }
         if (baseline.green()) {
@@ -260,7 +263,7 @@ public final class MutationRun {
                 selection.sampleSeed(), chosen.sampled(), chosen.population(),
                 request.change().map(change -> change.description()).orElse(null),
                 request.workers(), request.deadlines().factor(), request.deadlines().constantMillis(),
-                request.skipTests(), request.skipTags(), request.discovery().mavenArguments(), request.workerHeap());
+                request.skipTests(), request.skipTags(), request.discovery().mavenArguments(), request.workerHeap().orElse(null));
     }
 
     private static Map<String, String> hashes(Map<String, SourceFile> files, List<MutantResult> results) {

@@ -48,7 +48,7 @@ public final class Rerun implements MutantRerun {
         RunRequest again = new RunRequest(projectRoot, List.of(), new Selection(request, null, null, settings.seed()),
                 Optional.empty(), DiscoveryOptions.defaults().withMavenArguments(settings.mavenArguments()), 1,
                 new Deadlines(settings.timeFactor(), settings.timeExtraMillis()),
-                settings.workerHeap() == null ? WorkerSettings.DEFAULT_MAX_HEAP : settings.workerHeap(),
+                Optional.ofNullable(settings.workerHeap()),
                 WorkerSettings.DEFAULT_MUTANTS_PER_WORKER, settings.skipTests(), settings.skipTags());
         RunResults results = new MutationRun(again, RunListener.SILENT).execute();
         return results.mutants().stream()

@@ -18,7 +18,7 @@ import java.util.Optional;
  * @param discovery        how to find classes and the test classpath
  * @param workers          worker JVMs at once
  * @param deadlines        how long a mutant's tests may take
- * @param workerHeap       each worker's {@code -Xmx}
+ * @param workerHeap       each worker's {@code -Xmx} when given; else the one the pom's test JVM options set, else 2g
  * @param mutantsPerWorker how many mutants a worker runs before it is replaced
  * @param skipTests        test class patterns to leave out
  * @param skipTags         JUnit tags to leave out
@@ -31,7 +31,7 @@ public record RunRequest(
         DiscoveryOptions discovery,
         int workers,
         Deadlines deadlines,
-        String workerHeap,
+        Optional<String> workerHeap,
         int mutantsPerWorker,
         List<String> skipTests,
         List<String> skipTags) {

@@ -5,7 +5,9 @@ import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.EOFException;
 import java.io.IOException;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /** Reads commands from the tool one at a time and answers each; a failing command is reported, not fatal. */
 final class Session {
@@ -36,7 +38,7 @@ final class Session {
             try {
                 switch (command) {
                     case Wire.PREPARE -> prepare();
-                    case Wire.BASELINE -> requireSuite().baseline(out);
+                    case Wire.BASELINE -> requireSuite().baseline(Wire.readStrings(in), out);
                     case Wire.RUN -> run();
                     default -> throw new IllegalStateException("unknown command " + command);
                 }
@@ -55,11 +57,14 @@ final class Session {
     private void prepare() throws IOException {
         int points = in.readInt();
         List<String> preinitialise = Wire.readStrings(in);
-        List<String> testRoots = Wire.readStrings(in);
-        List<String> includes = Wire.readStrings(in);
-        List<String> excludes = Wire.readStrings(in);
+        List<String> includedTags = Wire.readStrings(in);
         List<String> excludedTags = Wire.readStrings(in);
-        suite = new Suite(testRoots, includes, excludes, excludedTags);
+        List<String> parameters = Wire.readStrings(in);
+        Map<String, String> configurationParameters = new LinkedHashMap<>();
+        for (int i = 0; i + 1 < parameters.size(); i += 2) {
+            configurationParameters.put(parameters.get(i), parameters.get(i + 1));
+        }
+        suite = new Suite(includedTags, excludedTags, configurationParameters);
         suite.warmUp();
         Probe.prepare(points);
         Probe.record(true);

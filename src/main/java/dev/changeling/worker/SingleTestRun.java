@@ -1,14 +1,13 @@
 package dev.changeling.worker;
 
 import org.junit.platform.engine.TestExecutionResult;
-import org.junit.platform.launcher.TestExecutionListener;
 import org.junit.platform.launcher.TestIdentifier;
 
 /**
  * Watches the run of one selected test: any failure in it or in its containers (a broken assertion or
  * any other error, in setup or teardown too) makes it failed.
  */
-final class SingleTestRun implements TestExecutionListener {
+final class SingleTestRun implements RequestWatch {
 
     /** How the one test ended; {@code message} says why it failed, was aborted or skipped. */
     record Result(byte status, long nanos, String message) {
@@ -44,6 +43,13 @@ final class SingleTestRun implements TestExecutionListener {
         } else if (outcome == TestExecutionResult.Status.ABORTED && UniqueIds.isWithin(target, identifier.getUniqueId()) && status == Wire.MISSING) {
             status = Wire.ABORTED;
             message = result.getThrowable().map(Failures::describe).orElse(null);
+        }
+    }
+
+    @Override
+    public void unwound(Throwable error) {
+        if (failure == null) {
+            failure = Failures.describe(error);
         }
     }
 

@@ -1,25 +1,21 @@
 package dev.changeling.worker;
 
-import static org.junit.platform.engine.discovery.DiscoverySelectors.selectClasspathRoots;
+import static org.junit.platform.engine.discovery.DiscoverySelectors.selectClass;
 import static org.junit.platform.engine.discovery.DiscoverySelectors.selectUniqueId;
 
 import dev.changeling.probe.Probe;
 import java.io.DataOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.file.Path;
-import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Set;
+import java.util.Map;
 import java.util.logging.Level;
 import java.util.logging.Logger;
 import org.junit.platform.engine.ConfigurationParameters;
-import org.junit.platform.engine.discovery.ClassNameFilter;
 import org.junit.platform.launcher.Launcher;
 import org.junit.platform.launcher.LauncherDiscoveryRequest;
 import org.junit.platform.launcher.LauncherSession;
 import org.junit.platform.launcher.TagFilter;
-import org.junit.platform.launcher.TestExecutionListener;
 import org.junit.platform.launcher.TestPlan;
 import org.junit.platform.launcher.core.LauncherDiscoveryRequestBuilder;
 import org.junit.platform.launcher.core.LauncherFactory;
@@ -36,29 +32,31 @@ final class Suite {
     /** Reach is attributed to whichever test is running, so tests must run one after another. */
     private static final String PARALLEL = "junit.jupiter.execution.parallel.enabled";
 
-    private final Set<Path> testRoots = new LinkedHashSet<>();
-    private final List<String> includes;
-    private final List<String> excludes;
+    private final List<String> includedTags;
     private final List<String> excludedTags;
+    private final Map<String, String> configurationParameters;
     private LauncherSession session;
     private ConfigurationParameters implicitParameters;
 
-    Suite(List<String> testRoots, List<String> includes, List<String> excludes, List<String> excludedTags) {
-        testRoots.forEach(root -> this.testRoots.add(Path.of(root)));
-        this.includes = List.copyOf(includes);
-        this.excludes = List.copyOf(excludes);
+    /**
+     * @param includedTags            tag expressions a test must match, none for every test
+     * @param excludedTags            tag expressions whose tests are left out
+     * @param configurationParameters the build's JUnit Platform parameters, for every request
+     */
+    Suite(List<String> includedTags, List<String> excludedTags, Map<String, String> configurationParameters) {
+        this.includedTags = List.copyOf(includedTags);
         this.excludedTags = List.copyOf(excludedTags);
+        this.configurationParameters = Map.copyOf(configurationParameters);
     }
 
-    void baseline(DataOutputStream out) throws IOException {
+    /** Runs the tests of these classes, as the build selects them: the classes, then the tags. */
+    void baseline(List<String> testClasses, DataOutputStream out) throws IOException {
         LauncherDiscoveryRequestBuilder request = LauncherDiscoveryRequestBuilder.request()
-                .selectors(selectClasspathRoots(testRoots))
+                .selectors(testClasses.stream().map(name -> selectClass(name)).toList())
+                .configurationParameters(configurationParameters)
                 .configurationParameter(PARALLEL, "false");
-        if (!includes.isEmpty()) {
-            request.filters(ClassNameFilter.includeClassNamePatterns(includes.toArray(String[]::new)));
-        }
-        if (!excludes.isEmpty()) {
-            request.filters(ClassNameFilter.excludeClassNamePatterns(excludes.toArray(String[]::new)));
+        if (!includedTags.isEmpty()) {
+            request.filters(TagFilter.includeTags(includedTags));
         }
         if (!excludedTags.isEmpty()) {
             request.filters(TagFilter.excludeTags(excludedTags));
@@ -115,9 +113,16 @@ final class Suite {
         return listener.results();
     }
 
-    /** Runs a plan, then clears what its tests may have left on this thread: an interrupt, a context class loader. */
-    private void execute(TestPlan plan, TestExecutionListener listener) {
-        launcher().execute(plan, listener);
+    /**
+     * Runs a plan, then clears what its tests may have left on this thread: an interrupt, a context class loader.
+     * A mutant that exhausts the heap fails its test like any error; the tool replaces the worker afterwards.
+     */
+    private void execute(TestPlan plan, RequestWatch listener) {
+        try {
+            launcher().execute(plan, listener);
+        } catch (OutOfMemoryError error) {
+            listener.unwound(error);
+        }
         Thread.interrupted();
         Thread.currentThread().setContextClassLoader(ClassLoader.getSystemClassLoader());
     }
@@ -130,6 +135,7 @@ final class Suite {
     private LauncherDiscoveryRequest request(List<String> uniqueIds) {
         LauncherDiscoveryRequestBuilder builder = LauncherDiscoveryRequestBuilder.request()
                 .selectors(uniqueIds.stream().map(id -> selectUniqueId(id)).toList())
+                .configurationParameters(configurationParameters)
                 .configurationParameter(PARALLEL, "false");
         if (implicitParameters != null) {
             builder.parentConfigurationParameters(implicitParameters).enableImplicitConfigurationParameters(false);
@@ -146,7 +152,8 @@ final class Suite {
      * that inside its deadline.
      */
     void warmUp() {
-        TestPlan empty = launcher().discover(LauncherDiscoveryRequestBuilder.request().configurationParameter(PARALLEL, "false").build());
+        TestPlan empty = launcher().discover(LauncherDiscoveryRequestBuilder.request()
+                .configurationParameters(configurationParameters).configurationParameter(PARALLEL, "false").build());
         launcher().execute(empty);
     }
 

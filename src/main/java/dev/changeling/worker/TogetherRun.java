@@ -4,14 +4,13 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.junit.platform.engine.TestExecutionResult;
-import org.junit.platform.launcher.TestExecutionListener;
 import org.junit.platform.launcher.TestIdentifier;
 
 /**
  * Watches one request that runs several selected tests together: each target's own outcome and time,
  * and a failing container (class setup, say) counting as a failure of the targets inside it.
  */
-final class TogetherRun implements TestExecutionListener {
+final class TogetherRun implements RequestWatch {
 
     private final List<String> targets;
     private final Map<String, SingleTestRun.Result> results = new HashMap<>();
@@ -50,6 +49,17 @@ final class TogetherRun implements TestExecutionListener {
             results.put(id, new SingleTestRun.Result(status, nanos, message));
         } else if (result.getStatus() == TestExecutionResult.Status.FAILED) {
             failedContainers.put(id, message == null ? "failed" : message);
+        }
+    }
+
+    /** The targets that started and did not finish failed by the error; those not started are missing. */
+    @Override
+    public void unwound(Throwable error) {
+        long now = System.nanoTime();
+        for (String target : targets) {
+            if (started.containsKey(target) && !results.containsKey(target)) {
+                results.put(target, new SingleTestRun.Result(Wire.FAILED, now - started.get(target), Failures.describe(error)));
+            }
         }
     }
 

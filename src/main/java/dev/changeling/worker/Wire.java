@@ -13,9 +13,9 @@ import java.util.List;
  *
  * <pre>
  * worker -> tool on connect  HELLO version:int token:str pid:long
- * tool -> worker  PREPARE    points:int preinitialise:strs testRoots:strs includes:strs excludes:strs excludedTags:strs
+ * tool -> worker  PREPARE    points:int preinitialise:strs includedTags:strs excludedTags:strs parameters:strs (name, value, name, …)
  *                   reply    PREPARED reachedWhileInitialising:ints failures:strs
- * tool -> worker  BASELINE
+ * tool -> worker  BASELINE   testClasses:strs
  *                   reply    PROGRESS name:str (once per finished test) ... then
  *                            BASELINE_DONE n:int {id name className:str status:byte nanos aloneNanos:long message:str reached:ints}*n
  *                                          m:int {id name message:str}*m   (failed containers)
@@ -27,11 +27,11 @@ import java.util.List;
  * </pre>
  *
  * A string is an int byte count (-1 for null) and UTF-8 bytes; a list is an int count and its items.
- * Include and exclude patterns are regular expressions over fully qualified class names.
+ * Tags are JUnit Platform tag expressions.
  */
 public final class Wire {
 
-    public static final int VERSION = 2;
+    public static final int VERSION = 3;
     private static final int MAX_SIZE = 1 << 26;
 
     public static final byte HELLO = 1;

@@ -26,7 +26,7 @@ public final class ExecutionBenchmark {
         Path folder = Files.createTempDirectory("changeling-bench");
         try {
             TinyProject project = TinyProject.create(folder.resolve("shop"));
-            SuiteSetup setup = SuiteSetup.of(TinyProject.POINTS, List.of(project.testClasses)).withPreinitialise(List.of("shop.Rates"));
+            SuiteSetup setup = SuiteSetup.of(TinyProject.POINTS, project.testClassNames()).withPreinitialise(List.of("shop.Rates"));
             WorkerSettings settings = WorkerSettings.of(project.root, project.classpath(), project.root.resolve("target/changeling/bench"))
                     .withWorkers(1).withMaxHeap("256m").withMutantsPerWorker(Integer.MAX_VALUE)
                     .withJvmArguments(List.of(System.getProperty("bench.jvm", "-Dbench=1").split(" ")));

@@ -21,7 +21,7 @@ public final class PoolHolder {
             classpath.add(Path.of(args[i]));
         }
         WorkerSettings settings = WorkerSettings.of(Path.of(args[1]), classpath, Path.of(args[3])).withWorkers(1).withMaxHeap("96m");
-        WorkerPool pool = WorkerPool.open(settings, SuiteSetup.of(TinyProject.POINTS, List.of(Path.of(args[2]))));
+        WorkerPool pool = WorkerPool.open(settings, SuiteSetup.of(TinyProject.POINTS, TinyProject.defaultTestClasses(Path.of(args[2]))));
         pool.run(List.of(MutantJob.schema("warm", new int[0], List.of(args[4]), 60_000)), result -> { });
         ProcessHandle worker = ProcessHandle.current().children()
                 .filter(child -> child.info().arguments().map(List::of).orElse(List.of()).contains(WorkerClasses.MAIN_CLASS))

@@ -230,6 +230,27 @@ final class TinyProject {
         this.testClasses = root.resolve("target/test-classes");
     }
 
+    /**
+     * The test classes below a folder that Maven Surefire's default patterns select ({@code Test*}, {@code *Test},
+     * {@code *Tests}, {@code *TestCase}, no nested classes), sorted.
+     */
+    static List<String> defaultTestClasses(Path testClasses) throws IOException {
+        java.util.function.Predicate<String> named = ClassPatterns.anyOf(List.of("Test*", "*Test", "*Tests", "*TestCase"));
+        try (java.util.stream.Stream<Path> files = Files.walk(testClasses)) {
+            return files.map(file -> testClasses.relativize(file).toString().replace('/', '.'))
+                    .filter(name -> name.endsWith(".class") && !name.contains("$"))
+                    .map(name -> name.substring(0, name.length() - ".class".length()))
+                    .filter(named)
+                    .sorted()
+                    .toList();
+        }
+    }
+
+    /** The test classes of this project that Surefire's default patterns select. */
+    List<String> testClassNames() throws IOException {
+        return defaultTestClasses(testClasses);
+    }
+
     /** Writes the project below {@code root} and compiles it against the probe and this JVM's JUnit. */
     static TinyProject create(Path root) throws IOException {
         TinyProject project = new TinyProject(root);

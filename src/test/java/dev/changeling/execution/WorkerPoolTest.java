@@ -50,7 +50,15 @@ class WorkerPoolTest {
     }
 
     static SuiteSetup setup() {
-        return SuiteSetup.of(TinyProject.POINTS, List.of(project.testClasses)).withPreinitialise(List.of("shop.Rates", "shop.Missing"));
+        return SuiteSetup.of(TinyProject.POINTS, testClassNames()).withPreinitialise(List.of("shop.Rates", "shop.Missing"));
+    }
+
+    static List<String> testClassNames() {
+        try {
+            return project.testClassNames();
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     static String method(String className, String method) {
@@ -358,7 +366,7 @@ class WorkerPoolTest {
     class Crashes {
 
         @Test
-        void reportsSystemExit_outOfMemory_andGoesOnInAFreshWorker() {
+        void reportsSystemExitAsCrashed_exhaustedMemoryAsKilled_andGoesOnInAFreshWorkerAfterEach() {
             try (WorkerPool pool = WorkerPool.open(settings("crash"), setup())) {
                 List<JobResult> results = pool.run(List.of(
                         job("exits", 3, method("HostileTest", "checksOut")),
@@ -367,8 +375,9 @@ class WorkerPoolTest {
                 assertEquals(Outcome.CRASHED, results.get(0).outcome());
                 assertEquals(method("HostileTest", "checksOut"), results.get(0).testId());
                 assertTrue(results.get(0).message().contains("exited with code 7"), results.get(0).message());
-                assertEquals(Outcome.CRASHED, results.get(1).outcome());
-                assertTrue(results.get(1).message().contains("OutOfMemoryError"), results.get(1).message());
+                // the error fails the test as Surefire's own run would fail it; no JVM flag of ours turns it into an exit
+                assertEquals(Outcome.KILLED, results.get(1).outcome());
+                assertTrue(results.get(1).message().startsWith("OutOfMemoryError"), results.get(1).message());
                 assertEquals(Outcome.KILLED, results.get(2).outcome());
                 assertEquals(3, pool.workersStarted());
             }
@@ -428,15 +437,17 @@ class WorkerPoolTest {
     class Filters {
 
         @Test
-        void leaveOutExcludedClassesAndTags_andWithoutPreinitialisationTheTestReachesTheInitialiser() {
-            SuiteSetup setup = SuiteSetup.of(TinyProject.POINTS, List.of(project.testClasses))
-                    .withExcludes(List.of("Hostile*")).withExcludedTags(List.of("slow")).withIncludes(List.of("*Test", "*Checks"));
+        void runsTheClassesGiven_leavesOutExcludedTags_andWithoutPreinitialisationTheTestReachesTheInitialiser() {
+            List<String> classes = new ArrayList<>(testClassNames().stream().filter(name -> !name.contains("Hostile")).toList());
+            classes.add("shop.PriceChecks");
+            SuiteSetup setup = SuiteSetup.of(TinyProject.POINTS, classes).withTags(List.of(), List.of("slow"));
             try (WorkerPool pool = WorkerPool.open(settings("filters"), setup)) {
                 Baseline baseline = pool.baseline(name -> { });
                 assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("HostileTest")));
                 assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("TaggedTest")));
                 assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("PriceChecks")));
-                assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("StaticInnerTest")));
+                // a static nested class is not found through the class around it; Maven's default exclude leaves it out too
+                assertTrue(baseline.tests().stream().noneMatch(test -> test.id().contains("StaticInnerTest")));
                 assertTrue(baseline.tests().stream().anyMatch(test -> test.id().contains("[nested-class:WhenEmpty]")), baseline.tests()::toString);
                 assertArrayEquals(new int[] {7}, baseline.test(method("RatesTest", "hasABase")).reached());
                 assertArrayEquals(new int[0], baseline.reachedWhileInitialising());
@@ -489,8 +500,9 @@ class WorkerPoolTest {
             assumeTrue(jars != null, "JUnit Platform 1.10.2 is neither in the local Maven repository nor to be fetched with mvn");
             List<Path> classpath = new ArrayList<>(List.of(project.testClasses, project.classes));
             classpath.addAll(jars);
-            pool = WorkerPool.open(new WorkerSettings(project.root, classpath, project.root.resolve("target/changeling/platform-1.10"),
-                    1, 100, "96m", true, List.of(), WorkerSettings.currentJava(), Duration.ofMinutes(1), Duration.ofMinutes(5)), setup());
+            pool = WorkerPool.open(WorkerSettings.of(project.root, classpath, project.root.resolve("target/changeling/platform-1.10"))
+                    .withWorkers(1).withMutantsPerWorker(100).withMaxHeap("96m")
+                    .withStartTimeout(Duration.ofMinutes(1)).withBaselineTimeout(Duration.ofMinutes(5)), setup());
             baseline = pool.baseline(name -> { });
         }
 
@@ -637,7 +649,7 @@ class WorkerPoolTest {
             classpath.addAll(TinyProject.junitJars());
             WorkerSettings settings = WorkerSettings.of(project.root, classpath, project.root.resolve("target/changeling/junit4"))
                     .withWorkers(1).withMaxHeap("96m");
-            pool = WorkerPool.open(settings, SuiteSetup.of(TinyProject.POINTS, List.of(testClasses)));
+            pool = WorkerPool.open(settings, SuiteSetup.of(TinyProject.POINTS, TinyProject.defaultTestClasses(testClasses)));
             baseline = pool.baseline(name -> { });
         }
 

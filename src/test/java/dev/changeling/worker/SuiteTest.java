@@ -5,8 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.platform.engine.discovery.DiscoverySelectors.selectUniqueId;
 
-import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.platform.launcher.TestPlan;
@@ -22,7 +22,7 @@ class SuiteTest {
     private static final String SECOND_OF_OTHER = CLASS + "/[test-template:positiveOrNot(int)]/[test-template-invocation:#2]";
     private static final String GONE = CLASS + "/[method:gone()]";
 
-    private final Suite suite = new Suite(List.of(testClasses().toString()), List.of(), List.of(), List.of());
+    private final Suite suite = new Suite(List.of(), List.of(), Map.of());
 
     @AfterEach
     void close() {
@@ -54,13 +54,5 @@ class SuiteTest {
         assertFalse(planned.mayHold(GONE), "the class is planned with tests, and this is not one of them");
         assertFalse(planned.mayHold("[engine:junit-jupiter]/[class:no.Such]/[method:x()]"));
         assertFalse(planned.mayHold("[engine:other]/[class:x]"));
-    }
-
-    private static Path testClasses() {
-        try {
-            return Path.of(TogetherFixture.class.getProtectionDomain().getCodeSource().getLocation().toURI());
-        } catch (java.net.URISyntaxException e) {
-            throw new IllegalStateException(e);
-        }
     }
 }
