@@ -37,7 +37,8 @@ record ArgLine(List<String> arguments, Optional<String> maxHeap) {
                 notice.accept("argLine: left out " + word + " (a property set by a plugin while Maven runs, not known before)");
                 continue;
             }
-            for (String argument : words(filled.get())) {
+            // A property's value may hold several options; a word as written was split already.
+            for (String argument : filled.get().equals(word) ? List.of(word) : words(filled.get())) {
                 if (argument.startsWith("-Xmx")) {
                     maxHeap = Optional.of(argument.substring("-Xmx".length()));
                 } else {

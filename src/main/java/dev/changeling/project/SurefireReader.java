@@ -70,6 +70,10 @@ final class SurefireReader {
             notices.add("Surefire also runs in the execution(s) " + String.join(", ", surefire.otherExecutions())
                     + "; only " + EXECUTION + " (what `mvn test` runs first) is followed");
         }
+        if (olderThan(2, 22)) {
+            notices.add("the pom's Surefire " + surefire.version() + " predates the JUnit Platform and would run fewer tests;"
+                    + " the tests run here are those a current Surefire runs with these settings");
+        }
         List<String> classes = ClassNames.below(testClasses);
         Selection selection = selection();
         List<String> selected = new ArrayList<>();
@@ -140,11 +144,14 @@ final class SurefireReader {
 
     /** Surefire before 2.20 did not include {@code *Tests} classes by default. */
     private List<String> defaultIncludes() {
-        Matcher version = VERSION.matcher(surefire.version());
-        boolean older = version.matches() && (Integer.parseInt(version.group(1)) < 2
-                || Integer.parseInt(version.group(1)) == 2 && Integer.parseInt(version.group(2)) < 20);
-        return older ? SurefirePatterns.DEFAULT_INCLUDES.stream().filter(pattern -> !pattern.endsWith("Tests.java")).toList()
+        return olderThan(2, 20) ? SurefirePatterns.DEFAULT_INCLUDES.stream().filter(pattern -> !pattern.endsWith("Tests.java")).toList()
                 : SurefirePatterns.DEFAULT_INCLUDES;
+    }
+
+    private boolean olderThan(int major, int minor) {
+        Matcher version = VERSION.matcher(surefire.version());
+        return version.matches() && (Integer.parseInt(version.group(1)) < major
+                || Integer.parseInt(version.group(1)) == major && Integer.parseInt(version.group(2)) < minor);
     }
 
     /** The patterns of an includes or excludes file: one per line, blank lines and {@code #} comments left out. */

@@ -56,8 +56,9 @@ class HostileRunTest {
             Map.entry("ReadingSchedule second%intervalSeconds==0 → >=", Verdict.KILLED),
             Map.entry("ReadingSchedule second%intervalSeconds==0 → false", Verdict.KILLED),
             Map.entry("SampleBuffer reservedBytes<wantedBytes → <=", Verdict.KILLED),
-            // hostile: the total jumps over a size that is no whole number of chunks, so it allocates until the heap is gone
-            Map.entry("SampleBuffer reservedBytes<wantedBytes → !=", Verdict.CRASHED),
+            // hostile: the total jumps over a size that is no whole number of chunks, so it allocates until the heap is gone;
+            // the OutOfMemoryError fails the test, as it fails Surefire's run, and the worker is replaced
+            Map.entry("SampleBuffer reservedBytes<wantedBytes → !=", Verdict.KILLED),
             // hostile: the uploader waits for a fourth batch that never comes, and the test's join() with it
             Map.entry("Uploader count<expectedBatches → <=", Verdict.TIMED_OUT),
             Map.entry("Uploader count<expectedBatches → !=", Verdict.SURVIVED),
@@ -140,10 +141,10 @@ class HostileRunTest {
         }
 
         @Test
-        void exhaustedMemory_crashesTheWorker_sayingSo() {
+        void exhaustedMemory_failsTheTest_sayingSo() {
             MutantResult hog = mutant("SampleBuffer reservedBytes<wantedBytes → !=");
-            assertEquals(Verdict.CRASHED, hog.verdict());
-            assertTrue(hog.detail().contains("OutOfMemoryError"), hog::toString);
+            assertEquals(Verdict.KILLED, hog.verdict());
+            assertTrue(hog.detail().startsWith("OutOfMemoryError"), hog::toString);
         }
 
         @Test
