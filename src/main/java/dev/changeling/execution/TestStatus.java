@@ -12,7 +12,9 @@ public enum TestStatus {
     /** Disabled, or its container is. */
     SKIPPED,
     /** The worker found no test with that id. */
-    MISSING;
+    MISSING,
+    /** It was running when its step's deadline passed; the mutant was stopped in place. */
+    STOPPED;
 
     static TestStatus fromWire(byte code) {
         return switch (code) {
@@ -21,6 +23,7 @@ public enum TestStatus {
             case Wire.ABORTED -> ABORTED;
             case Wire.SKIPPED -> SKIPPED;
             case Wire.MISSING -> MISSING;
+            case Wire.STOPPED -> STOPPED;
             default -> throw new IllegalStateException("unknown test status " + code + " from a worker");
         };
     }

@@ -46,6 +46,12 @@ final class WorkerProcess {
     record Prepared(int[] reachedWhileInitialising, List<String> initialisationFailures) {
     }
 
+    /**
+     * How long a worker told to stop a step may take to unwind its test and answer before it is killed: a switch
+     * throws at once, so a loop through mutated code unwinds in milliseconds; a loop that never passes a switch,
+     * or swallows the error, never does.
+     */
+    static final long STOP_GRACE_MILLIS = 1_000;
     private static final int TAIL_BYTES = 8192;
     private static final int TAIL_LINES = 3;
     private static final int TAIL_CHARACTERS = 400;
@@ -58,6 +64,10 @@ final class WorkerProcess {
     private Socket socket;
     private DataInputStream in;
     private DataOutputStream out;
+    private Socket control;
+    private DataOutputStream stops;
+    /** Steps the worker announced so far; the worker numbers them the same way, from 1. */
+    private int steps;
     private volatile boolean killed;
     private final Set<String> containersRun = new HashSet<>();
 
@@ -87,7 +97,7 @@ final class WorkerProcess {
         }
         Files.writeString(argumentFile, "-cp\n" + quoted(joined.toString()) + "\n", StandardCharsets.UTF_8);
 
-        ServerSocket server = new ServerSocket(0, 1, InetAddress.getLoopbackAddress());
+        ServerSocket server = new ServerSocket(0, 2, InetAddress.getLoopbackAddress());
         String token = UUID.randomUUID().toString();
         List<String> command = new ArrayList<>();
         command.add(settings.javaExecutable().toString());
@@ -131,7 +141,6 @@ final class WorkerProcess {
         try {
             server.setSoTimeout((int) Math.max(1, Math.min(Integer.MAX_VALUE, timeoutMillis)));
             socket = server.accept();
-            closeServer();
             socket.setTcpNoDelay(true);
             in = new DataInputStream(new BufferedInputStream(socket.getInputStream()));
             out = new DataOutputStream(new BufferedOutputStream(socket.getOutputStream()));
@@ -144,6 +153,15 @@ final class WorkerProcess {
                 throw new IllegalStateException("the process that answered is not this tool's worker, or speaks protocol " + version
                         + " instead of " + Wire.VERSION);
             }
+            control = server.accept();
+            closeServer();
+            control.setTcpNoDelay(true);
+            control.setSoTimeout((int) Math.max(1, TimeUnit.NANOSECONDS.toMillis(deadline - System.nanoTime())));
+            if (!token.equals(Wire.readString(new DataInputStream(new BufferedInputStream(control.getInputStream()))))) {
+                kill();
+                throw new IllegalStateException("the second connection is not this worker's");
+            }
+            stops = new DataOutputStream(new BufferedOutputStream(control.getOutputStream()));
         } catch (SocketTimeoutException e) {
             kill();
             throw new Lost(true, "the worker JVM did not start within " + timeoutMillis + " ms");
@@ -214,49 +232,78 @@ final class WorkerProcess {
     }
 
     /**
-     * Runs one mutant's tests; a deadline or the worker's death becomes the outcome, the worker then gone.
-     * Each step the worker announces gets its own deadline, from the baseline times of the tests in it.
+     * Runs one mutant's tests; a deadline or the worker's death becomes the outcome. Each step the worker announces
+     * gets its own deadline, from the baseline times of the tests in it. At a step's deadline the worker is told to
+     * stop that step in place (its switches throw); only if it has not answered within {@link #STOP_GRACE_MILLIS}
+     * more is it killed.
      */
     JobResult run(MutantJob job) {
         long start = System.nanoTime();
         long allowed = job.stepMillis(0, 0, false);
         long deadline = start + TimeUnit.MILLISECONDS.toNanos(allowed);
         long mark = logSize();
+        boolean stopSent = false;
         List<TestRun> runs = new ArrayList<>();
         try {
             out.writeByte(Wire.RUN);
             Wire.writeInts(out, job.points());
             Wire.writeStrings(out, job.tests());
             out.flush();
-            byte code;
-            while ((code = next(deadline)) == Wire.TEST_DONE || code == Wire.STEP) {
+            while (true) {
+                byte code;
+                try {
+                    code = next(deadline);
+                } catch (SocketTimeoutException expired) {
+                    if (stopSent || steps == 0) {
+                        throw expired;
+                    }
+                    stops.writeInt(steps);
+                    stops.flush();
+                    stopSent = true;
+                    deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(STOP_GRACE_MILLIS);
+                    continue;
+                }
                 if (code == Wire.STEP) {
                     int count = in.readInt();
+                    steps++;
                     allowed = job.stepMillis(runs.size(), count, firstRunOfAClass(job.tests(), runs.size(), count));
                     deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(allowed);
                     continue;
+                }
+                if (code != Wire.TEST_DONE) {
+                    expect(Wire.RUN_DONE, code);
+                    break;
                 }
                 String id = Wire.readString(in);
                 TestStatus status = TestStatus.fromWire(in.readByte());
                 long nanos = in.readLong();
                 runs.add(new TestRun(id, status, nanos, Wire.readString(in)));
             }
-            expect(Wire.RUN_DONE, code);
         } catch (SocketTimeoutException e) {
             kill();
             return new JobResult(job.key(), Outcome.TIMED_OUT, running(job, runs),
-                    "no answer within " + allowed + " ms", runs, System.nanoTime() - start);
+                    "no answer within " + allowed + " ms" + (stopSent ? ", nor " + STOP_GRACE_MILLIS + " ms after the stop;"
+                            + " the worker was killed" : ""), runs, System.nanoTime() - start);
         } catch (IOException e) {
             Lost lost = died(mark);
             return new JobResult(job.key(), Outcome.CRASHED, running(job, runs), lost.getMessage(), runs, System.nanoTime() - start);
         }
         long nanos = System.nanoTime() - start;
         for (TestRun test : runs) {
+            if (test.status() == TestStatus.STOPPED) {
+                return new JobResult(job.key(), Outcome.TIMED_OUT, test.testId(),
+                        "no answer within " + allowed + " ms; stopped in place", runs, nanos);
+            }
             if (test.status() == TestStatus.FAILED) {
                 return new JobResult(job.key(), Outcome.KILLED, test.testId(), test.message(), runs, nanos);
             }
         }
         return new JobResult(job.key(), Outcome.SURVIVED, null, null, runs, nanos);
+    }
+
+    /** Whether the JVM still runs: after a step was stopped in place, say, where a timeout used to mean a kill. */
+    boolean alive() {
+        return !killed && process.isAlive();
     }
 
     /** Whether these tests include one whose class (or other container) this worker has not run a test of yet. */
@@ -297,6 +344,7 @@ final class WorkerProcess {
         process.destroyForcibly();
         descendants.forEach(ProcessHandle::destroyForcibly);
         closeQuietly(socket);
+        closeQuietly(control);
         closeServer();
         try {
             process.onExit().get(10, TimeUnit.SECONDS);

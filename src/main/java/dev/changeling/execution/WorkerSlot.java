@@ -1,6 +1,7 @@
 package dev.changeling.execution;
 
 import dev.changeling.UserError;
+import dev.changeling.worker.UniqueIds;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
@@ -87,7 +88,11 @@ final class WorkerSlot {
             throw e;
         }
         mutantsOnWorker++;
-        if (result.outcome() == Outcome.TIMED_OUT || result.outcome() == Outcome.CRASHED || exhaustedMemory(result)) {
+        if (result.outcome() == Outcome.TIMED_OUT && worker != null && worker.alive()) {
+            if (!classPassesUnmutated(job.key(), result.testId())) {
+                retire();
+            }
+        } else if (result.outcome() == Outcome.TIMED_OUT || result.outcome() == Outcome.CRASHED || exhaustedMemory(result)) {
             retire();
         } else if (mutantsOnWorker >= settings.mutantsPerWorker()) {
             worker.close();
@@ -121,6 +126,16 @@ final class WorkerSlot {
             return true;
         }
         return runUnmutated(key, testId).outcome() == Outcome.SURVIVED;
+    }
+
+    /**
+     * After a mutant was stopped in place, the class of the stopped test runs once with nothing switched on: the
+     * stop unwound its test from wherever it was, which may have left the class's static state half changed, and
+     * only a worker whose tests still pass unmutated may go on.
+     */
+    private boolean classPassesUnmutated(String key, String stoppedTest) {
+        String testClass = stoppedTest == null ? null : UniqueIds.outermostContainer(stoppedTest);
+        return testClass != null && runUnmutated(key, testClass).outcome() == Outcome.SURVIVED;
     }
 
     /** Runs one test in the current worker with no point switched on, under the start timeout. */

@@ -13,12 +13,22 @@ public final class Probe {
     private static int reachedCount;
     private static boolean recording;
     private static final Object LOCK = new Object();
+    /** The step of tests the worker is running; it counts up, so a stop meant for an earlier step matches nothing. */
+    private static volatile int step;
+    /** The step whose deadline passed: while it runs, every switch throws. */
+    private static volatile int stopAt = -1;
 
     private Probe() {
     }
 
-    /** Whether point {@code id} is switched on; records the reach while recording. */
+    /**
+     * Whether point {@code id} is switched on; records the reach while recording. Once the running step's
+     * deadline has passed, it throws instead, so that a mutant looping through its own code unwinds its test.
+     */
     public static boolean on(int id) {
+        if (stopAt == step) {
+            throw new MutantStopped();
+        }
         if (recording) {
             reach(id);
         }
@@ -42,6 +52,22 @@ public final class Probe {
             next[id] = true;
         }
         active = next;
+    }
+
+    /** Starts the next step of tests (the worker's thread calls this before each); returns its number, from 1. */
+    public static int beginStep() {
+        step = step + 1;
+        return step;
+    }
+
+    /** Stops the step with this number, if it is still running (any thread may call this). */
+    public static void stop(int stepNumber) {
+        stopAt = stepNumber;
+    }
+
+    /** Whether the running step was told to stop. */
+    public static boolean stopped() {
+        return stopAt == step;
     }
 
     public static void record(boolean on) {

@@ -88,12 +88,17 @@ final class Session {
             int at = 0;
             for (int size = 1; at < tests.size(); size *= 2) {
                 List<String> chunk = tests.subList(at, Math.min(tests.size(), at + size));
+                Probe.beginStep();
                 out.writeByte(Wire.STEP);
                 out.writeInt(chunk.size());
                 out.flush();
                 List<SingleTestRun.Result> results = chunk.size() == 1
                         ? List.of(current.runOne(chunk.get(0)))
                         : current.runTogether(chunk);
+                if (Probe.stopped()) {
+                    reportStopped(chunk, results);
+                    break;
+                }
                 boolean passed = true;
                 for (int i = 0; i < chunk.size() && passed; i++) {
                     passed = report(chunk.get(i), results.get(i));
@@ -109,6 +114,21 @@ final class Session {
         out.writeByte(Wire.RUN_DONE);
     }
 
+    /**
+     * The step was stopped at its deadline: the tests that passed before the stop are reported as they ended, and
+     * the first that did not pass (the one running when the stop came; the last, if a thread of the test's own
+     * was what ran on) as stopped.
+     */
+    private void reportStopped(List<String> chunk, List<SingleTestRun.Result> results) throws IOException {
+        int stopped = 0;
+        while (stopped < chunk.size() - 1 && results.get(stopped).status() == Wire.PASSED) {
+            report(chunk.get(stopped), results.get(stopped));
+            stopped++;
+        }
+        SingleTestRun.Result result = results.get(stopped);
+        report(chunk.get(stopped), new SingleTestRun.Result(Wire.STOPPED, result.nanos(), result.message()));
+    }
+
     /** Sends one test's outcome; false when it failed, which ends the mutant's run. */
     private boolean report(String test, SingleTestRun.Result result) throws IOException {
         out.writeByte(Wire.TEST_DONE);
@@ -117,7 +137,7 @@ final class Session {
         out.writeLong(result.nanos());
         Wire.writeString(out, result.message());
         out.flush();
-        return result.status() != Wire.FAILED;
+        return result.status() != Wire.FAILED && result.status() != Wire.STOPPED;
     }
 
     private Suite requireSuite() {

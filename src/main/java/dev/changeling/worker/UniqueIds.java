@@ -16,6 +16,16 @@ public final class UniqueIds {
         return id.equals(ancestor) || id.startsWith(ancestor + "/");
     }
 
+    /** The engine's first container holding the id (a test's top-level class, say), or null for an engine's own id. */
+    public static String outermostContainer(String id) {
+        int second = id.indexOf(SEGMENT);
+        if (second < 0) {
+            return null;
+        }
+        int third = id.indexOf(SEGMENT, second + 1);
+        return third < 0 ? id : id.substring(0, third);
+    }
+
     /** The id one segment up (a test's class, say), or null for an engine's own id. */
     public static String parent(String id) {
         int at = id.lastIndexOf(SEGMENT);

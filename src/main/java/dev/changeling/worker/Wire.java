@@ -13,6 +13,8 @@ import java.util.List;
  *
  * <pre>
  * worker -> tool on connect  HELLO version:int token:str pid:long
+ * worker -> tool, 2nd socket TOKEN token:str, then tool -> worker: stepNumber:int whenever a step's deadline passes
+ *                            (the worker's switches then throw until that step ends; steps count from 1 per worker)
  * tool -> worker  PREPARE    points:int preinitialise:strs includedTags:strs excludedTags:strs parameters:strs (name, value, name, …)
  *                   reply    PREPARED reachedWhileInitialising:ints failures:strs
  * tool -> worker  BASELINE   testClasses:strs
@@ -22,6 +24,7 @@ import java.util.List;
  * tool -> worker  RUN        points:ints tests:strs
  *                   reply    STEP count:int (before each group of tests run in one request: the next count tests)
  *                            TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE
+                              (status STOPPED: the step was stopped at its deadline; it is the last test reported)
  * tool -> worker  QUIT       (no reply; the worker exits)
  * any reply may instead be   FAILURE message:str   (the command failed inside the worker; the worker goes on)
  * </pre>
@@ -31,7 +34,7 @@ import java.util.List;
  */
 public final class Wire {
 
-    public static final int VERSION = 3;
+    public static final int VERSION = 4;
     private static final int MAX_SIZE = 1 << 26;
 
     public static final byte HELLO = 1;
@@ -57,6 +60,8 @@ public final class Wire {
     public static final byte SKIPPED = 3;
     /** No test with that id was found. */
     public static final byte MISSING = 4;
+    /** The test was running when its step's deadline passed, and the mutant was stopped in place. */
+    public static final byte STOPPED = 5;
 
     private Wire() {
     }

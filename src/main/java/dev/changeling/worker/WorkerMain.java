@@ -1,5 +1,6 @@
 package dev.changeling.worker;
 
+import dev.changeling.probe.Probe;
 import java.io.BufferedInputStream;
 import java.io.BufferedOutputStream;
 import java.io.DataInputStream;
@@ -36,10 +37,34 @@ public final class WorkerMain {
             Wire.writeString(out, token);
             out.writeLong(ProcessHandle.current().pid());
             out.flush();
+            listenForStops(port, token);
             new Session(in, out).serve();
         }
         // A test may have left non-daemon threads running; they must not keep this JVM alive.
         System.exit(0);
+    }
+
+    /**
+     * Opens the second connection, over which the tool names a step whose deadline passed; a thread of its own
+     * reads it, as the main thread is then busy in the test that runs too long.
+     */
+    private static void listenForStops(int port, String token) throws IOException {
+        Socket control = new Socket(InetAddress.getLoopbackAddress(), port);
+        DataOutputStream hello = new DataOutputStream(new BufferedOutputStream(control.getOutputStream()));
+        Wire.writeString(hello, token);
+        hello.flush();
+        DataInputStream stops = new DataInputStream(new BufferedInputStream(control.getInputStream()));
+        Thread listener = new Thread(() -> {
+            try {
+                while (true) {
+                    Probe.stop(stops.readInt());
+                }
+            } catch (IOException toolClosed) {
+                // the tool is done with this worker
+            }
+        }, "changeling-stop-listener");
+        listener.setDaemon(true);
+        listener.start();
     }
 
     /** A test stuck in a loop never reads the socket again, so the tool's death must be noticed apart from it. */

@@ -22,7 +22,8 @@ import javax.tools.ToolProvider;
  * {@code checkout} calls System.exit(7); 4 {@code hog} fills the heap; 5 the value a class setup
  * reads turns bad; 6 reached by no test; 7 in a static initialiser; 8 {@code depth} recurses without
  * end; 9 {@code spawn} starts a child process and then waits forever; 10 {@code leak} starts a thread
- * that never ends; 11 {@code write} writes one mark too many on a sheet that a test class shares between its tests.
+ * that never ends; 11 {@code write} writes one mark too many on a sheet that a test class shares between its tests;
+ * 12 {@code retry} never ends and swallows every error thrown in it, a stop included.
  *
  * <p>A launcher started in a JVM with {@code -Dshop.slowStart=<ms>} takes that long to start, once per JVM, as
  * loading a large suite's engines and classes can: {@code shop.SlowStart}, a registered test execution listener,
@@ -30,7 +31,7 @@ import javax.tools.ToolProvider;
  */
 final class TinyProject {
 
-    static final int POINTS = 12;
+    static final int POINTS = 13;
 
     static final String PRICES = """
             package shop;
@@ -66,6 +67,17 @@ final class TinyProject {
                         Files.createDirectories(Path.of("target"));
                         Files.writeString(Path.of("target", "child.pid"), Long.toString(child.pid()));
                         while (true) { Thread.sleep(50); }
+                    }
+                }
+                public static int retry(int n) {
+                    int tries = 0;
+                    while (true) {
+                        try {
+                            tries++;
+                            if (!Probe.on(12) && tries >= n) { return tries; }
+                        } catch (Throwable swallowed) {
+                            // a retry loop that trusts nothing
+                        }
                     }
                 }
                 public static void write(StringBuilder sheet) {
@@ -151,6 +163,7 @@ final class TinyProject {
                         @Test void measuresDepth() { assertEquals(5, Prices.depth(5)); }
                         @Test void spawns() throws Exception { Prices.spawn(); }
                         @Test void leaks() { Prices.leak(); }
+                        @Test void retries() { assertEquals(2, Prices.retry(2)); }
                     }
                     """),
             Map.entry("shop/SharedSheetTest.java", """
@@ -164,6 +177,19 @@ final class TinyProject {
                         static final StringBuilder SHEET = new StringBuilder();
                         @Test void writesOneMark() { Prices.write(SHEET); assertEquals("x", SHEET.toString()); SHEET.setLength(0); }
                         @Test void findsTheSheetClean() { assertEquals("", SHEET.toString()); }
+                    }
+                    """),
+            Map.entry("shop/NotepadTest.java", """
+                    package shop;
+
+                    import static org.junit.jupiter.api.Assertions.assertEquals;
+
+                    import org.junit.jupiter.api.Test;
+
+                    class NotepadTest {
+                        static final StringBuilder NOTE = new StringBuilder();
+                        @Test void notesThenCounts() { NOTE.append('y'); assertEquals(3, Prices.countUpTo(3)); NOTE.setLength(0); }
+                        @Test void findsNoNote() { assertEquals("", NOTE.toString()); }
                     }
                     """),
             Map.entry("shop/RatesTest.java", """

@@ -274,18 +274,47 @@ class WorkerPoolTest {
     class Deadlines {
 
         @Test
-        void killsAWorkerThatRunsPastTheDeadline_andGoesOnInAFreshOne() {
-            List<List<Long>> workersWhenTold = new ArrayList<>();
+        void stopsALoopThroughMutatedCodeInPlace_andKeepsTheWorker() {
             try (WorkerPool pool = WorkerPool.open(settings("deadline"), setup())) {
                 List<JobResult> results = pool.run(List.of(
                         MutantJob.schema("loops", new int[] {2}, List.of(method("PricesTest", "addsZero"), method("HostileTest", "countsToThree")), 1_000),
+                        job("after", 0, method("PricesTest", "addsTwoNumbers"))), result -> { });
+                assertEquals(Outcome.TIMED_OUT, results.get(0).outcome());
+                assertEquals(method("HostileTest", "countsToThree"), results.get(0).testId());
+                assertTrue(results.get(0).message().endsWith("; stopped in place"), results.get(0).message());
+                assertEquals(List.of(TestStatus.PASSED, TestStatus.STOPPED), results.get(0).testsRun().stream().map(TestRun::status).toList());
+                assertEquals(Outcome.KILLED, results.get(1).outcome());
+                assertEquals(1, pool.workersStarted(), "the stopped test's class passes unmutated, so the worker goes on");
+            }
+        }
+
+        @Test
+        void killsAWorkerWhoseLoopSwallowsTheStop_andGoesOnInAFreshOne() {
+            List<List<Long>> workersWhenTold = new ArrayList<>();
+            try (WorkerPool pool = WorkerPool.open(settings("swallowed"), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        MutantJob.schema("retries", new int[] {12}, List.of(method("HostileTest", "retries")), 1_000),
                         job("after", 0, method("PricesTest", "addsTwoNumbers"))),
                         result -> workersWhenTold.add(liveWorkers()));
                 assertEquals(Outcome.TIMED_OUT, results.get(0).outcome());
-                assertEquals(method("HostileTest", "countsToThree"), results.get(0).testId());
-                assertEquals(List.of(method("PricesTest", "addsZero")), results.get(0).testsRun().stream().map(TestRun::testId).toList());
-                assertEquals(List.of(), workersWhenTold.get(0), "the timed-out worker is gone before its result is told");
+                assertEquals(method("HostileTest", "retries"), results.get(0).testId());
+                assertTrue(results.get(0).message().endsWith("the worker was killed"), results.get(0).message());
+                assertEquals(List.of(), workersWhenTold.get(0), "the killed worker is gone before its result is told");
                 assertEquals(Outcome.KILLED, results.get(1).outcome());
+                assertEquals(2, pool.workersStarted());
+            }
+        }
+
+        /** The stop unwinds the test before it tidies its class's shared note, so the class fails unmutated afterwards. */
+        @Test
+        void replacesTheWorker_whenTheStoppedTestsClassFailsUnmutatedAfterTheStop() {
+            try (WorkerPool pool = WorkerPool.open(settings("untidy"), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        MutantJob.schema("loops", new int[] {2}, List.of(method("NotepadTest", "notesThenCounts")), 1_000),
+                        job("after", 0, method("NotepadTest", "findsNoNote"))), result -> { });
+                assertEquals(Outcome.TIMED_OUT, results.get(0).outcome());
+                assertTrue(results.get(0).message().endsWith("stopped in place"), results.get(0).message());
+                assertEquals(Outcome.SURVIVED, results.get(1).outcome(), "the fresh worker's note is clean");
                 assertEquals(2, pool.workersStarted());
             }
         }
@@ -301,7 +330,7 @@ class WorkerPoolTest {
                 assertEquals(Outcome.TIMED_OUT, result.outcome());
                 assertEquals(method("HostileTest", "countsToThree"), result.testId());
                 // The fresh worker ran the first test once unmutated to warm up, so its class is no longer new to it.
-                assertEquals("no answer within 500 ms", result.message());
+                assertEquals("no answer within 500 ms; stopped in place", result.message());
                 assertTrue(result.nanos() < 5_000_000_000L, "stopped after " + result.nanos() / 1_000_000 + " ms");
             }
         }
@@ -357,7 +386,7 @@ class WorkerPoolTest {
                         MutantJob.schema("passes", new int[] {0}, List.of(method("PricesTest", "addsZero")), 2_000)), result -> { });
                 assertEquals(List.of(Outcome.TIMED_OUT, Outcome.KILLED, Outcome.SURVIVED), results.stream().map(JobResult::outcome).toList(),
                         results::toString);
-                assertEquals(2, pool.workersStarted());
+                assertEquals(1, pool.workersStarted(), "the loop was stopped in place");
             }
         }
     }

@@ -22,9 +22,10 @@ import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Every mutant of the hostile sample (endless loops, System.exit, endless recursion, memory exhaustion, a thread
- * blocked for good) run once by {@code changeling run}: each gets the verdict its code calls for, and no worker
- * JVM outlives the run.
+ * Every mutant of the hostile sample (endless loops, one of them swallowing every error, System.exit, endless
+ * recursion, memory exhaustion, a thread blocked for good) run once by {@code changeling run}: each gets the verdict
+ * its code calls for, the tests say which were stopped in place and which needed their worker killed, and no
+ * worker JVM outlives the run.
  */
 @Tag("e2e")
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
@@ -61,6 +62,17 @@ class HostileRunTest {
             Map.entry("SampleBuffer reservedBytes<wantedBytes → !=", Verdict.KILLED),
             // hostile: the uploader waits for a fourth batch that never comes, and the test's join() with it
             Map.entry("Uploader count<expectedBatches → <=", Verdict.TIMED_OUT),
+            // one upload more for a whole number of batches
+            Map.entry("Uplink left>0 → >=", Verdict.KILLED),
+            // hostile: 7 readings in batches of 5 step from 2 to -3 and on, past zero, for good; stopped in place
+            Map.entry("Uplink left>0 → !=", Verdict.TIMED_OUT),
+            Map.entry("Uplink batch<=0 → <", Verdict.SURVIVED),
+            Map.entry("Uplink batch<=0 → ==", Verdict.SURVIVED),
+            Map.entry("Uplink batch<=0 → true", Verdict.KILLED),
+            Map.entry("Uplink attempt>failuresBeforeLink → >=", Verdict.KILLED),
+            Map.entry("Uplink attempt>failuresBeforeLink → !=", Verdict.KILLED),
+            // hostile: never links, and the catch-all swallows the stop too; the worker is killed
+            Map.entry("Uplink attempt>failuresBeforeLink → false", Verdict.TIMED_OUT),
             Map.entry("Uploader count<expectedBatches → !=", Verdict.SURVIVED),
             // the tests try 0 and 2 faults only, for which these guards stay false
             Map.entry("Watchdog faults>=FATAL_FAULTS → >", Verdict.SURVIVED),
@@ -127,10 +139,26 @@ class HostileRunTest {
         }
 
         @Test
-        void theEndlessWait_timesOut_inTheTestThatWaits() {
+        void theEndlessWait_timesOut_inTheTestThatWaits_andNeedsTheKill() {
             MutantResult blocked = mutant("Uploader count<expectedBatches → <=");
             assertEquals(Verdict.TIMED_OUT, blocked.verdict());
             assertTrue(blocked.killedBy().contains("sendsEveryBatchItWasToldOfAndStops"), blocked::toString);
+            // the waiting threads never pass a mutant's switch, so nothing unwinds them
+            assertTrue(blocked.detail().endsWith("the worker was killed"), blocked::toString);
+        }
+
+        @Test
+        void anEndlessLoopThroughItsSwitch_isStoppedInPlace() {
+            MutantResult loops = mutant("Uplink left>0 → !=");
+            assertTrue(loops.killedBy().contains("aShortLastBatchIsOneMoreUpload"), loops::toString);
+            assertTrue(loops.detail().endsWith("stopped in place"), loops::toString);
+        }
+
+        @Test
+        void anEndlessLoopThatSwallowsEveryError_needsTheKill() {
+            MutantResult stubborn = mutant("Uplink attempt>failuresBeforeLink → false");
+            assertTrue(stubborn.killedBy().contains("linksOnTheAttemptAfterTheFailures"), stubborn::toString);
+            assertTrue(stubborn.detail().endsWith("the worker was killed"), stubborn::toString);
         }
 
         @Test
