@@ -54,6 +54,11 @@ final class RunCommand implements Callable<Integer> {
             description = "Each step of a mutant's tests (the group a worker runs in one go) may take F times its tests' unmutated time (default: ${DEFAULT-VALUE}) ...")
     double timeFactor = Deadlines.DEFAULT.factor();
 
+    @Option(names = "--recheck-timeouts",
+            description = "After the run, run every timed-out mutant again with ten times its deadline and say which then"
+                    + " finish (a check of the deadlines; the verdicts stay as they were).")
+    boolean recheckTimeouts;
+
     @Option(names = "--time-extra", paramLabel = "MS",
             description = "... plus this many milliseconds (" + Deadlines.FIRST_RUN_EXTRA_MILLIS + " more when the worker first meets a test class), before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
     long timeExtraMillis = Deadlines.DEFAULT.constantMillis();
@@ -110,7 +115,7 @@ final class RunCommand implements Callable<Integer> {
         }
         RunRequest request = new RunRequest(layout.root(), project.limits(layout), mutants.selection(point -> true),
                 change.scope(layout.root()), explicit.applyTo(DiscoveryOptions.defaults().withMavenArguments(mavenArguments)),
-                workerCount, deadlines, Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags);
+                workerCount, deadlines, Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
         Style style = plain ? Style.plain() : Style.forStandardOutput();
         ProgressListener listener = new ProgressListener(err, plain);
         MutationRun run = new MutationRun(request, listener);

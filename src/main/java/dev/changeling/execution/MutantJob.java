@@ -52,6 +52,11 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
         return new MutantJob(key, new int[0], tests, new long[tests.size()], flat(stepMillis), Objects.requireNonNull(classes, "classes"));
     }
 
+    /** The same job under other deadlines. */
+    public MutantJob withDeadlines(Deadlines other) {
+        return new MutantJob(key, points, tests, testNanos, other, aloneClasses);
+    }
+
     /** The deadline for the step that runs {@code count} tests from index {@code from} on. */
     public long stepMillis(int from, int count, boolean firstRunOfAClass) {
         long nanos = 0;

@@ -180,6 +180,10 @@ public final class MutationRun {
             });
             timings.put("execute", millisSince(at));
             complete = !stopped && finished.size() == jobs.size();
+            if (complete && request.recheckTimeouts()) {
+                TimeoutRecheck.run(workers, jobs, finished, request.deadlines(),
+                        key -> byKey.get(key).shortId() + " " + byKey.get(key).file(), listener);
+            }
         }
         timings.put("total", millisSince(started));
         List<MutantResult> ordered = chosen.mutants().stream()

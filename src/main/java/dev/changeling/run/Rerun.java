@@ -49,7 +49,7 @@ public final class Rerun implements MutantRerun {
                 Optional.empty(), DiscoveryOptions.defaults().withMavenArguments(settings.mavenArguments()), 1,
                 new Deadlines(settings.timeFactor(), settings.timeExtraMillis()),
                 Optional.ofNullable(settings.workerHeap()),
-                WorkerSettings.DEFAULT_MUTANTS_PER_WORKER, settings.skipTests(), settings.skipTags());
+                WorkerSettings.DEFAULT_MUTANTS_PER_WORKER, settings.skipTests(), settings.skipTags(), false);
         RunResults results = new MutationRun(again, RunListener.SILENT).execute();
         return results.mutants().stream()
                 .filter(result -> result.id().equals(mutant.id()))

@@ -22,6 +22,8 @@ import java.util.Optional;
  * @param mutantsPerWorker how many mutants a worker runs before it is replaced
  * @param skipTests        test class patterns to leave out
  * @param skipTags         JUnit tags to leave out
+ * @param recheckTimeouts  whether every timed-out mutant runs again afterwards with ten times its deadline, to
+ *                         see whether the deadlines were long enough
  */
 public record RunRequest(
         Path folder,
@@ -34,7 +36,8 @@ public record RunRequest(
         Optional<String> workerHeap,
         int mutantsPerWorker,
         List<String> skipTests,
-        List<String> skipTags) {
+        List<String> skipTags,
+        boolean recheckTimeouts) {
 
     public RunRequest {
         limits = List.copyOf(limits);
