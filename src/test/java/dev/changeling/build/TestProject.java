@@ -4,6 +4,7 @@ import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
 import dev.changeling.mutant.PointFinder;
 import dev.changeling.operator.MutationOperator;
+import dev.changeling.probe.MutantStopped;
 import dev.changeling.probe.Probe;
 import dev.changeling.source.JavaSources;
 import dev.changeling.source.SourceFile;
@@ -65,10 +66,13 @@ final class TestProject {
                 Files.writeString(file, source.getValue(), StandardCharsets.UTF_8);
                 project.files.put(SOURCE_ROOT + source.getKey(), JavaSources.read(root, file));
             }
-            Path probeClass = project.probe.resolve("dev/changeling/probe/Probe.class");
-            Files.createDirectories(probeClass.getParent());
-            try (InputStream in = Probe.class.getResourceAsStream("Probe.class")) {
-                Files.write(probeClass, in.readAllBytes());
+            for (Class<?> probePart : List.of(Probe.class, MutantStopped.class)) {
+                String name = probePart.getSimpleName() + ".class";
+                Path probeClass = project.probe.resolve("dev/changeling/probe/" + name);
+                Files.createDirectories(probeClass.getParent());
+                try (InputStream in = probePart.getResourceAsStream(name)) {
+                    Files.write(probeClass, in.readAllBytes());
+                }
             }
         } catch (IOException e) {
             throw new UncheckedIOException(e);
