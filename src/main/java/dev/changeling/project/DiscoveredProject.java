@@ -16,12 +16,13 @@ import java.util.List;
  * @param productionClasses    binary names of every main class, for a worker to load before the first test
  * @param suite                the tests as the build runs them: classes, tags, the test JVM's settings
  * @param mavenTime            how long mvn ran in this discovery, all calls added up; zero when it did not run
+ * @param build                how the project was built, in words for the user
  * @param junitPlatformVersion the version of the JUnit Platform launcher and engine on the test classpath
  * @param junitSetup           what was done to the JUnit artifacts, in words for the user
  */
 public record DiscoveredProject(ProjectLayout layout, Path classesDirectory, List<Path> testClassRoots,
                                 List<Path> compileClasspath, List<Path> testClasspath, List<String> productionClasses,
-                                SuiteConfiguration suite, Duration mavenTime, String junitPlatformVersion, String junitSetup) {
+                                SuiteConfiguration suite, Duration mavenTime, String build, String junitPlatformVersion, String junitSetup) {
 
     public DiscoveredProject {
         testClassRoots = List.copyOf(testClassRoots);

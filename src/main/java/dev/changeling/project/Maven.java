@@ -115,6 +115,11 @@ final class Maven {
         }
     }
 
+    /** The arguments given for every call. */
+    List<String> arguments() {
+        return extraArguments;
+    }
+
     /** The {@code -Dname=value} arguments given for every call ({@code -Dname} alone means true), as Maven's user properties. */
     Map<String, String> userProperties() {
         Map<String, String> properties = new LinkedHashMap<>();

@@ -20,8 +20,13 @@ final class MavenDiscovery {
     private static final List<String> UNRESOLVED = List.of("Could not resolve dependencies", "Could not find artifact",
             "Failed to collect dependencies", "Failed to read artifact descriptor", "Non-resolvable parent POM");
 
-    /** What the mvn call left behind, before the JUnit launcher is aligned. */
-    record Compiled(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies, SuiteConfiguration suite) {
+    /**
+     * What the mvn call left behind, before the JUnit launcher is aligned.
+     *
+     * @param build how the module was built, in words for the user
+     */
+    record Compiled(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies, SuiteConfiguration suite,
+                    String build) {
     }
 
     private MavenDiscovery() {
@@ -45,10 +50,21 @@ final class MavenDiscovery {
         Path log = work.resolve("maven.log");
         Path effectivePom = work.resolve("effective-pom.xml");
         Path reactorMarker = work.resolve("maven-reactor.txt");
+        Path memoFile = work.resolve(MavenMemo.FILE);
+        MavenMemo inputs = MavenMemo.now(module, maven.arguments(), List.of(folders.sources(), folders.testSources(),
+                module.resolve("src/main/resources"), module.resolve("src/test/resources")));
+        if (!Files.exists(reactorMarker)) {
+            Optional<Compiled> reused = reuse(module, folders, classpathFile, effectivePom, MavenMemo.read(memoFile), inputs, maven);
+            if (reused.isPresent()) {
+                inputs.write(memoFile);
+                return reused.get();
+            }
+        }
         try {
             Files.createDirectories(work);
             Files.deleteIfExists(classpathFile);
             Files.deleteIfExists(effectivePom);
+            Files.deleteIfExists(memoFile);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -81,10 +97,52 @@ final class MavenDiscovery {
         if (!Files.isRegularFile(effectivePom)) {
             throw run.failure("mvn finished but wrote no effective POM to " + effectivePom);
         }
+        Compiled compiled = compiled(module, folders, classpathFile, EffectivePom.read(effectivePom, folders.directory()), maven,
+                String.format(java.util.Locale.ROOT, "compiled and found the test classpath in %.1f s", maven.totalTime().toMillis() / 1000.0));
+        inputs.write(memoFile);
+        return compiled;
+    }
+
+    /**
+     * The answer of the last mvn call again, when nothing Maven decides on changed since (no pom, argument or
+     * resource; no source removed): changed Java sources are compiled in process, main ones first. Empty when mvn
+     * must run.
+     */
+    private static Optional<Compiled> reuse(Path module, PomFile.BuildFolders folders, Path classpathFile, Path effectivePomFile,
+                                            MavenMemo earlier, MavenMemo now, Maven maven) {
+        if (earlier == null || !Files.isRegularFile(classpathFile) || !Files.isRegularFile(effectivePomFile)
+                || !Files.isDirectory(folders.testClasses())) {
+            return Optional.empty();
+        }
+        List<Path> changed = now.changedJavaSourcesSince(earlier);
+        if (changed == null) {
+            return Optional.empty();
+        }
+        long start = System.nanoTime();
+        EffectivePom pom = EffectivePom.read(effectivePomFile, folders.directory());
+        List<Path> dependencies = read(classpathFile);
+        List<Path> mainClasspath = new ArrayList<>(List.of(folders.classes()));
+        mainClasspath.addAll(dependencies);
+        List<Path> testClasspath = new ArrayList<>(List.of(folders.testClasses()));
+        testClasspath.addAll(mainClasspath);
+        List<Path> main = changed.stream().filter(file -> file.startsWith(folders.sources())).toList();
+        List<Path> tests = changed.stream().filter(file -> file.startsWith(folders.testSources())).toList();
+        if (!InProcessCompile.compile(main, folders.classes(), mainClasspath, pom, "default-compile")
+                || !InProcessCompile.compile(tests, folders.testClasses(), testClasspath, pom, "default-testCompile")) {
+            return Optional.empty();
+        }
+        String how = changed.isEmpty() ? "not run: nothing it decides on changed since its last call"
+                : String.format(java.util.Locale.ROOT, "not run: nothing it decides on changed since its last call;"
+                        + " %d changed Java source%s compiled in process in %.1f s", changed.size(), changed.size() == 1 ? "" : "s",
+                        (System.nanoTime() - start) / 1e9);
+        return Optional.of(compiled(module, folders, classpathFile, pom, maven, how));
+    }
+
+    private static Compiled compiled(Path module, PomFile.BuildFolders folders, Path classpathFile, EffectivePom pom, Maven maven,
+                                     String how) {
         ProjectLayout layout = new ProjectLayout(module, List.of(folders.sources()), List.of(folders.testSources()), folders.directory());
-        SuiteConfiguration suite = SurefireReader.read(EffectivePom.read(effectivePom, folders.directory()), module,
-                folders.testClasses(), maven.userProperties());
-        return new Compiled(layout, folders.classes(), folders.testClasses(), read(classpathFile), suite);
+        SuiteConfiguration suite = SurefireReader.read(pom, module, folders.testClasses(), maven.userProperties());
+        return new Compiled(layout, folders.classes(), folders.testClasses(), read(classpathFile), suite, how);
     }
 
     private static Maven.Run inReactor(Reactor reactor, List<String> build, Path log, Maven maven) {

@@ -40,7 +40,7 @@ public final class ProjectDiscovery {
         compileClasspath.add(compiled.classes());
         compileClasspath.addAll(compiled.dependencies());
         return finish(compiled.layout(), compiled.classes(), compiled.testClasses(), compiled.dependencies(), compileClasspath,
-                compiled.suite(), maven);
+                compiled.suite(), compiled.build(), maven);
     }
 
     private static DiscoveredProject explicit(Path root, ExplicitProject given, LazyMaven maven) {
@@ -59,11 +59,12 @@ public final class ProjectDiscovery {
         List<Path> compileClasspath = new ArrayList<>();
         compileClasspath.add(classes);
         compileClasspath.addAll(dependencies);
-        return finish(layout, classes, testClasses, dependencies, compileClasspath, SurefireReader.defaults(root, testClasses), maven);
+        return finish(layout, classes, testClasses, dependencies, compileClasspath, SurefireReader.defaults(root, testClasses),
+                "not run: the folders and classpath were given by hand", maven);
     }
 
     private static DiscoveredProject finish(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies,
-                                            List<Path> compileClasspath, SuiteConfiguration suite, LazyMaven maven) {
+                                            List<Path> compileClasspath, SuiteConfiguration suite, String build, LazyMaven maven) {
         List<Path> testClasspath = new ArrayList<>();
         testClasspath.add(testClasses);
         testClasspath.add(classes);
@@ -71,7 +72,7 @@ public final class ProjectDiscovery {
         ArtifactResolver resolver = new CachedMavenResolver(maven::get, layout.changelingDirectory().resolve("launcher"));
         JUnitAlignment.Aligned aligned = JUnitAlignment.align(testClasspath, resolver, layout.root());
         return new DiscoveredProject(layout, classes, List.of(testClasses), compileClasspath, aligned.classpath(),
-                ClassNames.below(classes), suite, maven.time(), aligned.platformVersion(), aligned.description());
+                ClassNames.below(classes), suite, maven.time(), build, aligned.platformVersion(), aligned.description());
     }
 
     private static Path mustExist(Path given, String what, boolean folder) {

@@ -84,9 +84,8 @@ public final class MutationRun {
         long started = System.nanoTime();
         Map<String, Double> timings = new LinkedHashMap<>();
         DiscoveredProject project = ProjectDiscovery.discover(request.folder(), request.discovery());
-        timings.put("maven", project.mavenTime().toNanos() / 1e6);
-        listener.phase(String.format(java.util.Locale.ROOT, "maven: compiled and found the test classpath in %.1f s (%s)",
-                project.mavenTime().toMillis() / 1000.0, project.junitSetup()));
+        timings.put("maven", millisSince(started));
+        listener.phase("maven: " + project.build() + " (" + project.junitSetup() + ")");
         checkNotStopped();
 
         ProjectLayout layout = project.layout();
