@@ -6,17 +6,9 @@
 #   src/bench/rerun.sh
 set -euo pipefail
 
-repo_root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
-jar="$repo_root/target/changeling.jar"
-classes="$repo_root/target/bench/classes"
+source "$(dirname "${BASH_SOURCE[0]}")/prepare.sh" RerunFigures.java --no-project
 project="$repo_root/target/bench/greenhouse-rerun"
-if [[ ! -f "$jar" ]]; then
-  echo "error: $jar is missing; build it first with: mvn -q package -DskipTests" >&2
-  exit 1
-fi
-rm -rf "$classes" "$project"
-mkdir -p "$classes"
-javac --release 17 -cp "$jar" -d "$classes" "$repo_root/src/bench/java/RerunFigures.java"
+rm -rf "$project"
 cp -r "$repo_root/samples/greenhouse" "$project"
 cd "$project"
 # The survivor: `hour < 21` -> `hour <= 21` in WaterTariff.bandAt (no test tries 21:00).
