@@ -5,8 +5,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Consumer;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * The test JVM's options from Surefire's {@code argLine}: property references filled in, split into
@@ -16,9 +14,6 @@ import java.util.regex.Pattern;
  * @param maxHeap   the {@code -Xmx} value, when the line sets one
  */
 record ArgLine(List<String> arguments, Optional<String> maxHeap) {
-
-    /** {@code ${name}} (left by Maven when it did not know the name) and {@code @{name}} (filled in when the tests start). */
-    private static final Pattern REFERENCE = Pattern.compile("[$@]\\{([^}]+)}");
 
     static ArgLine none() {
         return new ArgLine(List.of(), Optional.empty());
@@ -32,13 +27,13 @@ record ArgLine(List<String> arguments, Optional<String> maxHeap) {
         List<String> arguments = new ArrayList<>();
         Optional<String> maxHeap = Optional.empty();
         for (String word : words(line.replace('\n', ' ').replace('\r', ' '))) {
-            Optional<String> filled = filled(word, properties);
-            if (filled.isEmpty()) {
+            String filled = PropertyReferences.filled(word, properties);
+            if (PropertyReferences.hasAny(filled)) {
                 notice.accept("argLine: left out " + word + " (a property set by a plugin while Maven runs, not known before)");
                 continue;
             }
             // A property's value may hold several options; a word as written was split already.
-            for (String argument : filled.get().equals(word) ? List.of(word) : words(filled.get())) {
+            for (String argument : filled.equals(word) ? List.of(word) : words(filled)) {
                 if (argument.startsWith("-Xmx")) {
                     maxHeap = Optional.of(argument.substring("-Xmx".length()));
                 } else {
@@ -47,29 +42,6 @@ record ArgLine(List<String> arguments, Optional<String> maxHeap) {
             }
         }
         return new ArgLine(List.copyOf(arguments), maxHeap);
-    }
-
-    /** The word with every reference filled in (several rounds, as a property may refer to another); empty if one is unknown. */
-    private static Optional<String> filled(String word, Map<String, String> properties) {
-        String current = word;
-        for (int round = 0; round < 10; round++) {
-            Matcher matcher = REFERENCE.matcher(current);
-            if (!matcher.find()) {
-                return Optional.of(current);
-            }
-            matcher.reset();
-            StringBuilder result = new StringBuilder();
-            while (matcher.find()) {
-                String value = properties.get(matcher.group(1));
-                if (value == null) {
-                    return Optional.empty();
-                }
-                matcher.appendReplacement(result, Matcher.quoteReplacement(value));
-            }
-            matcher.appendTail(result);
-            current = result.toString();
-        }
-        return Optional.empty();
     }
 
     /** Splits at unquoted white space; single or double quotes group and are removed. */

@@ -27,7 +27,6 @@ final class SurefireReader {
 
     private static final String PLUGIN = "maven-surefire-plugin";
     private static final String EXECUTION = "default-test";
-    private static final Pattern REFERENCE = Pattern.compile("[$@]\\{([^}]+)}");
     private static final Pattern VERSION = Pattern.compile("(\\d+)\\.(\\d+).*");
 
     private final EffectivePom.PluginSettings surefire;
@@ -236,20 +235,6 @@ final class SurefireReader {
 
     /** Fills in the property references Maven left (it leaves unknown ones); an unknown one stays as written. */
     private String filled(String value) {
-        String current = value;
-        for (int round = 0; round < 10 && REFERENCE.matcher(current).find(); round++) {
-            Matcher matcher = REFERENCE.matcher(current);
-            StringBuilder result = new StringBuilder();
-            while (matcher.find()) {
-                String known = properties.get(matcher.group(1));
-                matcher.appendReplacement(result, Matcher.quoteReplacement(known == null ? matcher.group() : known));
-            }
-            matcher.appendTail(result);
-            if (result.toString().equals(current)) {
-                break;
-            }
-            current = result.toString();
-        }
-        return current;
+        return PropertyReferences.filled(value, properties);
     }
 }

@@ -24,7 +24,7 @@ import java.util.List;
  * tool -> worker  RUN        points:ints tests:strs
  *                   reply    STEP count:int (before each group of tests run in one request: the next count tests)
  *                            TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE
-                              (status STOPPED: the step was stopped at its deadline; it is the last test reported)
+ *                            (status STOPPED: the step was stopped at its deadline; it is the last test reported)
  * tool -> worker  QUIT       (no reply; the worker exits)
  * any reply may instead be   FAILURE message:str   (the command failed inside the worker; the worker goes on)
  * </pre>
