@@ -1,7 +1,7 @@
 package dev.changeling.cli;
 
 import dev.changeling.UserError;
-import dev.changeling.review.ChangeScope;
+import dev.changeling.scope.ChangeScope;
 import java.nio.file.Path;
 import java.util.Optional;
 import picocli.CommandLine.Option;

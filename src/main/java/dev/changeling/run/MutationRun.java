@@ -2,10 +2,10 @@ package dev.changeling.run;
 
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
-import dev.changeling.build.BuildRequest;
-import dev.changeling.build.BuildResult;
-import dev.changeling.build.MutantBuild;
-import dev.changeling.build.Placement;
+import dev.changeling.compile.BuildRequest;
+import dev.changeling.compile.BuildResult;
+import dev.changeling.compile.MutantBuild;
+import dev.changeling.compile.Placement;
 import dev.changeling.execution.Baseline;
 import dev.changeling.execution.RecordedTest;
 import dev.changeling.execution.JobResult;

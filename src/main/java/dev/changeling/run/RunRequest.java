@@ -3,7 +3,7 @@ package dev.changeling.run;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.mutant.Selection;
 import dev.changeling.project.DiscoveryOptions;
-import dev.changeling.review.ChangeScope;
+import dev.changeling.scope.ChangeScope;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;

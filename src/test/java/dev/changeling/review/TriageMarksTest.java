@@ -1,5 +1,6 @@
 package dev.changeling.review;
 
+import dev.changeling.support.GitFixture;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
