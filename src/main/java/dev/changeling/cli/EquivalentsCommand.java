@@ -1,5 +1,6 @@
 package dev.changeling.cli;
 
+import dev.changeling.Text;
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import dev.changeling.results.MutantResult;
@@ -265,7 +266,7 @@ final class EquivalentsCommand implements Callable<Integer> {
     }
 
     private static String shown(Path root, EquivalentsList list) {
-        return root.relativize(list.file()).toString().replace('\\', '/');
+        return Text.relative(root, list.file());
     }
 
     private static String oneLine(String text) {

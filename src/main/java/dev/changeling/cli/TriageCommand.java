@@ -60,7 +60,7 @@ final class TriageCommand implements Callable<Integer> {
 
     /** Triage re-runs a mutant marked fixed through the same engine as {@code changeling run}. */
     static MutantRerun rerun(ProjectLayout layout, RunResults results) {
-        return new Rerun(layout.root(), results);
+        return new Rerun(layout.root(), results)::rerun;
     }
 
     @Override

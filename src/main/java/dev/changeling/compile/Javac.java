@@ -1,5 +1,6 @@
 package dev.changeling.compile;
 
+import dev.changeling.Text;
 import com.sun.source.tree.CompilationUnitTree;
 import com.sun.source.util.JavacTask;
 import com.sun.source.util.Trees;
@@ -247,9 +248,7 @@ final class Javac implements AutoCloseable {
 
     /** The first line of an error's message; the rest repeats types and positions. */
     static String firstLine(Diagnostic<? extends JavaFileObject> error) {
-        String message = error.getMessage(Locale.ROOT);
-        int newline = message.indexOf('\n');
-        return (newline < 0 ? message : message.substring(0, newline)).trim();
+        return Text.firstLine(error.getMessage(Locale.ROOT));
     }
 
     @Override

@@ -133,7 +133,7 @@ final class SchemaCompiler {
         for (CompilationUnitTree unit : task.units()) {
             RenderedFile file = rendered.get(Javac.pathOf(unit.getSourceFile()));
             List<Diagnostic<? extends JavaFileObject>> errors = errorsByFile.getOrDefault(file.path(), List.of());
-            Map<Point, String> misfits = new LinkedHashMap<>(LoopConditions.constantSides(task, unit, file));
+            Map<Point, String> misfits = new LinkedHashMap<>(LoopConditionSwitches.constantSides(task, unit, file));
             StatementContexts.outsideBlocks(task, unit, file).forEach(misfits::putIfAbsent);
             if (!errors.isEmpty()) {
                 ErrorAttribution.Traced traced = ErrorAttribution.trace(file, errors, MemberSpans.of(unit, positions),

@@ -16,7 +16,7 @@ import com.github.javaparser.ast.nodeTypes.NodeWithModifiers;
 import com.github.javaparser.ast.stmt.SwitchEntry;
 import com.github.javaparser.ast.body.ClassOrInterfaceDeclaration;
 import com.github.javaparser.ast.Modifier;
-import dev.changeling.operator.ConstantExpressions;
+import dev.changeling.operator.syntax.ConstantExpressions;
 
 /**
  * Where a mutant cannot mean anything or cannot compile by construction: annotations, case labels,

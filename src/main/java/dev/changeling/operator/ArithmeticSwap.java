@@ -1,5 +1,7 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.Concatenation;
+import dev.changeling.operator.syntax.OperatorFamily;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.DIVIDE;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.MINUS;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.MULTIPLY;

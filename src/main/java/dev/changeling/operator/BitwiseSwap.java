@@ -1,5 +1,6 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.OperatorFamily;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.BINARY_AND;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.BINARY_OR;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.XOR;

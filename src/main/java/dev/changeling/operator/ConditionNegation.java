@@ -1,5 +1,7 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.LoopConditions;
+import dev.changeling.operator.syntax.Patterns;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.ArrayAccessExpr;
 import com.github.javaparser.ast.expr.BooleanLiteralExpr;

@@ -1,5 +1,7 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.OperatorFamily;
+import dev.changeling.operator.syntax.Patterns;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.AND;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.OR;
 

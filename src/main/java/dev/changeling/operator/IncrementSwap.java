@@ -1,5 +1,6 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.UnaryRewrite;
 import static com.github.javaparser.ast.expr.UnaryExpr.Operator.POSTFIX_DECREMENT;
 import static com.github.javaparser.ast.expr.UnaryExpr.Operator.POSTFIX_INCREMENT;
 import static com.github.javaparser.ast.expr.UnaryExpr.Operator.PREFIX_DECREMENT;

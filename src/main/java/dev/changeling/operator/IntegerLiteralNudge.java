@@ -1,5 +1,7 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.IntegerLiterals;
+import dev.changeling.operator.syntax.Tokens;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.body.VariableDeclarator;
 import com.github.javaparser.ast.expr.CastExpr;

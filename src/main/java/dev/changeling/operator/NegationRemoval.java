@@ -1,5 +1,7 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.Patterns;
+import dev.changeling.operator.syntax.UnaryRewrite;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.UnaryExpr;
 

@@ -1,5 +1,6 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.LoopConditions;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.stmt.Statement;
 import dev.changeling.source.SourceFile;

@@ -1,5 +1,8 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.BlankValues;
+import dev.changeling.operator.syntax.CatchClauses;
+import dev.changeling.operator.syntax.Declarations;
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.body.MethodDeclaration;
 import com.github.javaparser.ast.expr.Expression;

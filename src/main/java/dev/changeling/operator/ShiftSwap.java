@@ -1,5 +1,6 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.OperatorFamily;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.LEFT_SHIFT;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.SIGNED_RIGHT_SHIFT;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.UNSIGNED_RIGHT_SHIFT;

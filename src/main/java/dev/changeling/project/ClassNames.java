@@ -1,5 +1,6 @@
 package dev.changeling.project;
 
+import dev.changeling.Text;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
@@ -20,7 +21,7 @@ final class ClassNames {
         }
         try (Stream<Path> walk = Files.walk(classes)) {
             return walk.filter(Files::isRegularFile)
-                    .map(file -> classes.relativize(file).toString().replace('\\', '/'))
+                    .map(file -> Text.relative(classes, file))
                     .filter(relative -> relative.endsWith(".class"))
                     .filter(relative -> !relative.startsWith("META-INF/"))
                     .map(relative -> relative.substring(0, relative.length() - ".class".length()))

@@ -1,5 +1,6 @@
 package dev.changeling.project;
 
+import dev.changeling.Text;
 import dev.changeling.UserError;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -50,14 +51,14 @@ public record ProjectLayout(Path root, List<Path> sourceRoots, List<Path> testRo
     }
 
     public String relative(Path file) {
-        return root.relativize(file.toAbsolutePath().normalize()).toString().replace('\\', '/');
+        return Text.relative(root, file.toAbsolutePath().normalize());
     }
 
     private static Stream<Path> javaFilesBelow(Path folder) {
         try (Stream<Path> walk = Files.walk(folder)) {
             return walk.filter(path -> path.toString().endsWith(".java"))
                     .filter(Files::isRegularFile)
-                    .filter(path -> !folder.relativize(path).toString().replace('\\', '/').matches("(.*/)?target/.*"))
+                    .filter(path -> !Text.relative(folder, path).matches("(.*/)?target/.*"))
                     .toList().stream();
         } catch (IOException e) {
             throw new UncheckedIOException(e);

@@ -1,5 +1,6 @@
 package dev.changeling.project;
 
+import dev.changeling.Text;
 import dev.changeling.UserError;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -28,7 +29,7 @@ record Reactor(Path root, String modulePath) {
         if (outermost == null) {
             return Optional.empty();
         }
-        String relative = outermost.relativize(module.toAbsolutePath().normalize()).toString().replace('\\', '/');
+        String relative = Text.relative(outermost, module.toAbsolutePath().normalize());
         return Optional.of(new Reactor(outermost, relative));
     }
 

@@ -1,11 +1,13 @@
 package dev.changeling.results;
 
+import dev.changeling.Text;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.changeling.AtomicFiles;
 import dev.changeling.UserError;
+import java.util.Objects;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -55,16 +57,9 @@ public final class ResultsFile {
             tree.path("tests").forEach(test -> suite.add(test.path("id").asText(null)));
             return JSON.readerFor(RunResults.class).withAttribute(TestRefs.SUITE, suite).readValue(tree);
         } catch (IOException e) {
-            throw new UserError(file + ": cannot read the results (" + firstLine(e.getMessage())
+            throw new UserError(file + ": cannot read the results (" + Text.firstLine(Objects.requireNonNullElse(e.getMessage(), "unreadable"))
                     + "); run 'changeling run' again to rewrite it");
         }
     }
 
-    private static String firstLine(String message) {
-        if (message == null) {
-            return "unreadable";
-        }
-        int newline = message.indexOf('\n');
-        return newline < 0 ? message : message.substring(0, newline);
-    }
 }

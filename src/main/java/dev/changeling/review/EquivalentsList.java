@@ -1,5 +1,6 @@
 package dev.changeling.review;
 
+import dev.changeling.Text;
 import dev.changeling.AtomicFiles;
 import dev.changeling.UserError;
 import dev.changeling.results.MutantResult;
@@ -187,7 +188,7 @@ public final class EquivalentsList {
     }
 
     private static String shown(Path root, Path file) {
-        return root.relativize(file).toString().replace('\\', '/');
+        return Text.relative(root, file);
     }
 
     private static <T> List<T> orEmpty(List<T> list) {

@@ -1,5 +1,6 @@
 package dev.changeling.review;
 
+import dev.changeling.Text;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonValue;
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -8,6 +9,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.changeling.AtomicFiles;
 import dev.changeling.UserError;
+import java.util.Objects;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -170,12 +172,12 @@ public final class TriageMarks {
     }
 
     private static Map<String, Mark> parse(Path root, Path file, byte[] bytes) {
-        String where = root.relativize(file).toString().replace('\\', '/');
+        String where = Text.relative(root, file);
         Stored stored;
         try {
             stored = JSON.readValue(bytes, Stored.class);
         } catch (IOException e) {
-            throw new UserError(where + ": cannot read the triage marks (" + firstLine(e.getMessage())
+            throw new UserError(where + ": cannot read the triage marks (" + Text.firstLine(Objects.requireNonNullElse(e.getMessage(), "unreadable"))
                     + "); repair the file, or delete it to start triage afresh");
         }
         if (stored == null || stored.format() != FORMAT) {
@@ -218,14 +220,7 @@ public final class TriageMarks {
     }
 
     private String shown() {
-        return projectRoot.relativize(file).toString().replace('\\', '/');
+        return Text.relative(projectRoot, file);
     }
 
-    private static String firstLine(String message) {
-        if (message == null) {
-            return "unreadable";
-        }
-        int newline = message.indexOf('\n');
-        return newline < 0 ? message : message.substring(0, newline);
-    }
 }

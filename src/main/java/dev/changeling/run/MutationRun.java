@@ -1,5 +1,6 @@
 package dev.changeling.run;
 
+import dev.changeling.Text;
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import dev.changeling.compile.BuildRequest;
@@ -250,7 +251,7 @@ public final class MutationRun {
         }
         List<String> failing = new ArrayList<>();
         baseline.failedContainers().forEach(container -> failing.add(container.toString()));
-        baseline.failures().forEach(test -> failing.add(test.name() + (test.message() == null ? "" : " (" + firstLine(test.message()) + ")")));
+        baseline.failures().forEach(test -> failing.add(test.name() + (test.message() == null ? "" : " (" + Text.firstLine(test.message()) + ")")));
         String listed = failing.stream().limit(FAILURES_LISTED).collect(Collectors.joining("; "));
         String more = failing.size() > FAILURES_LISTED ? " and " + (failing.size() - FAILURES_LISTED) + " more" : "";
         throw new UserError("the tests fail without any mutant: " + listed + more
@@ -290,8 +291,4 @@ public final class MutationRun {
         return (System.nanoTime() - startNanos) / 1e6;
     }
 
-    private static String firstLine(String text) {
-        int newline = text.indexOf('\n');
-        return newline < 0 ? text : text.substring(0, newline);
-    }
 }

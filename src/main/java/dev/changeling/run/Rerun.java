@@ -12,7 +12,6 @@ import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.results.RunResults;
 import dev.changeling.results.RunSettings;
-import dev.changeling.review.triage.MutantRerun;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -24,7 +23,7 @@ import java.util.stream.Collectors;
  * Runs one mutant of an earlier run again, through the same engine, against the code and tests as
  * they are now: the project is rebuilt, the suite's baseline taken again, and only that mutant run.
  */
-public final class Rerun implements MutantRerun {
+public final class Rerun {
 
     private final Path projectRoot;
     private final RunSettings settings;
@@ -34,7 +33,7 @@ public final class Rerun implements MutantRerun {
         this.settings = earlier.settings();
     }
 
-    @Override
+    /** The mutant run again with the tests that reach it today; a {@link UserError} when it cannot be. */
     public MutantResult rerun(MutantResult mutant) {
         Set<String> points = mutant.points().stream().map(PointRecord::fingerprint).collect(Collectors.toSet());
         MutantRequest request;

@@ -1,5 +1,6 @@
 package dev.changeling.scope;
 
+import dev.changeling.Text;
 import dev.changeling.UserError;
 import java.io.BufferedReader;
 import java.io.IOException;
@@ -55,7 +56,7 @@ final class DiffFileChanges {
             ChangedLines lines = ChangedLines.some();
             diff.hunks().forEach(hunk -> hunk.addedLines().forEach(lines::add));
             if (!lines.isEmpty()) {
-                files.put(projectRoot.relativize(file).toString().replace('\\', '/'), lines);
+                files.put(Text.relative(projectRoot, file), lines);
             }
         }
         return new ChangeScope(projectRoot, "changes in " + diffFile, files);

@@ -1,5 +1,6 @@
 package dev.changeling.source;
 
+import dev.changeling.Text;
 import com.github.javaparser.JavaParser;
 import com.github.javaparser.JavaToken;
 import com.github.javaparser.ParseResult;
@@ -53,7 +54,7 @@ public final class JavaSources {
     }
 
     private static String shortened(String message) {
-        String line = firstLine(message);
+        String line = Text.firstLine(message);
         int list = line.indexOf(", expected one of");
         return list < 0 ? line : line.substring(0, list);
     }
@@ -65,8 +66,4 @@ public final class JavaSources {
                 .setAttributeComments(false);
     }
 
-    private static String firstLine(String message) {
-        int newline = message.indexOf('\n');
-        return (newline < 0 ? message : message.substring(0, newline)).trim();
-    }
 }

@@ -387,7 +387,7 @@ class MutantBuildTest {
     }
 
     @Nested
-    class LoopConditions {
+    class LoopConditionSwitches {
 
         @Test
         void conditionBecomingConstantFalse_isStillborn_asJavacFindsTheBodyUnreachable() {
@@ -420,11 +420,11 @@ class MutantBuildTest {
 
         @Test
         void constantText_isLiteralsAndOperatorsOnly() {
-            assertTrue(dev.changeling.compile.LoopConditions.constant("false"));
-            assertTrue(dev.changeling.compile.LoopConditions.constant("(1 < 2L) && !true"));
-            assertFalse(dev.changeling.compile.LoopConditions.constant("i < 10"));
-            assertFalse(dev.changeling.compile.LoopConditions.constant("x1 > 0"));
-            assertFalse(dev.changeling.compile.LoopConditions.constant("\"a\".isEmpty()"));
+            assertTrue(dev.changeling.compile.LoopConditionSwitches.constant("false"));
+            assertTrue(dev.changeling.compile.LoopConditionSwitches.constant("(1 < 2L) && !true"));
+            assertFalse(dev.changeling.compile.LoopConditionSwitches.constant("i < 10"));
+            assertFalse(dev.changeling.compile.LoopConditionSwitches.constant("x1 > 0"));
+            assertFalse(dev.changeling.compile.LoopConditionSwitches.constant("\"a\".isEmpty()"));
         }
     }
 

@@ -12,7 +12,7 @@ import com.github.javaparser.ast.stmt.ExpressionStmt;
 import com.github.javaparser.ast.stmt.ReturnStmt;
 import com.github.javaparser.ast.type.PrimitiveType;
 import dev.changeling.operator.MutationOperator;
-import dev.changeling.operator.OperatorRewrite;
+import dev.changeling.operator.syntax.OperatorRewrite;
 import dev.changeling.operator.Proposals;
 import dev.changeling.operator.RelationalSubset;
 import dev.changeling.source.Span;

@@ -1,5 +1,11 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.ConstantExpressions;
+import dev.changeling.operator.syntax.LoopConditions;
+import dev.changeling.operator.InMemoryJavac;
+import dev.changeling.operator.Mutate;
+import dev.changeling.operator.Operators;
+import dev.changeling.operator.RelationalAll;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

@@ -1,5 +1,12 @@
 package dev.changeling.operator;
 
+import dev.changeling.operator.syntax.OperatorRewrite;
+import dev.changeling.operator.syntax.UnaryRewrite;
+import dev.changeling.operator.Mutate;
+import dev.changeling.operator.NegationRemoval;
+import dev.changeling.operator.Operators;
+import dev.changeling.operator.Proposal;
+import dev.changeling.operator.Proposals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

@@ -1,5 +1,6 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.Text;
 import dev.changeling.UserError;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
@@ -202,6 +203,6 @@ final class Session {
     }
 
     private String shown(Path file) {
-        return setup.projectRoot().relativize(file).toString().replace('\\', '/');
+        return Text.relative(setup.projectRoot(), file);
     }
 }

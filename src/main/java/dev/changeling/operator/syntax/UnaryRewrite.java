@@ -1,23 +1,24 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
+import dev.changeling.operator.Proposals;
 import com.github.javaparser.ast.expr.UnaryExpr;
 import dev.changeling.source.Span;
 
 /** Proposes changes to the operator token of a unary expression, prefix or postfix, leaving the operand's text alone. */
-final class UnaryRewrite {
+public final class UnaryRewrite {
 
     private UnaryRewrite() {
     }
 
     /** Replaces the operator token by {@code to}. */
-    static void swap(UnaryExpr unary, UnaryExpr.Operator to, Proposals out) {
+    public static void swap(UnaryExpr unary, UnaryExpr.Operator to, Proposals out) {
         Span token = operatorToken(unary, out);
         out.replace(unary, token, Tokens.spliced(out.file().text(), token, to.asString()),
                 "replaced " + unary.getOperator().asString() + " with " + to.asString());
     }
 
     /** Removes the operator token, keeping the operand. */
-    static void remove(UnaryExpr unary, Proposals out, String description) {
+    public static void remove(UnaryExpr unary, Proposals out, String description) {
         Span token = operatorToken(unary, out);
         out.replace(unary, token, Tokens.spliced(out.file().text(), token, ""), description);
     }

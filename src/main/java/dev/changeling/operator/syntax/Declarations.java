@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.body.CallableDeclaration;
@@ -29,19 +29,19 @@ import java.util.stream.Stream;
  * Reads what a source declares, without solving types: where a name is declared, and the type
  * written for a variable, for the place a value goes to, or for a method's result.
  */
-final class Declarations {
+public final class Declarations {
 
     private Declarations() {
     }
 
     /** Whether {@code type} is written as {@code String} or {@code java.lang.String}. */
-    static boolean isString(Type type) {
+    public static boolean isString(Type type) {
         return type instanceof ClassOrInterfaceType named && named.getNameAsString().equals("String")
                 && named.getScope().map(scope -> scope.asString().equals("java.lang")).orElse(true);
     }
 
     /** The written type of where a value goes: the variable it initialises or is assigned to, or the method returning it. */
-    static Optional<Type> ofDestination(Expression value) {
+    public static Optional<Type> ofDestination(Expression value) {
         Node child = value;
         Node parent = value.getParentNode().orElse(null);
         while (parent instanceof EnclosedExpr) {
@@ -62,7 +62,7 @@ final class Declarations {
     }
 
     /** The method a return belongs to; none inside a lambda (whose return type is not written) or an initialiser. */
-    static Optional<MethodDeclaration> enclosingMethod(ReturnStmt statement) {
+    public static Optional<MethodDeclaration> enclosingMethod(ReturnStmt statement) {
         for (Node at = statement; at != null; at = at.getParentNode().orElse(null)) {
             if (at instanceof LambdaExpr || at instanceof InitializerDeclaration) {
                 return Optional.empty();
@@ -75,7 +75,7 @@ final class Declarations {
     }
 
     /** The written type of a simple name or {@code this.name}: the nearest local, parameter or field of that name. */
-    static Optional<Type> ofVariable(Expression target) {
+    public static Optional<Type> ofVariable(Expression target) {
         return declarationOf(target).map(declaration -> declaration instanceof VariableDeclarator variable
                 ? variable.getType() : ((Parameter) declaration).getType());
     }
@@ -84,7 +84,7 @@ final class Declarations {
      * Where a simple name or {@code this.name} is declared: the nearest local variable, parameter,
      * field or record component of that name ({@link VariableDeclarator} or {@link Parameter}).
      */
-    static Optional<Node> declarationOf(Expression target) {
+    public static Optional<Node> declarationOf(Expression target) {
         boolean field = target instanceof FieldAccessExpr access && access.getScope() instanceof ThisExpr;
         if (!(target instanceof NameExpr) && !field) {
             return Optional.empty();

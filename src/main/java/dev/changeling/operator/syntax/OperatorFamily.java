@@ -1,5 +1,7 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
+import dev.changeling.operator.Operators;
+import dev.changeling.operator.Proposals;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.BINARY_OR;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.DIVIDE;
 import static com.github.javaparser.ast.expr.BinaryExpr.Operator.LEFT_SHIFT;
@@ -24,7 +26,7 @@ import java.util.Set;
  * Binary operators that stand in for one another: each member is swapped for every other, plain or
  * compound ({@code +=}), except where both give the same value for the right operand written.
  */
-final class OperatorFamily {
+public final class OperatorFamily {
 
     /** Operators that agree when the right operand is this integer literal: {@code x + 0} is {@code x - 0}. */
     private static final Map<Long, List<Set<BinaryExpr.Operator>>> AGREE_ON = Map.of(
@@ -33,17 +35,17 @@ final class OperatorFamily {
 
     private final List<BinaryExpr.Operator> members;
 
-    OperatorFamily(BinaryExpr.Operator... members) {
+    public OperatorFamily(BinaryExpr.Operator... members) {
         this.members = List.of(members);
     }
 
     /** Whether {@code node} is a binary expression or compound assignment with an operator of this family. */
-    boolean applies(Node node) {
+    public boolean applies(Node node) {
         return memberAt(node).isPresent();
     }
 
     /** Proposes each other member in place of the one at {@code node}. */
-    void swapEach(Node node, Proposals out) {
+    public void swapEach(Node node, Proposals out) {
         BinaryExpr.Operator from = memberAt(node).orElseThrow();
         OptionalLong right = IntegerLiterals.value(rightOperand(node));
         for (BinaryExpr.Operator to : members) {

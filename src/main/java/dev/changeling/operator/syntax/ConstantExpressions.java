@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.expr.BinaryExpr;
 import com.github.javaparser.ast.expr.CastExpr;

@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.ArrayAccessExpr;
@@ -15,17 +15,17 @@ import com.github.javaparser.ast.expr.MethodCallExpr;
 import com.github.javaparser.ast.expr.UnaryExpr;
 
 /** Java operator precedence, higher binds tighter, so that rewrites keep the tree they mean. */
-final class Precedence {
+public final class Precedence {
 
-    static final int ASSIGNMENT = 1;
-    static final int CONDITIONAL = 2;
-    static final int UNARY = 13;
-    static final int PRIMARY = 14;
+    public static final int ASSIGNMENT = 1;
+    public static final int CONDITIONAL = 2;
+    public static final int UNARY = 13;
+    public static final int PRIMARY = 14;
 
     private Precedence() {
     }
 
-    static int of(BinaryExpr.Operator operator) {
+    public static int of(BinaryExpr.Operator operator) {
         return switch (operator) {
             case OR -> 3;
             case AND -> 4;
@@ -40,7 +40,7 @@ final class Precedence {
         };
     }
 
-    static int of(Expression expression) {
+    public static int of(Expression expression) {
         if (expression instanceof BinaryExpr binary) {
             return of(binary.getOperator());
         }
@@ -60,7 +60,7 @@ final class Precedence {
     }
 
     /** The expression inside any number of parentheses. */
-    static Expression unparenthesised(Expression expression) {
+    public static Expression unparenthesised(Expression expression) {
         Expression bare = expression;
         while (bare instanceof EnclosedExpr enclosed) {
             bare = enclosed.getInner();
@@ -72,7 +72,7 @@ final class Precedence {
      * Whether an expression of precedence {@code level}, put where {@code node} stands, needs
      * parentheses to keep its parent's meaning.
      */
-    static boolean needsParenthesesAt(Node node, int level) {
+    public static boolean needsParenthesesAt(Node node, int level) {
         Node parent = node.getParentNode().orElse(null);
         if (parent instanceof BinaryExpr binary) {
             int parentLevel = of(binary.getOperator());

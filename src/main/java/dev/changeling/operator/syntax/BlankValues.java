@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.CompilationUnit;
 import com.github.javaparser.ast.ImportDeclaration;
@@ -17,7 +17,7 @@ import java.util.List;
 import java.util.Map;
 
 /** The blank values of a declared type, written so that they compile wherever that type is expected. */
-final class BlankValues {
+public final class BlankValues {
 
     private static final Map<String, String> JAVA_UTIL_EMPTY = Map.of(
             "List", "java.util.Collections.emptyList()",
@@ -35,7 +35,7 @@ final class BlankValues {
     }
 
     /** Blank values for {@code type}; none for {@code void}. */
-    static List<String> of(Type type) {
+    public static List<String> of(Type type) {
         if (type instanceof VoidType) {
             return List.of();
         }
@@ -63,7 +63,7 @@ final class BlankValues {
     }
 
     /** Whether {@code value} already is {@code blank}, so that returning the blank would change nothing. */
-    static boolean alreadyIs(Expression value, String blank) {
+    public static boolean alreadyIs(Expression value, String blank) {
         Expression bare = Precedence.unparenthesised(value);
         return switch (blank) {
             case "0", "0L" -> IntegerLiterals.isZero(bare);

@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.body.FieldDeclaration;
@@ -14,12 +14,12 @@ import com.github.javaparser.ast.stmt.Statement;
  * declared without initializer, a final field or a record component. Removing one could leave a
  * variable unassigned.
  */
-final class DefiniteAssignment {
+public final class DefiniteAssignment {
 
     private DefiniteAssignment() {
     }
 
-    static boolean dependsOn(Statement statement) {
+    public static boolean dependsOn(Statement statement) {
         return statement.findAll(AssignExpr.class).stream().anyMatch(DefiniteAssignment::mayBeFirst);
     }
 

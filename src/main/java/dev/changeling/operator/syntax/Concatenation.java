@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.expr.AssignExpr;
@@ -13,13 +13,13 @@ import com.github.javaparser.ast.expr.TextBlockLiteralExpr;
  * Recognises string concatenation where the source shows it: a {@code +} or {@code +=} with an
  * operand that is evidently a string, or whose result goes to a place declared {@code String}.
  */
-final class Concatenation {
+public final class Concatenation {
 
     private Concatenation() {
     }
 
     /** Whether {@code node} is a {@code +} or {@code +=} that evidently joins strings. */
-    static boolean evident(Node node) {
+    public static boolean evident(Node node) {
         if (node instanceof BinaryExpr binary && binary.getOperator() == BinaryExpr.Operator.PLUS) {
             return stringValued(binary.getLeft()) || stringValued(binary.getRight())
                     || Declarations.ofDestination(binary).filter(Declarations::isString).isPresent();

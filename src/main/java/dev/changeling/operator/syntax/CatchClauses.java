@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.Node;
 import com.github.javaparser.ast.body.BodyDeclaration;
@@ -17,7 +17,7 @@ import java.util.stream.Stream;
  * Guards against removing the only code in a try block that may throw what a catch clause names:
  * javac rejects a catch of a checked exception that nothing in the try block can throw.
  */
-final class CatchClauses {
+public final class CatchClauses {
 
     /** Catch types that are legal whatever the try block holds. */
     private static final Set<String> ALWAYS_LEGAL = Set.of("Exception", "Throwable", "RuntimeException", "Error");
@@ -26,7 +26,7 @@ final class CatchClauses {
     }
 
     /** Whether taking {@code host} away could leave a catch clause of an enclosing try with nothing to catch. */
-    static boolean wouldOrphan(Node host) {
+    public static boolean wouldOrphan(Node host) {
         for (Node child = host, at = host.getParentNode().orElse(null); at != null;
                 child = at, at = at.getParentNode().orElse(null)) {
             if (at instanceof LambdaExpr || at instanceof BodyDeclaration<?>) {

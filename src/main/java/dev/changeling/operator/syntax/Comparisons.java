@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.ast.expr.ArrayCreationExpr;
 import com.github.javaparser.ast.expr.BinaryExpr;
@@ -13,9 +13,9 @@ import com.github.javaparser.ast.expr.ThisExpr;
 import java.util.List;
 
 /** What the relational operators share: the six comparisons, and which of them can be ordered. */
-final class Comparisons {
+public final class Comparisons {
 
-    static final List<BinaryExpr.Operator> RELATIONAL = List.of(
+    public static final List<BinaryExpr.Operator> RELATIONAL = List.of(
             BinaryExpr.Operator.LESS, BinaryExpr.Operator.LESS_EQUALS,
             BinaryExpr.Operator.GREATER, BinaryExpr.Operator.GREATER_EQUALS,
             BinaryExpr.Operator.EQUALS, BinaryExpr.Operator.NOT_EQUALS);
@@ -27,11 +27,11 @@ final class Comparisons {
      * Whether swapping in another comparison can compile: not when either side is evidently not a
      * number ({@code null}, a boolean or a string literal, {@code this}, a new object or array, a class literal).
      */
-    static boolean ordered(BinaryExpr comparison) {
+    public static boolean ordered(BinaryExpr comparison) {
         return !evidentlyUnordered(comparison.getLeft()) && !evidentlyUnordered(comparison.getRight());
     }
 
-    static boolean isEquality(BinaryExpr.Operator operator) {
+    public static boolean isEquality(BinaryExpr.Operator operator) {
         return operator == BinaryExpr.Operator.EQUALS || operator == BinaryExpr.Operator.NOT_EQUALS;
     }
 

@@ -22,14 +22,16 @@ import java.util.regex.Pattern;
  * Finds switches that are a whole loop condition where one side is a constant. javac judges
  * reachability by constant loop conditions ({@code while (false)} is an error, code after
  * {@code while (true)} is unreachable), and a switch is never constant, so the schema would accept
- * a mutant its own file does not, or reject the original.
+ * a mutant its own file does not, or reject the original. (Operators already avoid making a
+ * loop condition constant, {@code operator.syntax.LoopConditions}; this catches the conditions that
+ * are constant on one side before any mutant.)
  */
-final class LoopConditions {
+final class LoopConditionSwitches {
 
     private static final Pattern NUMBER = Pattern.compile("(?<![\\w$])\\d[\\w.]*");
     private static final Pattern NAME = Pattern.compile("[\\p{L}_$][\\p{L}\\p{N}_$]*");
 
-    private LoopConditions() {
+    private LoopConditionSwitches() {
     }
 
     /** The points of such switches, each with the reason. */

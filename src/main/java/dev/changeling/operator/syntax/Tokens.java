@@ -1,10 +1,10 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import dev.changeling.source.Span;
 import java.util.Set;
 
 /** Keeps a replacement from fusing with its neighbours into other tokens ({@code a+-b} with {@code -} for {@code +}). */
-final class Tokens {
+public final class Tokens {
 
     private static final Set<String> TWO_CHARACTER_STARTS = Set.of(
             "++", "--", "&&", "||", "==", "!=", "<=", ">=", "<<", ">>", "+=", "-=", "*=", "/=", "%=",
@@ -14,7 +14,7 @@ final class Tokens {
     }
 
     /** {@code replacement}, with a blank added on a side where it would otherwise run into the text beside {@code edit}. */
-    static String spliced(String text, Span edit, String replacement) {
+    public static String spliced(String text, Span edit, String replacement) {
         char before = edit.begin() > 0 ? text.charAt(edit.begin() - 1) : ' ';
         char after = edit.end() < text.length() ? text.charAt(edit.end()) : ' ';
         if (replacement.isEmpty()) {

@@ -1,4 +1,4 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
 import com.github.javaparser.JavaParser;
 import com.github.javaparser.ParserConfiguration;
@@ -15,13 +15,13 @@ import dev.changeling.source.Span;
  * reachability rules treat a constant loop condition specially, so such a mutant compiles (or fails)
  * differently alone than in its schema form, where the condition is never constant.
  */
-final class LoopConditions {
+public final class LoopConditions {
 
     private LoopConditions() {
     }
 
     /** Whether replacing {@code edit} inside {@code host} would leave a loop condition constant, or touches one that is. */
-    static boolean wouldBeConstant(SourceFile file, Node host, Span edit, String replacement) {
+    public static boolean wouldBeConstant(SourceFile file, Node host, Span edit, String replacement) {
         Expression condition = loopConditionAround(host);
         if (condition == null) {
             return false;
@@ -53,7 +53,7 @@ final class LoopConditions {
     }
 
     /** The condition of a while, do or for loop; null for other nodes and for a for loop without one. */
-    static Expression conditionOf(Node node) {
+    public static Expression conditionOf(Node node) {
         if (node instanceof WhileStmt loop) {
             return loop.getCondition();
         }

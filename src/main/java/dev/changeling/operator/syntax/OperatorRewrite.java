@@ -1,5 +1,6 @@
-package dev.changeling.operator;
+package dev.changeling.operator.syntax;
 
+import dev.changeling.operator.Proposals;
 import com.github.javaparser.ast.expr.AssignExpr;
 import com.github.javaparser.ast.expr.BinaryExpr;
 import com.github.javaparser.ast.expr.Expression;
@@ -47,7 +48,7 @@ public final class OperatorRewrite {
     }
 
     /** The span of the operator written between two operands, stepping over comments. */
-    static Span operatorToken(SourceFile file, Expression left, Expression right, String operator) {
+    public static Span operatorToken(SourceFile file, Expression left, Expression right, String operator) {
         String text = file.text();
         int at = file.spanOf(left).end();
         int limit = file.spanOf(right).begin();
