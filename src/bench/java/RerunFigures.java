@@ -1,3 +1,4 @@
+import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
@@ -13,7 +14,7 @@ public final class RerunFigures {
 
     public static void main(String[] args) {
         Path project = Path.of(args[0]).toAbsolutePath();
-        RunResults results = ResultsFile.read(ResultsFile.in(project));
+        RunResults results = ResultsFile.read(ProjectLayout.of(project).resultsFile());
         MutantResult survivor = results.mutants().stream().filter(mutant -> mutant.verdict() == Verdict.SURVIVED)
                 .filter(mutant -> args.length < 2 || mutant.id().startsWith(args[1]))
                 .findFirst().orElseThrow(() -> new IllegalStateException("no survivor to run again"));

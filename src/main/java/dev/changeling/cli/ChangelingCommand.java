@@ -1,6 +1,7 @@
 package dev.changeling.cli;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.HelpCommand;
 
 /** The root command; it only lists the subcommands. */
 @Command(name = "changeling",
@@ -14,6 +15,7 @@ import picocli.CommandLine.Command;
             TriageCommand.class,
             RunCommand.class,
             OperatorsCommand.class,
+            HelpCommand.class,
         })
 final class ChangelingCommand {
 }

@@ -6,18 +6,19 @@ import dev.changeling.UserError;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
-import dev.changeling.results.Verdict;
+import dev.changeling.project.ProjectLayout;
 import dev.changeling.review.EquivalentEntry;
+import dev.changeling.review.EquivalentRules;
 import dev.changeling.review.EquivalentsList;
 import dev.changeling.review.Staleness;
 import java.io.Console;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import java.util.stream.Collectors;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -38,14 +39,17 @@ import picocli.CommandLine.Model.CommandSpec;
         })
 final class EquivalentsCommand implements Callable<Integer> {
 
-    private static final int MIN_ID_LENGTH = 4;
+    private static final int MIN_ID_LENGTH = EquivalentRules.MIN_ID_LENGTH;
+
+    @Mixin
+    OutputOptions output = new OutputOptions();
 
     @Spec
     CommandSpec spec;
 
     @Override
     public Integer call() {
-        return show(new ProjectOptions().layout().root(), spec.commandLine().getOut());
+        return show(ProjectLayout.of(Path.of("")).root(), spec.commandLine().getOut());
     }
 
     @Command(name = "show", mixinStandardHelpOptions = true, description = "List every entry with its change and reason.")
@@ -78,7 +82,7 @@ final class EquivalentsCommand implements Callable<Integer> {
             Path root = project.layout().root();
             PrintWriter out = spec.commandLine().getOut();
             EquivalentsList list = EquivalentsList.load(root);
-            Staleness staleness = list.stale(ResultsFile.read(ResultsFile.in(root)));
+            Staleness staleness = list.stale(ResultsFile.read(project.layout().resultsFile()));
             report(out, root, list, staleness);
             if (!staleness.stale().isEmpty()) {
                 out.println("remove them with: changeling equivalents prune");
@@ -89,7 +93,8 @@ final class EquivalentsCommand implements Callable<Integer> {
     }
 
     @Command(name = "prune", mixinStandardHelpOptions = true,
-            description = "Show the stale entries, then remove them once confirmed.")
+            description = "Show the stale entries, then remove them once confirmed.",
+            exitCodeList = {"6:No terminal to confirm in, and --yes was not given."})
     static final class Prune implements Callable<Integer> {
 
         @Mixin
@@ -106,7 +111,7 @@ final class EquivalentsCommand implements Callable<Integer> {
             Path root = project.layout().root();
             PrintWriter out = spec.commandLine().getOut();
             EquivalentsList list = EquivalentsList.load(root);
-            Staleness staleness = list.stale(ResultsFile.read(ResultsFile.in(root)));
+            Staleness staleness = list.stale(ResultsFile.read(project.layout().resultsFile()));
             report(out, root, list, staleness);
             List<EquivalentEntry> stale = staleness.stale();
             if (stale.isEmpty()) {
@@ -141,37 +146,32 @@ final class EquivalentsCommand implements Callable<Integer> {
             description = "List a mutant of the last run as equivalent, with the reason (replaces an earlier entry for it).")
     static final class Add implements Callable<Integer> {
 
-        @Parameters(paramLabel = "ID", description = "The mutant's id from the last run (at least " + MIN_ID_LENGTH + " hex digits).")
+        @Parameters(index = "0", paramLabel = "ID", description = "The mutant's id from the last run (at least " + MIN_ID_LENGTH + " hex digits).")
         String id;
+
+        @Parameters(index = "1", arity = "0..1", paramLabel = "PATH", description = "The project folder (default: the current folder).")
+        Path folder;
 
         @Option(names = "--reason", required = true, paramLabel = "TEXT", description = "Why the tests cannot tell it from the original.")
         String reason;
 
-        @Option(names = "--project", paramLabel = "DIR", description = "The project folder (default: the current folder).")
-        Path projectFolder;
+        @Mixin
+        OutputOptions output = new OutputOptions();
 
         @Spec
         CommandSpec spec;
 
         @Override
         public Integer call() {
-            Path root = root(projectFolder);
-            RunResults run = ResultsFile.read(ResultsFile.in(root));
-            MutantResult mutant = single(id, run.mutants().stream().filter(m -> m.id().startsWith(lower(id))).toList(),
-                    MutantResult::id, "in the last run");
-            if (mutant.verdict() == Verdict.STILLBORN) {
-                throw new UserError("mutant " + mutant.shortId() + " does not compile, so it is not counted: there is nothing to list");
-            }
-            if (mutant.verdict().detected()) {
-                throw new UserError("mutant " + mutant.shortId() + " was " + mutant.verdict().word()
-                        + (mutant.killedBy() == null ? "" : " by " + mutant.killedBy())
-                        + ", so a test tells it from the original: it is not equivalent");
-            }
-            EquivalentsList list = EquivalentsList.load(root);
-            boolean replaced = list.put(EquivalentEntry.of(mutant, reason)).isPresent();
+            ProjectLayout layout = ProjectLayout.of(folder == null ? Path.of("") : folder);
+            RunResults run = ResultsFile.read(layout.resultsFile());
+            MutantResult mutant = EquivalentRules.mutantOf(id, run);
+            EquivalentEntry entry = EquivalentRules.entry(mutant, reason, run);
+            EquivalentsList list = EquivalentsList.load(layout.root());
+            boolean replaced = list.put(entry).isPresent();
             list.save();
             PrintWriter out = spec.commandLine().getOut();
-            out.println((replaced ? "updated " : "listed ") + mutant.shortId() + " as equivalent in " + shown(root, list));
+            out.println((replaced ? "updated " : "listed ") + mutant.shortId() + " as equivalent in " + shown(layout.root(), list));
             out.flush();
             return ExitCode.OK;
         }
@@ -180,23 +180,27 @@ final class EquivalentsCommand implements Callable<Integer> {
     @Command(name = "drop", mixinStandardHelpOptions = true, description = "Remove entries from the list by mutant id.")
     static final class Drop implements Callable<Integer> {
 
-        @Parameters(arity = "1..*", paramLabel = "ID", description = "Ids of listed mutants (at least " + MIN_ID_LENGTH + " hex digits).")
-        List<String> ids = new ArrayList<>();
+        @Parameters(arity = "1..*", paramLabel = "ID",
+                description = {"Ids of listed mutants (at least " + MIN_ID_LENGTH + " hex digits),",
+                    "optionally followed by the project folder (default: the current folder)."})
+        List<String> arguments = new ArrayList<>();
 
-        @Option(names = "--project", paramLabel = "DIR", description = "The project folder (default: the current folder).")
-        Path projectFolder;
+        @Mixin
+        OutputOptions output = new OutputOptions();
 
         @Spec
         CommandSpec spec;
 
         @Override
         public Integer call() {
-            Path root = root(projectFolder);
+            String last = arguments.get(arguments.size() - 1);
+            boolean folderGiven = arguments.size() > 1 && Files.isDirectory(Path.of(last));
+            Path root = ProjectLayout.of(folderGiven ? Path.of(last) : Path.of("")).root();
+            List<String> ids = folderGiven ? arguments.subList(0, arguments.size() - 1) : arguments;
             EquivalentsList list = EquivalentsList.load(root);
             List<String> fingerprints = new ArrayList<>();
             for (String id : ids) {
-                fingerprints.add(single(id, list.startingWith(lower(id)), EquivalentEntry::fingerprint, "in " + shown(root, list))
-                        .fingerprint());
+                fingerprints.add(EquivalentRules.entryOf(id, list, "in " + shown(root, list)).fingerprint());
             }
             list.removeAll(fingerprints);
             list.save();
@@ -242,39 +246,12 @@ final class EquivalentsCommand implements Callable<Integer> {
         }
     }
 
-    private static <T> T single(String id, List<T> matches, java.util.function.Function<T, String> fingerprint, String where) {
-        if (id.length() < MIN_ID_LENGTH || !id.matches("[0-9a-fA-F]+")) {
-            throw new UserError("'" + id + "' is not a mutant id; give at least " + MIN_ID_LENGTH + " of its hex digits");
-        }
-        if (matches.isEmpty()) {
-            throw new UserError("no mutant " + id + " " + where + "; copy the id from 'changeling equivalents' or the run's report");
-        }
-        if (matches.size() > 1) {
-            throw new UserError("id " + id + " fits " + matches.size() + " mutants ("
-                    + matches.stream().map(m -> fingerprint.apply(m).substring(0, 12)).collect(Collectors.joining(", "))
-                    + "); give more digits");
-        }
-        return matches.get(0);
-    }
-
-    private static Path root(Path projectFolder) {
-        ProjectOptions options = new ProjectOptions();
-        if (projectFolder != null) {
-            options.paths = List.of(projectFolder);
-        }
-        return options.layout().root();
-    }
-
     private static String shown(Path root, EquivalentsList list) {
         return Text.relative(root, list.file());
     }
 
     private static String oneLine(String text) {
         return text.replace("\n", "\\n").replace("\r", "\\r");
-    }
-
-    private static String lower(String id) {
-        return id.toLowerCase(Locale.ROOT);
     }
 
     private static String count(int n, String one, String many) {

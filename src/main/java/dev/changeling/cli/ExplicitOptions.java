@@ -6,6 +6,7 @@ import dev.changeling.project.ExplicitProject;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import picocli.CommandLine.Option;
 
 /** For a project that Maven does not build: its folders and classpath named by hand. */
@@ -27,15 +28,20 @@ final class ExplicitOptions {
             description = "The test classpath's jars and folders (':'-separated or repeated), for a project Maven does not build.")
     List<Path> classpath = new ArrayList<>();
 
-    DiscoveryOptions applyTo(DiscoveryOptions options) {
+    /** The folders given by hand, or none when the project is found through Maven. */
+    Optional<ExplicitProject> project() {
         boolean any = !sourceRoots.isEmpty() || classes != null || testClasses != null || !classpath.isEmpty();
         if (!any) {
-            return options;
+            return Optional.empty();
         }
         if (sourceRoots.isEmpty() || classes == null || testClasses == null) {
             throw new UserError("a project Maven does not build needs --source-root, --classes and --test-classes"
                     + " (and --classpath for its libraries); give all of them, or run in a folder with pom.xml");
         }
-        return options.withExplicitProject(new ExplicitProject(sourceRoots, testSourceRoots, classes, testClasses, classpath));
+        return Optional.of(new ExplicitProject(sourceRoots, testSourceRoots, classes, testClasses, classpath));
+    }
+
+    DiscoveryOptions applyTo(DiscoveryOptions options) {
+        return project().map(options::withExplicitProject).orElse(options);
     }
 }

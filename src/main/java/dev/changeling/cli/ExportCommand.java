@@ -33,7 +33,7 @@ import picocli.CommandLine.Spec;
         description = {
             "Write the survivors of the last run as attachments for the review: Markdown for a comment,"
                     + " SARIF 2.1.0 for code-scanning tools, one patch per survivor. Reads the results file"
-                    + " (" + ResultsFile.RELATIVE_PATH + "); nothing is compiled or run.",
+                    + " (results.json in the build folder's changeling/, target/changeling/ by default); nothing is compiled or run.",
             "A survivor stays unresolved until triage settles it: marked equivalent, or marked fixed.",
             "As a CI gate, --fail-on-survivors and --min-score turn what is left into an exit code;"
                     + " they refuse results of an interrupted run."},
@@ -85,7 +85,7 @@ final class ExportCommand implements Callable<Integer> {
                     "--min-score takes a score from 0 to 1, such as 0.8, not " + minScore.toPlainString());
         }
         ProjectLayout layout = project.layout();
-        Path resultsFile = ResultsFile.in(layout.root());
+        Path resultsFile = layout.resultsFile();
         RunResults all = ResultsFile.read(resultsFile);
         RunResults results = all.limitedTo(layout.root(), project.limits(layout));
         boolean gating = failOnSurvivors || minScore != null;

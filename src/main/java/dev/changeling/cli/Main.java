@@ -3,7 +3,11 @@ package dev.changeling.cli;
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import java.io.PrintWriter;
+import java.util.Comparator;
+import java.util.Map;
+import java.util.TreeMap;
 import picocli.CommandLine;
+import picocli.CommandLine.Model.UsageMessageSpec;
 
 /** The {@code changeling} command: picocli parses, one subcommand class does the work. */
 public final class Main {
@@ -20,12 +24,29 @@ public final class Main {
         CommandLine line = new CommandLine(new ChangelingCommand());
         line.setOut(out);
         line.setErr(err);
-        line.setExecutionExceptionHandler((exception, commandLine, parsed) -> report(exception, commandLine, err, args));
+        line.setExecutionExceptionHandler((exception, commandLine, parsed) -> report(exception, commandLine, err));
+        listExitCodes(line);
         return line.execute(args);
     }
 
-    private static int report(Exception exception, CommandLine commandLine, PrintWriter err, String... args) {
-        boolean verbose = java.util.Arrays.asList(args).contains("--verbose");
+    /**
+     * Every command's help ends with its exit codes: those the command declares, and the two any command
+     * can end with (docs/exit-codes.md lists them all).
+     */
+    private static void listExitCodes(CommandLine line) {
+        UsageMessageSpec usage = line.getCommandSpec().usageMessage();
+        Map<String, String> codes = new TreeMap<>(Comparator.comparingInt((String code) -> Integer.parseInt(code.strip())));
+        usage.exitCodeList().forEach((code, meaning) -> codes.put(code.strip(), meaning));
+        codes.putIfAbsent("0", "Done.");
+        codes.putIfAbsent("1", "A mistake to fix (a path, a file, the build); the message says what and where.");
+        codes.putIfAbsent("2", "The command line is wrong.");
+        codes.putIfAbsent("70", "A fault inside the tool: run again with --verbose and report it.");
+        usage.exitCodeListHeading("%nExit codes:%n").exitCodeList(codes);
+        line.getSubcommands().values().forEach(Main::listExitCodes);
+    }
+
+    private static int report(Exception exception, CommandLine commandLine, PrintWriter err) {
+        boolean verbose = commandLine.getParseResult() != null && commandLine.getParseResult().hasMatchedOption("--verbose");
         if (exception instanceof UserError user) {
             err.println("changeling: " + user.getMessage());
             if (verbose) {

@@ -34,9 +34,6 @@ final class MutantsCommand implements Callable<Integer> {
     @Option(names = "--diffs", description = "Print every mutant as a unified diff.")
     boolean diffs;
 
-    @Option(names = "--plain", description = "No colours, even on a terminal.")
-    boolean plain;
-
     @Spec
     CommandSpec spec;
 
@@ -49,7 +46,7 @@ final class MutantsCommand implements Callable<Integer> {
         for (ParseProblem problem : chosen.generated().problems()) {
             err.println("skipped " + problem);
         }
-        Style style = plain ? Style.plain() : Style.forStandardOutput();
+        Style style = project.style();
         if (diffs) {
             for (Mutant mutant : chosen.mutants()) {
                 String text = chosen.generated().files().get(mutant.file()).text();

@@ -8,6 +8,7 @@ import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -16,6 +17,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "operators", mixinStandardHelpOptions = true,
         description = "List the mutation operators: id, whether it is used by default, and what it changes.")
 final class OperatorsCommand implements Callable<Integer> {
+
+    @Mixin
+    OutputOptions output = new OutputOptions();
 
     @Option(names = "--details", paramLabel = "ID",
             description = "Print the whole catalogue entry of one operator: what it models, what it skips, worked examples.")

@@ -1,32 +1,35 @@
 package dev.changeling.cli;
 
-import dev.changeling.UserError;
+import dev.changeling.project.ExplicitProject;
 import dev.changeling.project.ProjectLayout;
-import java.nio.file.Files;
+import dev.changeling.terminal.Style;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
 
-/** The project a command works on: the folder named, or the nearest folder upward with a pom.xml. */
+/**
+ * What every command that works on a project takes: the project (a folder, or files and folders inside it)
+ * as positional paths, and the output options.
+ */
 final class ProjectOptions {
 
     @Parameters(arity = "0..*", paramLabel = "PATH",
             description = "The project folder, or files and folders inside it to limit the work to (default: the current folder).")
     List<Path> paths = new ArrayList<>();
 
+    @Mixin
+    OutputOptions output = new OutputOptions();
+
+    /** The project's layout as every command works it out ({@link ProjectLayout#locate}). */
     ProjectLayout layout() {
-        Path first = paths.isEmpty() ? Path.of("") : paths.get(0);
-        Path start = first.toAbsolutePath().normalize();
-        if (!Files.exists(start)) {
-            throw new UserError(first + ": no such file or folder");
-        }
-        for (Path at = Files.isDirectory(start) ? start : start.getParent(); at != null; at = at.getParent()) {
-            if (Files.isRegularFile(at.resolve("pom.xml"))) {
-                return ProjectLayout.maven(at);
-            }
-        }
-        return ProjectLayout.plain(Files.isDirectory(start) ? start : start.getParent());
+        return layout(Optional.empty());
+    }
+
+    ProjectLayout layout(Optional<ExplicitProject> explicit) {
+        return ProjectLayout.locate(paths.isEmpty() ? Path.of("") : paths.get(0), explicit);
     }
 
     /** The paths that limit the work, or none when the whole project is meant. */
@@ -35,5 +38,13 @@ final class ProjectOptions {
                 .map(path -> path.toAbsolutePath().normalize())
                 .filter(path -> !path.equals(layout.root()))
                 .toList();
+    }
+
+    Style style() {
+        return output.style();
+    }
+
+    boolean plain() {
+        return output.plain;
     }
 }

@@ -32,7 +32,13 @@ import picocli.CommandLine.Model.CommandSpec;
 /** Runs the project's tests against every mutant in scope and prints the score and the survivors. */
 @Command(name = "run", mixinStandardHelpOptions = true,
         description = {"Compile the mutants, run the project's tests against each, and report what the tests missed.",
-            "Results go to target/changeling/results.json, which triage and export read."})
+            "Results go to results.json in the build folder's changeling/ (target/changeling/ by default), which triage and export read."},
+        exitCodeList = {
+            "0:The run completed and --min-score, if given, was met.",
+            "1:A mistake to fix: no project, a build that fails, an unreadable file, a bad change scope.",
+            "3:The mutation score is under --min-score.",
+            "5:The project's tests fail without any mutant.",
+            "130:Stopped by Ctrl-C; the verdicts of the mutants that finished are in the results file."})
 final class RunCommand implements Callable<Integer> {
 
     @Mixin
@@ -86,12 +92,6 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--maven-arg", paramLabel = "ARG", description = "Pass an argument to every mvn call, e.g. -o or -s settings.xml (repeatable).")
     List<String> mavenArguments = new ArrayList<>();
 
-    @Option(names = "--plain", description = "No colours and no progress bar, even on a terminal.")
-    boolean plain;
-
-    @Option(names = "--verbose", description = "Stack traces for internal errors.")
-    boolean verbose;
-
     @Spec
     CommandSpec spec;
 
@@ -100,7 +100,7 @@ final class RunCommand implements Callable<Integer> {
         if (minScore != null && !(minScore >= 0 && minScore <= 1)) {
             throw new UserError("--min-score takes a score from 0 to 1, such as 0.8, not " + minScore);
         }
-        ProjectLayout layout = project.layout();
+        ProjectLayout layout = project.layout(explicit.project());
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         Deadlines deadlines;
@@ -116,10 +116,10 @@ final class RunCommand implements Callable<Integer> {
         RunRequest request = new RunRequest(layout.root(), project.limits(layout), mutants.selection(point -> true),
                 change.scope(layout.root()), explicit.applyTo(DiscoveryOptions.defaults().withMavenArguments(mavenArguments)),
                 workerCount, deadlines, Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
-        Style style = plain ? Style.plain() : Style.forStandardOutput();
-        ProgressListener listener = new ProgressListener(err, plain);
+        Style style = project.style();
+        ProgressListener listener = new ProgressListener(err, project.plain());
         MutationRun run = new MutationRun(request, listener);
-        Path resultsFile = ResultsFile.in(layout.root());
+        Path resultsFile = layout.resultsFile();
         CountDownLatch written = new CountDownLatch(1);
         Thread onInterrupt = new Thread(() -> {
             run.stop();

@@ -24,7 +24,7 @@ import picocli.CommandLine.Spec;
 /** Walks the unresolved survivors of the last run one at a time and records a decision for each. */
 @Command(name = "triage", mixinStandardHelpOptions = true,
         description = {
-            "Go through the unresolved survivors of the last run (" + ResultsFile.RELATIVE_PATH + ") one at a time:"
+            "Go through the unresolved survivors of the last run (its results file, target/changeling/results.json by default) one at a time:"
                     + " see the change and the tests that missed it, then decide. Answer with a letter and Enter"
                     + " (? lists them): e equivalent, t needs a test, f fixed (runs it again first), s skip, b back,"
                     + " c more context, q quit.",
@@ -52,9 +52,6 @@ final class TriageCommand implements Callable<Integer> {
             description = "Start at the first unresolved survivor and stop at every one, including those already marked needs a test.")
     boolean revisit;
 
-    @Option(names = "--plain", description = "No colours, even on a terminal.")
-    boolean plain;
-
     @Spec
     CommandSpec spec;
 
@@ -72,12 +69,12 @@ final class TriageCommand implements Callable<Integer> {
                     ExitCode.NO_TERMINAL);
         }
         ProjectLayout layout = project.layout();
-        RunResults results = ResultsFile.read(ResultsFile.in(layout.root())).limitedTo(layout.root(), project.limits(layout));
+        RunResults results = ResultsFile.read(layout.resultsFile()).limitedTo(layout.root(), project.limits(layout));
         PrintWriter out = spec.commandLine().getOut();
         Answers answers = scripted
                 ? Answers.fromLines(new InputStreamReader(System.in, StandardCharsets.UTF_8), out)
                 : Answers.fromConsole(console, out);
-        Style style = plain ? Style.plain() : Style.forStandardOutput();
+        Style style = project.style();
         Thread onCtrlC = scripted ? null : new Thread(() -> {
             System.err.println();
             System.err.println("changeling: stopped; every decision made so far is saved");

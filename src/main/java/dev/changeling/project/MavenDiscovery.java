@@ -25,7 +25,7 @@ final class MavenDiscovery {
      *
      * @param build how the module was built, in words for the user
      */
-    record Compiled(ProjectLayout layout, Path classes, Path testClasses, List<Path> dependencies, SuiteConfiguration suite,
+    record Compiled(Path classes, Path testClasses, List<Path> dependencies, SuiteConfiguration suite,
                     String build) {
     }
 
@@ -37,11 +37,11 @@ final class MavenDiscovery {
      * that are not installed, runs it again from the outermost aggregator with {@code -pl module -am}, and
      * remembers that for the next run.
      */
-    static Compiled compile(Path given, Path module, Maven maven) {
+    static Compiled compile(Path module, Maven maven) {
         PomFile pom = PomFile.read(module.resolve("pom.xml"));
         if (pom.isAggregator()) {
-            String first = given.resolve(pom.modules().get(0)).toString().replace('\\', '/');
-            throw new UserError(given + ": this pom.xml only groups the modules " + String.join(", ", pom.modules())
+            String first = module.resolve(pom.modules().get(0)).toString().replace('\\', '/');
+            throw new UserError(module + ": this pom.xml only groups the modules " + String.join(", ", pom.modules())
                     + "; give one module folder, e.g. `changeling run " + first + "`");
         }
         PomFile.BuildFolders folders = pom.folders();
@@ -140,9 +140,8 @@ final class MavenDiscovery {
 
     private static Compiled compiled(Path module, PomFile.BuildFolders folders, Path classpathFile, EffectivePom pom, Maven maven,
                                      String how) {
-        ProjectLayout layout = new ProjectLayout(module, List.of(folders.sources()), List.of(folders.testSources()), folders.directory());
         SuiteConfiguration suite = SurefireReader.read(pom, module, folders.testClasses(), maven.userProperties());
-        return new Compiled(layout, folders.classes(), folders.testClasses(), read(classpathFile), suite, how);
+        return new Compiled(folders.classes(), folders.testClasses(), read(classpathFile), suite, how);
     }
 
     private static Maven.Run inReactor(Reactor reactor, List<String> build, Path log, Maven maven) {

@@ -16,34 +16,37 @@ public final class ProjectDiscovery {
     private ProjectDiscovery() {
     }
 
+    /** Discovers the project a folder belongs to, its layout located as every command locates it. */
+    public static DiscoveredProject discover(Path folder, DiscoveryOptions options) {
+        return discover(ProjectLayout.locate(folder, options.explicitProject()), options);
+    }
+
     /**
-     * Discovers the project in a folder.
+     * Discovers the project of a layout.
      *
      * @throws UserError when the folder is no project, the build fails (the message names mvn's log and the
      *                   command to run it again), or the tests cannot be run on the JUnit Platform
      */
-    public static DiscoveredProject discover(Path folder, DiscoveryOptions options) {
-        Path root = folder.toAbsolutePath().normalize();
-        if (!Files.isDirectory(root)) {
-            throw new UserError(folder + ": no such folder; give the project folder (the one with pom.xml)");
-        }
+    public static DiscoveredProject discover(ProjectLayout layout, DiscoveryOptions options) {
+        Path root = layout.root();
         LazyMaven maven = new LazyMaven(options);
         if (options.explicitProject().isPresent()) {
-            return explicit(root, options.explicitProject().get(), maven);
+            return explicit(layout, options.explicitProject().get(), maven);
         }
         if (!Files.isRegularFile(root.resolve("pom.xml"))) {
-            throw new UserError(folder + ": no pom.xml here; give a Maven project folder, or name the source folders,"
+            throw new UserError(root + ": no pom.xml here; give a Maven project folder, or name the source folders,"
                     + " classes, test classes and classpath by hand (--source-root, --classes, --test-classes, --classpath)");
         }
-        MavenDiscovery.Compiled compiled = MavenDiscovery.compile(folder, root, maven.get());
+        MavenDiscovery.Compiled compiled = MavenDiscovery.compile(root, maven.get());
         List<Path> compileClasspath = new ArrayList<>();
         compileClasspath.add(compiled.classes());
         compileClasspath.addAll(compiled.dependencies());
-        return finish(compiled.layout(), compiled.classes(), compiled.testClasses(), compiled.dependencies(), compileClasspath,
+        return finish(layout, compiled.classes(), compiled.testClasses(), compiled.dependencies(), compileClasspath,
                 compiled.suite(), compiled.build(), maven);
     }
 
-    private static DiscoveredProject explicit(Path root, ExplicitProject given, LazyMaven maven) {
+    private static DiscoveredProject explicit(ProjectLayout layout, ExplicitProject given, LazyMaven maven) {
+        Path root = layout.root();
         given.sourceRoots().forEach(path -> mustExist(path, "source folder", true));
         given.testSourceRoots().forEach(path -> mustExist(path, "test source folder", true));
         Path classes = mustExist(given.classesDirectory(), "classes folder", true);
@@ -55,7 +58,6 @@ public final class ProjectDiscovery {
                 dependencies.add(absolute);
             }
         }
-        ProjectLayout layout = new ProjectLayout(root, absolute(given.sourceRoots()), absolute(given.testSourceRoots()), root.resolve("target"));
         List<Path> compileClasspath = new ArrayList<>();
         compileClasspath.add(classes);
         compileClasspath.addAll(dependencies);
@@ -81,10 +83,6 @@ public final class ProjectDiscovery {
             throw new UserError(given + ": no such " + (folder ? "folder" : "file or folder") + " (given as " + what + "); check the path");
         }
         return absolute;
-    }
-
-    private static List<Path> absolute(List<Path> paths) {
-        return paths.stream().map(path -> path.toAbsolutePath().normalize()).toList();
     }
 
     /** Finds mvn only when something needs it, so a project given by hand with a launcher never looks for one. */

@@ -7,10 +7,11 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Stream;
 
 /**
- * Where a project keeps its sources and build output. The Maven defaults unless options say otherwise.
+ * Where a project keeps its sources and build output, worked out once ({@link #locate}) and used by every command.
  *
  * @param root           the project directory; every reported path is relative to it
  * @param sourceRoots    main source folders
@@ -19,26 +20,48 @@ import java.util.stream.Stream;
  */
 public record ProjectLayout(Path root, List<Path> sourceRoots, List<Path> testRoots, Path buildDirectory) {
 
-    public static ProjectLayout maven(Path root) {
-        Path absolute = root.toAbsolutePath().normalize();
-        return new ProjectLayout(absolute,
-                List.of(absolute.resolve("src/main/java")),
-                List.of(absolute.resolve("src/test/java")),
-                absolute.resolve("target"));
-    }
-
-    /** A folder of sources that is not a Maven project: the folder is both root and source root. */
-    public static ProjectLayout plain(Path root) {
-        Path absolute = root.toAbsolutePath().normalize();
-        return new ProjectLayout(absolute, List.of(absolute), List.of(), absolute.resolve("target"));
-    }
-
-    /** A Maven project when the folder has a pom.xml, else a plain folder of sources. */
-    public static ProjectLayout of(Path root) {
-        if (!Files.isDirectory(root)) {
-            throw new UserError(root + ": no such folder; give the project folder (the one with pom.xml)");
+    /**
+     * The layout of the project a path belongs to, worked out once for every command: the folders given by
+     * hand when there are any; else, from the nearest folder upward with a pom.xml, the folders that pom
+     * names ({@code sourceDirectory}, {@code testSourceDirectory}, {@code directory}, Maven's defaults
+     * otherwise); else the folder itself as a plain folder of sources.
+     *
+     * @param given    a project folder, or a file or folder inside it
+     * @param explicit the folders given by hand, if any
+     * @throws UserError when the path does not exist or the pom cannot be read
+     */
+    public static ProjectLayout locate(Path given, Optional<ExplicitProject> explicit) {
+        Path start = given.toAbsolutePath().normalize();
+        if (!Files.exists(start)) {
+            throw new UserError(given + ": no such folder; give the project folder (the one with pom.xml), or a file or folder inside it");
         }
-        return Files.isRegularFile(root.resolve("pom.xml")) ? maven(root) : plain(root);
+        Path folder = Files.isDirectory(start) ? start : start.getParent();
+        Path root = folder;
+        for (Path at = folder; at != null; at = at.getParent()) {
+            if (Files.isRegularFile(at.resolve("pom.xml"))) {
+                root = at;
+                break;
+            }
+        }
+        if (explicit.isPresent()) {
+            return new ProjectLayout(root, absolute(explicit.get().sourceRoots()), absolute(explicit.get().testSourceRoots()),
+                    root.resolve("target"));
+        }
+        if (!Files.isRegularFile(root.resolve("pom.xml"))) {
+            return new ProjectLayout(root, List.of(root), List.of(), root.resolve("target"));
+        }
+        PomFile.BuildFolders folders = PomFile.read(root.resolve("pom.xml")).folders();
+        return new ProjectLayout(root, List.of(folders.sources()), List.of(folders.testSources()), folders.directory());
+    }
+
+    /** The layout of the project in a folder, with no folders given by hand. */
+    public static ProjectLayout of(Path folder) {
+        return locate(folder, Optional.empty());
+    }
+
+    /** The results file every view reads: {@code results.json} in the tool's folder under the build directory. */
+    public Path resultsFile() {
+        return changelingDirectory().resolve("results.json");
     }
 
     public Path changelingDirectory() {
@@ -52,6 +75,10 @@ public record ProjectLayout(Path root, List<Path> sourceRoots, List<Path> testRo
 
     public String relative(Path file) {
         return Text.relative(root, file.toAbsolutePath().normalize());
+    }
+
+    private static List<Path> absolute(List<Path> paths) {
+        return paths.stream().map(path -> path.toAbsolutePath().normalize()).toList();
     }
 
     private static Stream<Path> javaFilesBelow(Path folder) {

@@ -20,17 +20,12 @@ import java.util.Map;
 public final class ResultsFile {
 
     /** Where a project's results live, below its build directory. */
-    public static final String RELATIVE_PATH = "target/changeling/results.json";
 
     private static final ObjectMapper JSON = new ObjectMapper()
             .enable(SerializationFeature.INDENT_OUTPUT)
             .disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
 
     private ResultsFile() {
-    }
-
-    public static Path in(Path project) {
-        return project.resolve(RELATIVE_PATH);
     }
 
     public static void write(Path file, RunResults results) throws IOException {

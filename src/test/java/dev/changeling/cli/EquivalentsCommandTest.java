@@ -1,7 +1,9 @@
 package dev.changeling.cli;
 
+import dev.changeling.project.ProjectLayout;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.changeling.ExitCode;
@@ -10,6 +12,7 @@ import dev.changeling.mutant.Mutant;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
+import dev.changeling.results.TestRecord;
 import dev.changeling.results.Verdict;
 import dev.changeling.review.EquivalentsList;
 import dev.changeling.review.RunFixtures;
@@ -68,7 +71,7 @@ class EquivalentsCommandTest {
         Files.createDirectories(root.resolve(GATE).getParent());
         Files.writeString(root.resolve(GATE), text);
         generated = RunFixtures.generate(SourceFile.of(GATE, text));
-        ResultsFile.write(ResultsFile.in(root), RunFixtures.runOf(generated));
+        ResultsFile.write(ProjectLayout.of(root).resultsFile(), RunFixtures.runOf(generated));
     }
 
     Mutant mutantIn(String member, String replacement) {
@@ -101,7 +104,7 @@ class EquivalentsCommandTest {
         @Test
         void addedMutantIsListedWithItsChangeAndReason() {
             Mutant mutant = mutantIn("opens(int,int)", "<=");
-            Outcome added = run("equivalents", "add", id(mutant), "--reason", "gates never differ here", "--project", root.toString());
+            Outcome added = run("equivalents", "add", id(mutant), "--reason", "gates never differ here", root.toString());
             assertEquals(ExitCode.OK, added.exitCode(), added.err());
             assertEquals("listed " + mutant.shortId() + " as equivalent in .changeling/equivalent-mutants.txt\n", added.out());
 
@@ -122,21 +125,49 @@ class EquivalentsCommandTest {
                         ? result.withVerdict(Verdict.KILLED, "GateTest.floodsAtThreeHundred", "expected false", List.of(), 1.0)
                         : result);
             }
-            ResultsFile.write(ResultsFile.in(root), new RunResults(run.format(), true, run.settings(), run.tests(),
+            ResultsFile.write(ProjectLayout.of(root).resultsFile(), new RunResults(run.format(), true, run.settings(), run.tests(),
                     run.timings(), mutants, run.problems(), run.sourceHashes()));
 
-            Outcome added = run("equivalents", "add", id(mutant), "--reason", "surely", "--project", root.toString());
+            Outcome added = run("equivalents", "add", id(mutant), "--reason", "surely", root.toString());
             assertEquals(ExitCode.USER_ERROR, added.exitCode());
             assertEquals("changeling: mutant " + mutant.shortId() + " was killed by GateTest.floodsAtThreeHundred, "
                     + "so a test tells it from the original: it is not equivalent\n", added.err());
         }
 
         @Test
+        void killingTestIsNamedAsTheRunShowsIt() throws IOException {
+            RunResults run = ResultsFile.read(ProjectLayout.of(root).resultsFile());
+            Mutant mutant = generated.mutants().get(0);
+            String uniqueId = "[engine:junit-jupiter]/[class:GateTest]/[method:floodsAtThreeHundred()]";
+            List<MutantResult> mutants = run.mutants().stream()
+                    .map(result -> result.id().equals(mutant.fingerprint())
+                            ? result.withVerdict(Verdict.KILLED, uniqueId, "expected false", List.of(), 1.0) : result)
+                    .toList();
+            ResultsFile.write(ProjectLayout.of(root).resultsFile(), new RunResults(run.format(), true, run.settings(),
+                    List.of(new TestRecord(uniqueId, "GateTest.floodsAtThreeHundred()", 2.0)),
+                    run.timings(), mutants, run.problems(), run.sourceHashes()));
+
+            Outcome added = run("equivalents", "add", id(mutant), "--reason", "surely", root.toString());
+
+            assertEquals(ExitCode.USER_ERROR, added.exitCode());
+            assertTrue(added.err().contains("killed by GateTest.floodsAtThreeHundred(), so"), added.err());
+        }
+
+        @Test
+        void emptyReasonIsRefused() {
+            Outcome added = run("equivalents", "add", id(generated.mutants().get(0)), "--reason", " ", root.toString());
+
+            assertEquals(ExitCode.USER_ERROR, added.exitCode());
+            assertTrue(added.err().startsWith("changeling: --reason is empty"), added.err());
+            assertFalse(Files.exists(EquivalentsList.in(root)), "nothing is written");
+        }
+
+        @Test
         void unknownOrTooShortIdIsRefused() {
-            Outcome unknown = run("equivalents", "add", "ffffffff", "--reason", "x", "--project", root.toString());
+            Outcome unknown = run("equivalents", "add", "ffffffff", "--reason", "x", root.toString());
             assertEquals(ExitCode.USER_ERROR, unknown.exitCode());
             assertTrue(unknown.err().startsWith("changeling: no mutant ffffffff in the last run"), unknown.err());
-            Outcome tooShort = run("equivalents", "drop", "ab", "--project", root.toString());
+            Outcome tooShort = run("equivalents", "drop", "ab", root.toString());
             assertTrue(tooShort.err().contains("'ab' is not a mutant id"), tooShort.err());
         }
 
@@ -155,9 +186,9 @@ class EquivalentsCommandTest {
         @Test
         void dropRemovesByShortId() {
             Mutant mutant = mutantIn("opens(int,int)", "<=");
-            run("equivalents", "add", id(mutant), "--reason", "r", "--project", root.toString());
+            run("equivalents", "add", id(mutant), "--reason", "r", root.toString());
 
-            Outcome dropped = run("equivalents", "drop", mutant.shortId(), "--project", root.toString());
+            Outcome dropped = run("equivalents", "drop", mutant.shortId(), root.toString());
             assertEquals(ExitCode.OK, dropped.exitCode(), dropped.err());
             assertEquals("removed 1 entry from .changeling/equivalent-mutants.txt\n", dropped.out());
             assertTrue(EquivalentsList.load(root).entries().isEmpty());
@@ -174,8 +205,8 @@ class EquivalentsCommandTest {
         void listTwoThenChangeOne() throws IOException {
             judged = mutantIn("opens(int,int)", "<=");
             kept = mutantIn("floods(int)", ">=");
-            run("equivalents", "add", id(judged), "--reason", "gates never differ here", "--project", root.toString());
-            run("equivalents", "add", id(kept), "--reason", "300 is never reached", "--project", root.toString());
+            run("equivalents", "add", id(judged), "--reason", "gates never differ here", root.toString());
+            run("equivalents", "add", id(kept), "--reason", "300 is never reached", root.toString());
             writeGate(GATE_TEXT.replace("return inside == outside;", "return inside == outside + 1;"));
         }
 
@@ -216,7 +247,7 @@ class EquivalentsCommandTest {
 
         @Test
         void withoutResultsTheUserIsToldToRunFirst() throws IOException {
-            Files.delete(ResultsFile.in(root));
+            Files.delete(ProjectLayout.of(root).resultsFile());
             Outcome stale = run("equivalents", "stale", root.toString());
             assertEquals(ExitCode.USER_ERROR, stale.exitCode());
             assertTrue(stale.err().contains("no results yet"), stale.err());

@@ -1,5 +1,6 @@
 package dev.changeling.cli;
 
+import dev.changeling.project.ProjectLayout;
 import static dev.changeling.results.ResultsForTests.result;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -58,7 +59,7 @@ class ExportCommandTest {
     private void write(List<MutantResult> mutants, boolean complete) throws IOException {
         Files.writeString(project.resolve("pom.xml"), "<project/>\n");
         RunResults run = ResultsForTests.run(mutants, false, mutants.size());
-        ResultsFile.write(ResultsFile.in(project), new RunResults(run.format(), complete, run.settings(), run.tests(),
+        ResultsFile.write(ProjectLayout.of(project).resultsFile(), new RunResults(run.format(), complete, run.settings(), run.tests(),
                 run.timings(), run.mutants(), run.problems(), run.sourceHashes()));
     }
 
@@ -215,7 +216,7 @@ class ExportCommandTest {
             String help = stdout.toString();
             assertEquals(ExitCode.OK, exit);
             for (String expected : List.of("--markdown", "--sarif", "--patches", "--fail-on-survivors", "--min-score",
-                    "Exit codes:", "3   The mutation score is under --min-score", "4   Unresolved survivors remain")) {
+                    "Exit codes:", "3    The mutation score is under --min-score", "4    Unresolved survivors remain")) {
                 assertTrue(help.contains(expected), expected + " in\n" + help);
             }
         }

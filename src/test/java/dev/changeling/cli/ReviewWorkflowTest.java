@@ -1,5 +1,6 @@
 package dev.changeling.cli;
 
+import dev.changeling.project.ProjectLayout;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -69,7 +70,7 @@ class ReviewWorkflowTest {
         Output firstRun = binary(project, "run", "--changed-since", "HEAD~1", "--plain", project.toString());
         report("run --changed-since HEAD~1", firstRun);
         assertEquals(0, firstRun.exitCode(), firstRun.toString());
-        List<MutantResult> first = ResultsFile.read(ResultsFile.in(project)).mutants();
+        List<MutantResult> first = ResultsFile.read(ProjectLayout.of(project).resultsFile()).mutants();
         assertFalse(first.isEmpty(), "no mutants in scope");
         for (MutantResult mutant : first) {
             assertEquals(TARIFF, mutant.file(), mutant.shortId());
@@ -144,7 +145,7 @@ class ReviewWorkflowTest {
         Output secondRun = binary(project, "run", "--changed-since", "HEAD~1", "--plain", project.toString());
         report("run --changed-since HEAD~1 (again)", secondRun);
         assertEquals(0, secondRun.exitCode(), secondRun.toString());
-        RunResults again = ResultsFile.read(ResultsFile.in(project));
+        RunResults again = ResultsFile.read(ProjectLayout.of(project).resultsFile());
         assertEquals(first.stream().map(MutantResult::id).collect(Collectors.toSet()),
                 again.mutants().stream().map(MutantResult::id).collect(Collectors.toSet()), "the same mutants as before");
         MutantResult fixedNow = find(again, fixable.id());

@@ -80,7 +80,7 @@ class ProjectDiscoveryTest {
 
         @Test
         void layout_isTheMavenOne() {
-            assertEquals(ProjectLayout.maven(root), project.layout());
+            assertEquals(ProjectLayout.of(root), project.layout());
             assertEquals(project.classesDirectory(), root.resolve("target/classes"));
         }
 
@@ -193,7 +193,7 @@ class ProjectDiscoveryTest {
 
         @Test
         void theModuleIsTheProject() {
-            assertEquals(ProjectLayout.maven(root.resolve("b")), project.layout());
+            assertEquals(ProjectLayout.of(root.resolve("b")), project.layout());
             assertEquals(List.of("demo.b.B"), project.productionClasses());
         }
 

@@ -1,5 +1,6 @@
 package dev.changeling.run;
 
+import dev.changeling.project.ProjectLayout;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -97,7 +98,7 @@ class GreenhouseRunTest {
 
         @Test
         void stillWritesTheResultsAndTheReport() {
-            assertTrue(Files.isRegularFile(ResultsFile.in(run.project())));
+            assertTrue(Files.isRegularFile(ProjectLayout.of(run.project()).resultsFile()));
             assertTrue(run.out().contains("mutation score"), run::transcript);
         }
     }

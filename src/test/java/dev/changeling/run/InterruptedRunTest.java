@@ -1,5 +1,6 @@
 package dev.changeling.run;
 
+import dev.changeling.project.ProjectLayout;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -140,7 +141,7 @@ class InterruptedRunTest {
                     ExternalCommand.killWithChildren(tool.toHandle());
                 }
             }
-            results = ResultsFile.read(ResultsFile.in(project));
+            results = ResultsFile.read(ProjectLayout.of(project).resultsFile());
         }
 
         private void awaitLine(Process tool, BlockingQueue<String> lines, String start) throws InterruptedException {
@@ -173,7 +174,7 @@ class InterruptedRunTest {
         @Test
         void exitsWith130_andSaysWhereTheVerdictsAre() {
             assertEquals(ExitCode.INTERRUPTED, exitCode, stderr::toString);
-            assertTrue(stderr.contains("changeling: stopped; the verdicts so far are in " + ResultsFile.in(project)), stderr::toString);
+            assertTrue(stderr.contains("changeling: stopped; the verdicts so far are in " + ProjectLayout.of(project).resultsFile()), stderr::toString);
         }
 
         @Test

@@ -1,5 +1,6 @@
 package dev.changeling.run;
 
+import dev.changeling.project.ProjectLayout;
 import dev.changeling.cli.Main;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
@@ -36,7 +37,7 @@ record ToolRun(Path project, int exitCode, String out, String err, RunResults re
         long start = System.nanoTime();
         int exit = Main.execute(new PrintWriter(out, true), new PrintWriter(err, true), command.toArray(String[]::new));
         double seconds = (System.nanoTime() - start) / 1e9;
-        Path resultsFile = ResultsFile.in(project);
+        Path resultsFile = ProjectLayout.of(project).resultsFile();
         RunResults results = Files.isRegularFile(resultsFile) ? ResultsFile.read(resultsFile) : null;
         ToolRun run = new ToolRun(project, exit, out.toString(), err.toString(), results, before,
                 SampleProjects.fingerprint(project), seconds);

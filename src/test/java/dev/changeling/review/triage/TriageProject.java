@@ -1,5 +1,6 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.ResultsForTests;
@@ -90,7 +91,7 @@ public final class TriageProject {
         RunResults plain = ResultsForTests.run(mutants, false, mutants.size());
         RunResults results = new RunResults(plain.format(), true, plain.settings(), List.of(LIT_AT_DUSK, FLASHES_IN_FOG),
                 Map.of(), mutants, List.of(), Map.of(path, SourceHash.sha256(text)));
-        ResultsFile.write(ResultsFile.in(root), results);
+        ResultsFile.write(ProjectLayout.of(root).resultsFile(), results);
         return new TriageProject(root, results);
     }
 
