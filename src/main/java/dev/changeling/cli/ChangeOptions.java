@@ -1,7 +1,6 @@
 package dev.changeling.cli;
 
-import dev.changeling.UserError;
-import dev.changeling.scope.ChangeScope;
+import dev.changeling.scope.ChangeSpec;
 import java.nio.file.Path;
 import java.util.Optional;
 import picocli.CommandLine.Option;
@@ -19,17 +18,8 @@ final class ChangeOptions {
     @Option(names = "--diff-file", paramLabel = "FILE", description = "Only lines a unified diff file adds or changes (as review systems hand it over).")
     Path diffFile;
 
-    Optional<ChangeScope> scope(Path projectRoot) {
-        int given = (since != null ? 1 : 0) + (uncommitted ? 1 : 0) + (diffFile != null ? 1 : 0);
-        if (given > 1) {
-            throw new UserError("--changed-since, --uncommitted and --diff-file each name the change; give one of them");
-        }
-        if (since != null) {
-            return Optional.of(ChangeScope.sinceRevision(projectRoot, since));
-        }
-        if (uncommitted) {
-            return Optional.of(ChangeScope.uncommitted(projectRoot));
-        }
-        return diffFile == null ? Optional.empty() : Optional.of(ChangeScope.fromDiffFile(projectRoot, diffFile));
+    /** The change as typed; the core reads git or the file once it knows the project. */
+    Optional<ChangeSpec> spec() {
+        return ChangeSpec.of(since, uncommitted, diffFile);
     }
 }

@@ -4,12 +4,14 @@ import dev.changeling.ExitCode;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.MutantDiff;
 import dev.changeling.mutant.Selection;
+import dev.changeling.scope.ChangeScope;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.source.ParseProblem;
 import dev.changeling.terminal.DiffPrinter;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
 import java.util.function.Function;
@@ -31,6 +33,9 @@ final class MutantsCommand implements Callable<Integer> {
     @Mixin
     MutantOptions mutants = new MutantOptions();
 
+    @Mixin
+    ChangeOptions change = new ChangeOptions();
+
     @Option(names = "--diffs", description = "Print every mutant as a unified diff.")
     boolean diffs;
 
@@ -40,7 +45,10 @@ final class MutantsCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         ProjectLayout layout = project.layout();
-        Selection.Chosen chosen = mutants.selection(point -> true).choose(layout, project.limits(layout));
+        Optional<ChangeScope> scope = change.spec().map(spec -> spec.resolve(layout.root()));
+        Selection selection = mutants.selection(point -> true);
+        Selection.Chosen chosen = scope.map(changed -> selection.narrowedTo(changed.filter())).orElse(selection)
+                .choose(layout, project.limits(layout));
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         for (ParseProblem problem : chosen.generated().problems()) {
@@ -60,6 +68,7 @@ final class MutantsCommand implements Callable<Integer> {
         printCounts(out, "operator", chosen, mutant -> mutant.first().operator());
         printCounts(out, "file", chosen, Mutant::file);
         out.println(chosen.mutants().size() + " mutants"
+                + scope.map(changed -> " (" + changed.description() + ")").orElse("")
                 + (chosen.sampled() ? " (a sample of " + chosen.population() + ")" : "")
                 + " in " + chosen.generated().files().size() + " files"
                 + (chosen.generated().problems().isEmpty() ? "" : ", " + chosen.generated().problems().size() + " files skipped"));

@@ -109,12 +109,15 @@ final class RunCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new UserError("--time-factor/--time-extra: " + e.getMessage());
         }
+        if (workerHeap != null && !workerHeap.matches("[0-9]+[kKmMgGtT]?")) {
+            throw new UserError("--worker-heap takes a size such as 512m or 2g, not '" + workerHeap + "'", ExitCode.USAGE);
+        }
         int workerCount = workers == null ? Runtime.getRuntime().availableProcessors() : workers;
         if (workerCount < 1) {
             throw new UserError("--workers takes a positive number, not " + workerCount);
         }
-        RunRequest request = new RunRequest(layout.root(), project.limits(layout), mutants.selection(point -> true),
-                change.scope(layout.root()), explicit.applyTo(DiscoveryOptions.defaults().withMavenArguments(mavenArguments)),
+        RunRequest request = new RunRequest(layout, project.limits(layout), mutants.selection(point -> true),
+                change.spec(), explicit.applyTo(DiscoveryOptions.defaults().withMavenArguments(mavenArguments)),
                 workerCount, deadlines, Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
         Style style = project.style();
         ProgressListener listener = new ProgressListener(err, project.plain());

@@ -8,10 +8,26 @@ import java.util.Objects;
 
 /**
  * How worker JVMs are started: what the tests see (working directory, heap, options, system properties,
- * environment: as the project's build gives its test JVM) and how the pool runs them. Immutable; each
- * {@code with…} returns a changed copy.
+ * environment: as the project's build gives its test JVM) and how the pool runs them. Made with a
+ * {@link Builder}, which checks every value.
+ *
+ * @param workingDirectory the working directory of every worker (tests open files relative to it)
+ * @param classpath        the project's test classpath in order, schema classes ahead of the project's own
+ * @param workDirectory    where the workers' logs, temp folders and the worker classes go (below the build directory)
+ * @param workers          worker JVMs running at once
+ * @param mutantsPerWorker a worker is replaced after this many mutants, so leaked threads and static state do not pile up
+ * @param maxHeap          the {@code -Xmx} value, e.g. {@code 2g}, so results do not depend on the machine's memory
+ * @param jvmArguments     the project's options for its test JVM, after ours
+ * @param systemProperties system properties the project's build sets in its test JVM
+ * @param environment      environment variables the project's build adds for its test JVM
+ * @param javaExecutable   the {@code java} that starts the workers
+ * @param startTimeout     how long starting a worker and preparing it may take
+ * @param baselineTimeout  how long the unmutated suite may take
  */
-public final class WorkerSettings {
+public record WorkerSettings(Path workingDirectory, List<Path> classpath, Path workDirectory, int workers,
+                             int mutantsPerWorker, String maxHeap, List<String> jvmArguments,
+                             Map<String, String> systemProperties, Map<String, String> environment, Path javaExecutable,
+                             Duration startTimeout, Duration baselineTimeout) {
 
     public static final String DEFAULT_MAX_HEAP = "2g";
     /**
@@ -29,44 +45,48 @@ public final class WorkerSettings {
      */
     public static final int DEFAULT_MUTANTS_PER_WORKER = 500;
 
-    private Path workingDirectory;
-    private List<Path> classpath;
-    private Path workDirectory;
-    private int workers;
-    private int mutantsPerWorker;
-    private String maxHeap;
-    private List<String> jvmArguments;
-    private Map<String, String> systemProperties;
-    private Map<String, String> environment;
-    private Path javaExecutable;
-    private Duration startTimeout;
-    private Duration baselineTimeout;
-
-    private WorkerSettings() {
+    public WorkerSettings {
+        if (workers < 1) {
+            throw new IllegalArgumentException("at least one worker is needed, not " + workers);
+        }
+        if (mutantsPerWorker < 1) {
+            throw new IllegalArgumentException("a worker must run at least one mutant before it is replaced, not " + mutantsPerWorker);
+        }
+        if (!maxHeap.matches("[0-9]+[kKmMgGtT]?")) {
+            throw new IllegalArgumentException("the worker heap must be a size such as 512m or 2g, not '" + maxHeap + "'");
+        }
+        workingDirectory = workingDirectory.toAbsolutePath().normalize();
+        classpath = List.copyOf(classpath);
+        workDirectory = workDirectory.toAbsolutePath().normalize();
+        jvmArguments = List.copyOf(jvmArguments);
+        systemProperties = Map.copyOf(systemProperties);
+        environment = Map.copyOf(environment);
+        Objects.requireNonNull(javaExecutable, "javaExecutable");
+        Objects.requireNonNull(startTimeout, "startTimeout");
+        Objects.requireNonNull(baselineTimeout, "baselineTimeout");
     }
 
     /**
-     * One worker per core, 2 GiB heap each, the tool's own {@code java}, no options or properties of the project's.
-     *
-     * @param workingDirectory the working directory of every worker (tests open files relative to it)
-     * @param classpath        the project's test classpath in order, schema classes ahead of the project's own
-     * @param workDirectory    where the workers' logs, temp folders and the worker classes go (below the build directory)
+     * Settings starting from one worker per core, a 2 GiB heap each, the tool's own {@code java}, and no options,
+     * properties or environment of the project's.
      */
-    public static WorkerSettings of(Path workingDirectory, List<Path> classpath, Path workDirectory) {
-        WorkerSettings settings = new WorkerSettings();
-        settings.workingDirectory = workingDirectory.toAbsolutePath().normalize();
-        settings.classpath = List.copyOf(classpath);
-        settings.workDirectory = workDirectory.toAbsolutePath().normalize();
-        settings.workers = Runtime.getRuntime().availableProcessors();
-        settings.mutantsPerWorker = DEFAULT_MUTANTS_PER_WORKER;
-        settings.maxHeap = DEFAULT_MAX_HEAP;
-        settings.jvmArguments = List.of();
-        settings.systemProperties = Map.of();
-        settings.environment = Map.of();
-        settings.javaExecutable = currentJava();
-        settings.startTimeout = Duration.ofMinutes(2);
-        settings.baselineTimeout = Duration.ofHours(1);
-        return settings;
+    public static Builder builder(Path workingDirectory, List<Path> classpath, Path workDirectory) {
+        return new Builder(workingDirectory, classpath, workDirectory);
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        Builder builder = new Builder(workingDirectory, classpath, workDirectory);
+        builder.workers = workers;
+        builder.mutantsPerWorker = mutantsPerWorker;
+        builder.maxHeap = maxHeap;
+        builder.jvmArguments = jvmArguments;
+        builder.systemProperties = systemProperties;
+        builder.environment = environment;
+        builder.javaExecutable = javaExecutable;
+        builder.startTimeout = startTimeout;
+        builder.baselineTimeout = baselineTimeout;
+        return builder;
     }
 
     public static Path currentJava() {
@@ -74,139 +94,76 @@ public final class WorkerSettings {
         return Path.of(System.getProperty("java.home"), "bin", windows ? "java.exe" : "java");
     }
 
-    public Path workingDirectory() {
-        return workingDirectory;
-    }
+    /** Collects the settings; {@link #build()} checks them. */
+    public static final class Builder {
+        private final Path workingDirectory;
+        private final List<Path> classpath;
+        private final Path workDirectory;
+        private int workers = Runtime.getRuntime().availableProcessors();
+        private int mutantsPerWorker = DEFAULT_MUTANTS_PER_WORKER;
+        private String maxHeap = DEFAULT_MAX_HEAP;
+        private List<String> jvmArguments = List.of();
+        private Map<String, String> systemProperties = Map.of();
+        private Map<String, String> environment = Map.of();
+        private Path javaExecutable = currentJava();
+        private Duration startTimeout = Duration.ofMinutes(2);
+        private Duration baselineTimeout = Duration.ofHours(1);
 
-    public List<Path> classpath() {
-        return classpath;
-    }
-
-    public Path workDirectory() {
-        return workDirectory;
-    }
-
-    /** Worker JVMs running at once. */
-    public int workers() {
-        return workers;
-    }
-
-    /** A worker is replaced after this many mutants, so leaked threads and static state do not pile up. */
-    public int mutantsPerWorker() {
-        return mutantsPerWorker;
-    }
-
-    /** The {@code -Xmx} value, e.g. {@code 2g}, so results do not depend on the machine's memory. */
-    public String maxHeap() {
-        return maxHeap;
-    }
-
-    /** The project's options for its test JVM, after ours. */
-    public List<String> jvmArguments() {
-        return jvmArguments;
-    }
-
-    /** System properties the project's build sets in its test JVM. */
-    public Map<String, String> systemProperties() {
-        return systemProperties;
-    }
-
-    /** Environment variables the project's build adds for its test JVM. */
-    public Map<String, String> environment() {
-        return environment;
-    }
-
-    public Path javaExecutable() {
-        return javaExecutable;
-    }
-
-    /** How long starting a worker and preparing it may take. */
-    public Duration startTimeout() {
-        return startTimeout;
-    }
-
-    /** How long the unmutated suite may take. */
-    public Duration baselineTimeout() {
-        return baselineTimeout;
-    }
-
-    public WorkerSettings withWorkers(int count) {
-        if (count < 1) {
-            throw new IllegalArgumentException("at least one worker is needed, not " + count);
+        private Builder(Path workingDirectory, List<Path> classpath, Path workDirectory) {
+            this.workingDirectory = workingDirectory;
+            this.classpath = classpath;
+            this.workDirectory = workDirectory;
         }
-        WorkerSettings copy = copy();
-        copy.workers = count;
-        return copy;
-    }
 
-    public WorkerSettings withMutantsPerWorker(int count) {
-        if (count < 1) {
-            throw new IllegalArgumentException("a worker must run at least one mutant before it is replaced, not " + count);
+        public Builder workers(int count) {
+            this.workers = count;
+            return this;
         }
-        WorkerSettings copy = copy();
-        copy.mutantsPerWorker = count;
-        return copy;
-    }
 
-    public WorkerSettings withMaxHeap(String size) {
-        if (!size.matches("[0-9]+[kKmMgGtT]?")) {
-            throw new IllegalArgumentException("the worker heap must be a size such as 512m or 2g, not '" + size + "'");
+        public Builder mutantsPerWorker(int count) {
+            this.mutantsPerWorker = count;
+            return this;
         }
-        WorkerSettings copy = copy();
-        copy.maxHeap = size;
-        return copy;
-    }
 
-    public WorkerSettings withJvmArguments(List<String> arguments) {
-        WorkerSettings copy = copy();
-        copy.jvmArguments = List.copyOf(arguments);
-        return copy;
-    }
+        public Builder maxHeap(String size) {
+            this.maxHeap = size;
+            return this;
+        }
 
-    public WorkerSettings withSystemProperties(Map<String, String> properties) {
-        WorkerSettings copy = copy();
-        copy.systemProperties = Map.copyOf(properties);
-        return copy;
-    }
+        public Builder jvmArguments(List<String> arguments) {
+            this.jvmArguments = arguments;
+            return this;
+        }
 
-    public WorkerSettings withEnvironment(Map<String, String> variables) {
-        WorkerSettings copy = copy();
-        copy.environment = Map.copyOf(variables);
-        return copy;
-    }
+        public Builder systemProperties(Map<String, String> properties) {
+            this.systemProperties = properties;
+            return this;
+        }
 
-    public WorkerSettings withJavaExecutable(Path java) {
-        WorkerSettings copy = copy();
-        copy.javaExecutable = Objects.requireNonNull(java, "java");
-        return copy;
-    }
+        public Builder environment(Map<String, String> variables) {
+            this.environment = variables;
+            return this;
+        }
 
-    public WorkerSettings withStartTimeout(Duration timeout) {
-        WorkerSettings copy = copy();
-        copy.startTimeout = Objects.requireNonNull(timeout, "timeout");
-        return copy;
-    }
+        public Builder javaExecutable(Path java) {
+            this.javaExecutable = java;
+            return this;
+        }
 
-    public WorkerSettings withBaselineTimeout(Duration timeout) {
-        WorkerSettings copy = copy();
-        copy.baselineTimeout = Objects.requireNonNull(timeout, "timeout");
-        return copy;
-    }
+        public Builder startTimeout(Duration timeout) {
+            this.startTimeout = timeout;
+            return this;
+        }
 
-    private WorkerSettings copy() {
-        WorkerSettings copy = new WorkerSettings();
-        copy.workingDirectory = workingDirectory;
-        copy.classpath = classpath;
-        copy.workDirectory = workDirectory;
-        copy.workers = workers;
-        copy.mutantsPerWorker = mutantsPerWorker;
-        copy.maxHeap = maxHeap;
-        copy.jvmArguments = jvmArguments;
-        copy.systemProperties = systemProperties;
-        copy.environment = environment;
-        copy.javaExecutable = javaExecutable;
-        copy.startTimeout = startTimeout;
-        copy.baselineTimeout = baselineTimeout;
-        return copy;
+        public Builder baselineTimeout(Duration timeout) {
+            this.baselineTimeout = timeout;
+            return this;
+        }
+
+        /** @throws IllegalArgumentException when a count is below one or the heap is no size */
+        public WorkerSettings build() {
+            return new WorkerSettings(workingDirectory, classpath, workDirectory, workers, mutantsPerWorker, maxHeap,
+                    jvmArguments, systemProperties, environment, javaExecutable, startTimeout, baselineTimeout);
+        }
     }
 }

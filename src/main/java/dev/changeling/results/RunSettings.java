@@ -1,9 +1,11 @@
 package dev.changeling.results;
 
+import dev.changeling.project.ExplicitProject;
 import java.util.List;
 
 /**
- * How a run was asked for, kept so that its figures can be read correctly later.
+ * How a run was asked for, as resolved ({@code run.RunRequest}): kept so that its figures can be read correctly
+ * later, and so that one mutant can be run again exactly as the run ran it.
  *
  * @param project     the project directory, absolute
  * @param operators   the operator ids used
@@ -19,7 +21,10 @@ import java.util.List;
  * @param skipTests   test class patterns left out
  * @param skipTags    JUnit tags left out
  * @param mavenArguments extra arguments given to every mvn call
- * @param workerHeap  each worker's heap
+ * @param workerHeap  each worker's heap as given, or null when the pom's or the default applied
+ * @param mavenExecutable the mvn given, or null for the one found on MAVEN_HOME or PATH
+ * @param explicitProject the folders and classpath given by hand, or null when Maven found them
+ * @param mutantsPerWorker mutants a worker runs before it is replaced (0 in files written before it was kept)
  */
 public record RunSettings(
         String project,
@@ -36,7 +41,10 @@ public record RunSettings(
         List<String> skipTests,
         List<String> skipTags,
         List<String> mavenArguments,
-        String workerHeap) {
+        String workerHeap,
+        String mavenExecutable,
+        ExplicitProject explicitProject,
+        int mutantsPerWorker) {
 
     public RunSettings {
         skipTests = skipTests == null ? List.of() : List.copyOf(skipTests);

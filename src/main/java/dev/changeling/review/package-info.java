@@ -1,2 +1,7 @@
-/** Code review: scope to a change, triage decisions, the equivalents list and the attachments for the review. */
+/**
+ * The views a reviewer works in, above the engine: the decisions kept in the project (the committed
+ * equivalents list and its rules, the local triage marks, what is settled), the triage loop ({@code triage/})
+ * and the attachments for the review ({@code export/}). Everything here reads the results file; nothing in the
+ * engine imports this package.
+ */
 package dev.changeling.review;

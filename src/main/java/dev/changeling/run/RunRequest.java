@@ -1,20 +1,32 @@
 package dev.changeling.run;
 
+import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
+import dev.changeling.execution.WorkerSettings;
+import dev.changeling.mutant.HigherOrder;
+import dev.changeling.mutant.MutantRequest;
+import dev.changeling.mutant.Point;
 import dev.changeling.mutant.Selection;
+import dev.changeling.operator.MutationOperator;
+import dev.changeling.operator.Operators;
 import dev.changeling.project.DiscoveryOptions;
-import dev.changeling.scope.ChangeScope;
+import dev.changeling.project.ProjectLayout;
+import dev.changeling.results.RunSettings;
+import dev.changeling.scope.ChangeSpec;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
+import java.util.function.Predicate;
 
 /**
- * How a run is asked for.
+ * How a run is asked for, complete and immutable. The results file keeps it ({@link #settings}), and a re-run of
+ * one mutant rebuilds it from there ({@link #again}), so both run the same project the same way.
  *
- * @param folder           the project folder
+ * @param layout           the project's folders, located once
  * @param limits           files and folders inside it to limit mutation to; empty for the whole project
  * @param selection        which mutants to make
- * @param change           the change under review to limit mutation to, if any
+ * @param change           the change under review to limit mutation to, if any (read once the project is known)
  * @param discovery        how to find classes and the test classpath
  * @param workers          worker JVMs at once
  * @param deadlines        how long a mutant's tests may take
@@ -26,10 +38,10 @@ import java.util.Optional;
  *                         see whether the deadlines were long enough
  */
 public record RunRequest(
-        Path folder,
+        ProjectLayout layout,
         List<Path> limits,
         Selection selection,
-        Optional<ChangeScope> change,
+        Optional<ChangeSpec> change,
         DiscoveryOptions discovery,
         int workers,
         Deadlines deadlines,
@@ -43,5 +55,45 @@ public record RunRequest(
         limits = List.copyOf(limits);
         skipTests = List.copyOf(skipTests);
         skipTags = List.copyOf(skipTags);
+    }
+
+    /** What the results file keeps of the request, with what choosing the mutants found. */
+    RunSettings settings(Selection.Chosen chosen, Optional<String> changeDescription) {
+        MutantRequest mutants = selection.request();
+        return new RunSettings(layout.root().toString(),
+                mutants.operators().stream().map(MutationOperator::id).toList(),
+                mutants.orders(), mutants.scope().name().toLowerCase(Locale.ROOT),
+                selection.sampleSeed(), chosen.sampled(), chosen.population(), changeDescription.orElse(null),
+                workers, deadlines.factor(), deadlines.constantMillis(), skipTests, skipTags, discovery.mavenArguments(),
+                workerHeap.orElse(null), discovery.mavenExecutable().map(Path::toString).orElse(null),
+                discovery.explicitProject().orElse(null), mutantsPerWorker);
+    }
+
+    /**
+     * The request an earlier run was made with, for the points {@code only} picks of one order, in one worker:
+     * the same project found the same way, the same operators, deadlines, heap and tests.
+     *
+     * @throws UserError when the recorded settings no longer make sense (an operator that is gone)
+     */
+    static RunRequest again(Path projectRoot, RunSettings recorded, int order, Predicate<Point> only) {
+        MutantRequest request;
+        try {
+            request = new MutantRequest(Operators.named(recorded.operators()), List.of(order),
+                    HigherOrder.Scope.valueOf(recorded.scope().toUpperCase(Locale.ROOT)), recorded.seed(), only);
+        } catch (IllegalArgumentException e) {
+            throw new UserError("cannot run the mutant again: " + e.getMessage());
+        }
+        DiscoveryOptions discovery = DiscoveryOptions.defaults().withMavenArguments(recorded.mavenArguments());
+        if (recorded.mavenExecutable() != null) {
+            discovery = discovery.withMavenExecutable(Path.of(recorded.mavenExecutable()));
+        }
+        if (recorded.explicitProject() != null) {
+            discovery = discovery.withExplicitProject(recorded.explicitProject());
+        }
+        return new RunRequest(ProjectLayout.locate(projectRoot, discovery.explicitProject()), List.of(),
+                new Selection(request, null, null, recorded.seed()), Optional.empty(), discovery, 1,
+                new Deadlines(recorded.timeFactor(), recorded.timeExtraMillis()), Optional.ofNullable(recorded.workerHeap()),
+                recorded.mutantsPerWorker() > 0 ? recorded.mutantsPerWorker() : WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
+                recorded.skipTests(), recorded.skipTags(), false);
     }
 }

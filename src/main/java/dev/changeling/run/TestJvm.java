@@ -28,20 +28,21 @@ final class TestJvm {
     static WorkerSettings settings(SuiteConfiguration suite, RunRequest request, List<Path> classpath, Path workDirectory,
                                    ProjectLayout layout) {
         Path workingDirectory = existingWorkingDirectory(suite.workingDirectory(), layout);
-        return WorkerSettings.of(workingDirectory, classpath, workDirectory)
-                .withWorkers(request.workers())
-                .withMaxHeap(request.workerHeap().or(suite::maxHeap).orElse(WorkerSettings.DEFAULT_MAX_HEAP))
-                .withMutantsPerWorker(request.mutantsPerWorker())
-                .withJvmArguments(suite.jvmArguments())
-                .withSystemProperties(suite.systemProperties())
-                .withEnvironment(suite.environment());
+        return WorkerSettings.builder(workingDirectory, classpath, workDirectory)
+                .workers(request.workers())
+                .maxHeap(request.workerHeap().or(suite::maxHeap).orElse(WorkerSettings.DEFAULT_MAX_HEAP))
+                .mutantsPerWorker(request.mutantsPerWorker())
+                .jvmArguments(suite.jvmArguments())
+                .systemProperties(suite.systemProperties())
+                .environment(suite.environment())
+                .build();
     }
 
     /** The test classes and tags: the build's, less what the user leaves out; said in one line, with any notices. */
     static SuiteSetup setup(SuiteConfiguration suite, RunRequest request, int pointCount, List<String> productionClasses,
                             RunListener listener) {
         suite.skipReason().ifPresent(reason -> {
-            throw new UserError(request.folder() + ": `mvn test` runs no tests here (" + reason + "), so there is nothing to"
+            throw new UserError(request.layout().root() + ": `mvn test` runs no tests here (" + reason + "), so there is nothing to"
                     + " run the mutants against; remove the setting or run with --maven-arg=-DskipTests=false", ExitCode.USER_ERROR);
         });
         Predicate<String> skipped = ClassPatterns.anyOf(request.skipTests());

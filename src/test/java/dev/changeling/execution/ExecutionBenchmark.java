@@ -27,9 +27,9 @@ public final class ExecutionBenchmark {
         try {
             TinyProject project = TinyProject.create(folder.resolve("shop"));
             SuiteSetup setup = SuiteSetup.of(TinyProject.POINTS, project.testClassNames()).withPreinitialise(List.of("shop.Rates"));
-            WorkerSettings settings = WorkerSettings.of(project.root, project.classpath(), project.root.resolve("target/changeling/bench"))
-                    .withWorkers(1).withMaxHeap("256m").withMutantsPerWorker(Integer.MAX_VALUE)
-                    .withJvmArguments(List.of(System.getProperty("bench.jvm", "-Dbench=1").split(" ")));
+            WorkerSettings settings = WorkerSettings.builder(project.root, project.classpath(), project.root.resolve("target/changeling/bench"))
+                    .workers(1).maxHeap("256m").mutantsPerWorker(Integer.MAX_VALUE)
+                    .jvmArguments(List.of(System.getProperty("bench.jvm", "-Dbench=1").split(" "))).build();
             String addsZero = "[engine:junit-jupiter]/[class:shop.PricesTest]/[method:addsZero()]";
             String addsTwo = "[engine:junit-jupiter]/[class:shop.PricesTest]/[method:addsTwoNumbers()]";
 
@@ -60,7 +60,7 @@ public final class ExecutionBenchmark {
                 measure(pool, "warm worker, ten passing tests per job", jobs / 10, ten, 0);
             }
 
-            try (WorkerPool pool = WorkerPool.open(settings.withWorkers(2), setup)) {
+            try (WorkerPool pool = WorkerPool.open(settings.toBuilder().workers(2).build(), setup)) {
                 List<MutantJob> batch = new ArrayList<>();
                 for (int i = 0; i < jobs; i++) {
                     batch.add(MutantJob.schema("m" + i, new int[] {0}, List.of(addsZero), 60_000));

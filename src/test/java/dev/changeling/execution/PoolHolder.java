@@ -20,7 +20,7 @@ public final class PoolHolder {
         for (int i = 5; i < args.length; i++) {
             classpath.add(Path.of(args[i]));
         }
-        WorkerSettings settings = WorkerSettings.of(Path.of(args[1]), classpath, Path.of(args[3])).withWorkers(1).withMaxHeap("96m");
+        WorkerSettings settings = WorkerSettings.builder(Path.of(args[1]), classpath, Path.of(args[3])).workers(1).maxHeap("96m").build();
         WorkerPool pool = WorkerPool.open(settings, SuiteSetup.of(TinyProject.POINTS, TinyProject.defaultTestClasses(Path.of(args[2]))));
         pool.run(List.of(MutantJob.schema("warm", new int[0], List.of(args[4]), 60_000)), result -> { });
         ProcessHandle worker = ProcessHandle.current().children()

@@ -43,10 +43,10 @@ class WorkerPoolTest {
     }
 
     static WorkerSettings settings(String name) {
-        return WorkerSettings.of(project.root, project.classpath(), project.root.resolve("target/changeling/" + name))
-                .withWorkers(1)
-                .withMaxHeap("96m")
-                .withJvmArguments(List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC"));
+        return WorkerSettings.builder(project.root, project.classpath(), project.root.resolve("target/changeling/" + name))
+                .workers(1)
+                .maxHeap("96m")
+                .jvmArguments(List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC")).build();
     }
 
     static SuiteSetup setup() {
@@ -377,8 +377,8 @@ class WorkerPoolTest {
         /** The worker starts its launcher when it runs its first tests; here that takes 3 s, beyond the mutants' deadlines. */
         @Test
         void aFreshWorkersStartIsNotChargedToItsFirstMutant_evenAfterATimeout() {
-            WorkerSettings slow = settings("cold").withJvmArguments(List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC",
-                    "-Dshop.slowStart=3000"));
+            WorkerSettings slow = settings("cold").toBuilder().jvmArguments(List.of("-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC",
+                    "-Dshop.slowStart=3000")).build();
             try (WorkerPool pool = WorkerPool.open(slow, setup())) {
                 List<JobResult> results = pool.run(List.of(
                         MutantJob.schema("loops", new int[] {2}, List.of(method("HostileTest", "countsToThree")), 2_000),
@@ -418,7 +418,7 @@ class WorkerPoolTest {
 
         @Test
         void replacesAWorkerAfterItsShareOfMutants_evenOneThatLeftAThreadRunning() {
-            try (WorkerPool pool = WorkerPool.open(settings("recycle").withMutantsPerWorker(2), setup())) {
+            try (WorkerPool pool = WorkerPool.open(settings("recycle").toBuilder().mutantsPerWorker(2).build(), setup())) {
                 List<JobResult> results = pool.run(List.of(
                         job("leaks", 10, method("HostileTest", "leaks")),
                         job("b", 0, method("PricesTest", "addsZero")),
@@ -432,7 +432,7 @@ class WorkerPoolTest {
 
         @Test
         void emptiesTheWorkersTempFolderWhenItIsReplaced() throws Exception {
-            WorkerSettings settings = settings("temp").withMutantsPerWorker(1);
+            WorkerSettings settings = settings("temp").toBuilder().mutantsPerWorker(1).build();
             Path temp = settings.workDirectory().resolve("tmp-1");
             try (WorkerPool pool = WorkerPool.open(settings, setup())) {
                 pool.run(List.of(job("a", 0, method("PricesTest", "addsZero"))), result -> { });
@@ -529,9 +529,9 @@ class WorkerPoolTest {
             assumeTrue(jars != null, "JUnit Platform 1.10.2 is neither in the local Maven repository nor to be fetched with mvn");
             List<Path> classpath = new ArrayList<>(List.of(project.testClasses, project.classes));
             classpath.addAll(jars);
-            pool = WorkerPool.open(WorkerSettings.of(project.root, classpath, project.root.resolve("target/changeling/platform-1.10"))
-                    .withWorkers(1).withMutantsPerWorker(100).withMaxHeap("96m")
-                    .withStartTimeout(Duration.ofMinutes(1)).withBaselineTimeout(Duration.ofMinutes(5)), setup());
+            pool = WorkerPool.open(WorkerSettings.builder(project.root, classpath, project.root.resolve("target/changeling/platform-1.10"))
+                    .workers(1).mutantsPerWorker(100).maxHeap("96m")
+                    .startTimeout(Duration.ofMinutes(1)).baselineTimeout(Duration.ofMinutes(5)).build(), setup());
             baseline = pool.baseline(name -> { });
         }
 
@@ -613,7 +613,7 @@ class WorkerPoolTest {
 
         @Test
         void aJavaThatIsNotThere_isAUserError() {
-            try (WorkerPool pool = WorkerPool.open(settings("no-java").withJavaExecutable(project.root.resolve("no/such/java")), setup())) {
+            try (WorkerPool pool = WorkerPool.open(settings("no-java").toBuilder().javaExecutable(project.root.resolve("no/such/java")).build(), setup())) {
                 dev.changeling.UserError error = assertThrows(dev.changeling.UserError.class,
                         () -> pool.run(List.of(job("a", 0, method("PricesTest", "addsZero"))), result -> { }));
                 assertTrue(error.getMessage().startsWith("cannot start a worker JVM with "), error.getMessage());
@@ -622,7 +622,7 @@ class WorkerPoolTest {
 
         @Test
         void aJvmThatDiesAtOnce_isAUserErrorThatShowsItsLastWords() {
-            try (WorkerPool pool = WorkerPool.open(settings("bad-option").withJvmArguments(List.of("-XX:+NoSuchOptionAnywhere")), setup())) {
+            try (WorkerPool pool = WorkerPool.open(settings("bad-option").toBuilder().jvmArguments(List.of("-XX:+NoSuchOptionAnywhere")).build(), setup())) {
                 dev.changeling.UserError error = assertThrows(dev.changeling.UserError.class, () -> pool.baseline(name -> { }));
                 assertTrue(error.getMessage().contains("exited with code 1"), error.getMessage());
                 assertTrue(error.getMessage().contains("NoSuchOptionAnywhere"), error.getMessage());
@@ -676,8 +676,8 @@ class WorkerPoolTest {
             List<Path> classpath = new ArrayList<>(List.of(testClasses, project.classes));
             classpath.addAll(jars);
             classpath.addAll(TinyProject.junitJars());
-            WorkerSettings settings = WorkerSettings.of(project.root, classpath, project.root.resolve("target/changeling/junit4"))
-                    .withWorkers(1).withMaxHeap("96m");
+            WorkerSettings settings = WorkerSettings.builder(project.root, classpath, project.root.resolve("target/changeling/junit4"))
+                    .workers(1).maxHeap("96m").build();
             pool = WorkerPool.open(settings, SuiteSetup.of(TinyProject.POINTS, TinyProject.defaultTestClasses(testClasses)));
             baseline = pool.baseline(name -> { });
         }

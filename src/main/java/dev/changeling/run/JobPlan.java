@@ -1,0 +1,110 @@
+package dev.changeling.run;
+
+import dev.changeling.compile.BuildResult;
+import dev.changeling.compile.Placement;
+import dev.changeling.execution.Baseline;
+import dev.changeling.execution.Deadlines;
+import dev.changeling.execution.JobResult;
+import dev.changeling.execution.MutantJob;
+import dev.changeling.execution.RecordedTest;
+import dev.changeling.execution.TestRun;
+import dev.changeling.execution.TestStatus;
+import dev.changeling.mutant.Mutant;
+import dev.changeling.mutant.Point;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.Records;
+import dev.changeling.results.Verdict;
+import dev.changeling.source.SourceFile;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * What the baseline decided for each runnable mutant: the tests that reach it, in the order they run, as one
+ * job for the workers; a mutant no test reaches is unreached without running anything.
+ *
+ * @param jobs      one per reached mutant
+ * @param mutants   each job's mutant, by fingerprint
+ * @param reachedBy each job's reaching tests, by fingerprint
+ * @param unreached verdicts of the mutants no test reaches, by fingerprint
+ */
+record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, List<String>> reachedBy,
+               Map<String, MutantResult> unreached) {
+
+    static JobPlan of(List<Mutant> runnable, BuildResult build, Baseline baseline, Deadlines deadlines,
+                      Map<String, SourceFile> files) {
+        List<MutantJob> jobs = new ArrayList<>();
+        Map<String, Mutant> mutants = new HashMap<>();
+        Map<String, List<String>> reachedBy = new HashMap<>();
+        Map<String, MutantResult> unreached = new LinkedHashMap<>();
+        for (Mutant mutant : runnable) {
+            Placement placement = build.placementOf(mutant);
+            boolean inSchema = placement.kind() == Placement.Kind.IN_SCHEMA;
+            List<String> tests = inSchema ? baseline.testsFor(placement.activation()) : testsForAlone(mutant, build, baseline);
+            if (tests.isEmpty()) {
+                unreached.put(mutant.fingerprint(), Records.of(mutant, files.get(mutant.file()), Verdict.UNREACHED,
+                        "no test reaches this code"));
+                continue;
+            }
+            mutants.put(mutant.fingerprint(), mutant);
+            reachedBy.put(mutant.fingerprint(), tests);
+            jobs.add(inSchema
+                    ? MutantJob.schema(mutant.fingerprint(), placement.activation(), tests, deadlines, baseline)
+                    : MutantJob.alone(mutant.fingerprint(), placement.classes(), tests, deadlines, baseline));
+        }
+        return new JobPlan(jobs, mutants, reachedBy, unreached);
+    }
+
+    /** The verdict of a job the workers finished, as the results file records it. */
+    MutantResult resultOf(JobResult job, Map<String, SourceFile> files) {
+        Mutant mutant = mutants.get(job.key());
+        Verdict verdict = switch (job.outcome()) {
+            case KILLED -> Verdict.KILLED;
+            case SURVIVED -> Verdict.SURVIVED;
+            case TIMED_OUT -> Verdict.TIMED_OUT;
+            case CRASHED -> Verdict.CRASHED;
+        };
+        MutantResult base = Records.of(mutant, files.get(mutant.file()), verdict, job.message());
+        List<String> ran = new ArrayList<>(job.testsRun().stream().map(TestRun::testId).toList());
+        if (job.testId() != null && !ran.contains(job.testId())) {
+            ran.add(job.testId());
+        }
+        return new MutantResult(base.id(), base.file(), base.order(), base.points(), verdict,
+                verdict == Verdict.SURVIVED ? null : job.testId(), job.message(), ran, reachedBy.get(job.key()),
+                job.nanos() / 1e6, base.diff());
+    }
+
+    /** A short name of a job's mutant for progress lines: its id and file. */
+    String label(String key) {
+        Mutant mutant = mutants.get(key);
+        return mutant.shortId() + " " + mutant.file();
+    }
+
+    /**
+     * A mutant compiled alone has no schema switch to record its reach, so every passing test may
+     * reach it: those reaching its member's other points run first, the rest after, fastest first.
+     */
+    private static List<String> testsForAlone(Mutant mutant, BuildResult build, Baseline baseline) {
+        Point first = mutant.first();
+        int[] neighbours = new int[build.points().size()];
+        int count = 0;
+        for (int id = 0; id < build.points().size(); id++) {
+            Point point = build.points().get(id);
+            if (point.file().equals(first.file()) && point.member().equals(first.member())) {
+                neighbours[count++] = id;
+            }
+        }
+        Set<String> ordered = new LinkedHashSet<>(baseline.testsFor(Arrays.copyOf(neighbours, count)));
+        baseline.tests().stream()
+                .filter(test -> test.status() == TestStatus.PASSED)
+                .sorted(Comparator.comparingLong(RecordedTest::nanos))
+                .forEach(test -> ordered.add(test.id()));
+        return List.copyOf(ordered);
+    }
+}
