@@ -143,15 +143,21 @@ final class WorkerSlot {
         return worker.run(MutantJob.schema(key, new int[0], List.of(testId), settings.startTimeout().toMillis()));
     }
 
-    /** Kills whatever this slot has running, at once. */
-    void stop() {
-        WorkerProcess current = live;
-        if (current != null) {
-            current.kill();
+    /** Asks whatever this slot has running to exit now, whatever it does (Ctrl-C); {@link #awaitStop} follows. */
+    void askToStop() {
+        for (WorkerProcess running : new WorkerProcess[] {live, liveAlone}) {
+            if (running != null) {
+                running.askToExit();
+            }
         }
-        WorkerProcess alone = liveAlone;
-        if (alone != null) {
-            alone.kill();
+    }
+
+    /** Waits for what this slot ran to exit, and kills what has not within the grace period since it was asked. */
+    void awaitStop() {
+        for (WorkerProcess running : new WorkerProcess[] {live, liveAlone}) {
+            if (running != null) {
+                running.awaitExit();
+            }
         }
     }
 
@@ -216,7 +222,7 @@ final class WorkerSlot {
                 prepared = answer;
             }
         } catch (WorkerProcess.Lost lost) {
-            started.kill();
+            started.end();
             live = null;
             pool.throwIfStopped();
             throw new UserError("a worker JVM failed while the production classes were initialised: " + lost.getMessage()
@@ -244,22 +250,23 @@ final class WorkerSlot {
             live = started;
         }
         if (pool.stopped()) {
-            started.kill();
+            started.end();
             throw new CancellationException("stopped");
         }
         try {
             started.connect(settings.startTimeout().toMillis());
         } catch (WorkerProcess.Lost lost) {
-            started.kill();
+            started.end();
             pool.throwIfStopped();
             throw new UserError("a worker JVM did not start: " + lost.getMessage() + "; its output is in " + log);
         }
         return started;
     }
 
+    /** Ends the current worker the way a test JVM ends (killed only if it will not), and empties its temp folder. */
     private void retire() {
         if (worker != null) {
-            worker.kill();
+            worker.end();
         }
         worker = null;
         live = null;

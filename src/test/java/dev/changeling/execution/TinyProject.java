@@ -25,6 +25,9 @@ import javax.tools.ToolProvider;
  * that never ends; 11 {@code write} writes one mark too many on a sheet that a test class shares between its tests;
  * 12 {@code retry} never ends and swallows every error thrown in it, a stop included.
  *
+ * <p>{@code ScratchTest} makes the folder that the system property {@code shop.scratch} names and marks it
+ * {@code deleteOnExit}, as tests that tidy up after themselves do: only a JVM that exits normally deletes it.
+ *
  * <p>A launcher started in a JVM with {@code -Dshop.slowStart=<ms>} takes that long to start, once per JVM, as
  * loading a large suite's engines and classes can: {@code shop.SlowStart}, a registered test execution listener,
  * sleeps in its static initialiser.
@@ -190,6 +193,20 @@ final class TinyProject {
                         static final StringBuilder NOTE = new StringBuilder();
                         @Test void notesThenCounts() { NOTE.append('y'); assertEquals(3, Prices.countUpTo(3)); NOTE.setLength(0); }
                         @Test void findsNoNote() { assertEquals("", NOTE.toString()); }
+                    }
+                    """),
+            Map.entry("shop/ScratchTest.java", """
+                    package shop;
+
+                    import java.io.File;
+                    import org.junit.jupiter.api.Test;
+
+                    class ScratchTest {
+                        @Test void keepsAScratchFolderWhileTheJvmRuns() {
+                            File scratch = new File(System.getProperty("shop.scratch", "target/scratch"));
+                            scratch.mkdirs();
+                            scratch.deleteOnExit();
+                        }
                     }
                     """),
             Map.entry("shop/RatesTest.java", """

@@ -298,7 +298,7 @@ class WorkerPoolTest {
                         result -> workersWhenTold.add(liveWorkers()));
                 assertEquals(Outcome.TIMED_OUT, results.get(0).outcome());
                 assertEquals(method("HostileTest", "retries"), results.get(0).testId());
-                assertTrue(results.get(0).message().endsWith("the worker was killed"), results.get(0).message());
+                assertTrue(results.get(0).message().endsWith("the worker was ended"), results.get(0).message());
                 assertEquals(List.of(), workersWhenTold.get(0), "the killed worker is gone before its result is told");
                 assertEquals(Outcome.KILLED, results.get(1).outcome());
                 assertEquals(2, pool.workersStarted());
@@ -409,6 +409,71 @@ class WorkerPoolTest {
                 assertTrue(results.get(1).message().startsWith("OutOfMemoryError"), results.get(1).message());
                 assertEquals(Outcome.KILLED, results.get(2).outcome());
                 assertEquals(3, pool.workersStarted());
+            }
+        }
+    }
+
+    /**
+     * A worker the tool is done with exits as a test JVM exits, so the tests' shutdown hooks run: a folder marked
+     * {@code deleteOnExit} (by {@code ScratchTest}) is gone once the worker has been replaced or stopped.
+     */
+    @Nested
+    class Ending {
+
+        Path scratch(String name) {
+            return project.root.resolve("target/scratch-" + name);
+        }
+
+        WorkerSettings marking(String name) {
+            return settings(name).withSystemProperties(java.util.Map.of("shop.scratch", scratch(name).toString()));
+        }
+
+        MutantJob marks() {
+            return job("marks", 6, method("ScratchTest", "keepsAScratchFolderWhileTheJvmRuns"));
+        }
+
+        @Test
+        void aWorkerEndedAfterALoopThatSwallowsTheStop_runsItsShutdownHooks() {
+            try (WorkerPool pool = WorkerPool.open(marking("swallowing"), setup())) {
+                List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")), marks(),
+                        MutantJob.schema("retries", new int[] {12}, List.of(method("HostileTest", "retries")), 1_000)),
+                        result -> { });
+                assertFalse(Files.exists(scratch("swallowing")), "the worker was killed before its shutdown hooks ran");
+                assertEquals(Outcome.TIMED_OUT, results.get(2).outcome());
+                assertTrue(results.get(2).message().endsWith("the worker was ended"), results.get(2).message());
+            }
+        }
+
+        @Test
+        void aWorkerReplacedAfterItsHeapRanOut_runsItsShutdownHooks() {
+            try (WorkerPool pool = WorkerPool.open(marking("hoarding"), setup())) {
+                List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")), marks(),
+                        job("hogs", 4, method("HostileTest", "hogs"))), result -> { });
+                assertEquals(Outcome.KILLED, results.get(2).outcome());
+                assertFalse(Files.exists(scratch("hoarding")), "the worker was killed before its shutdown hooks ran");
+            }
+        }
+
+        @Test
+        void workersStoppedMidTest_runTheirShutdownHooks() throws Exception {
+            CountDownLatch marked = new CountDownLatch(2);
+            try (WorkerPool pool = WorkerPool.open(marking("stopped"), setup())) {
+                Thread stopper = new Thread(() -> {
+                    try {
+                        marked.await();
+                        pool.stop();
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                });
+                stopper.start();
+                List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")), marks(),
+                        MutantJob.schema("loops", new int[] {2}, List.of(method("HostileTest", "countsToThree")), 600_000)),
+                        result -> marked.countDown());
+                stopper.join();
+                assertEquals(List.of("warm", "marks"), keys(results));
+                assertEquals(List.of(), liveWorkers());
+                assertFalse(Files.exists(scratch("stopped")), "the worker was killed before its shutdown hooks ran");
             }
         }
     }
