@@ -83,6 +83,12 @@ final class WorkerSlot {
                 pool.throwIfStopped();
                 result = runInWorker(job);
             }
+            if (result.outcome() == Outcome.CRASHED) {
+                String death = worker == null ? null : worker.death();
+                retire();
+                pool.throwIfStopped();
+                result = CrashCheck.settle(result, death, runInWorker(job));
+            }
         } catch (RuntimeException e) {
             retire();
             throw e;
@@ -169,7 +175,21 @@ final class WorkerSlot {
         }
     }
 
+    /** A mutant compiled alone runs in a fresh worker of its own; a crash there is confirmed in another one. */
     private JobResult executeAlone(MutantJob job) {
+        AloneRun first = runAlone(job);
+        if (first.result().outcome() != Outcome.CRASHED) {
+            return first.result();
+        }
+        pool.throwIfStopped();
+        return CrashCheck.settle(first.result(), first.death(), runAlone(job).result());
+    }
+
+    /** The result of one run of a mutant compiled alone, and how its worker died, if it did. */
+    private record AloneRun(JobResult result, String death) {
+    }
+
+    private AloneRun runAlone(MutantJob job) {
         long start = System.nanoTime();
         WorkerProcess alone = launch(List.of(job.aloneClasses()), aloneTemp, aloneArgumentFile, true);
         try {
@@ -178,10 +198,11 @@ final class WorkerSlot {
             } catch (WorkerProcess.Lost lost) {
                 pool.throwIfStopped();
                 // Only the mutant's own classes differ from a worker that prepares fine: its static initialiser did this.
-                return new JobResult(job.key(), lost.timedOut ? Outcome.TIMED_OUT : Outcome.CRASHED, null,
-                        "while its classes were initialised: " + lost.getMessage(), List.of(), System.nanoTime() - start);
+                return new AloneRun(new JobResult(job.key(), lost.timedOut ? Outcome.TIMED_OUT : Outcome.CRASHED, null,
+                        "while its classes were initialised: " + lost.getMessage(), List.of(), System.nanoTime() - start),
+                        alone.death());
             }
-            return alone.run(job);
+            return new AloneRun(alone.run(job), alone.death());
         } finally {
             alone.close();
             liveAlone = null;

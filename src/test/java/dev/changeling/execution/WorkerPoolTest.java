@@ -404,11 +404,53 @@ class WorkerPoolTest {
                 assertEquals(Outcome.CRASHED, results.get(0).outcome());
                 assertEquals(method("HostileTest", "checksOut"), results.get(0).testId());
                 assertTrue(results.get(0).message().contains("exited with code 7"), results.get(0).message());
+                assertTrue(results.get(0).message().endsWith("; again in a fresh worker"), results.get(0).message());
                 // the error fails the test as Surefire's own run would fail it; no JVM flag of ours turns it into an exit
                 assertEquals(Outcome.KILLED, results.get(1).outcome());
                 assertTrue(results.get(1).message().startsWith("OutOfMemoryError"), results.get(1).message());
                 assertEquals(Outcome.KILLED, results.get(2).outcome());
-                assertEquals(3, pool.workersStarted());
+                // one for each job, and one more for the exit, which is confirmed in a fresh worker
+                assertEquals(4, pool.workersStarted());
+            }
+        }
+
+        /**
+         * The till test sends its worker's pid the first time it runs, and waits; the worker is then killed from
+         * outside, as kill -9 or the kernel's out-of-memory killer would. Exit 137 is 128 + 9, SIGKILL's number:
+         * how the JDK reports a process ended by a signal on Unix (java.lang.Process#exitValue, from memory).
+         */
+        @Test
+        void aWorkerKilledFromOutside_isNoCrash_theMutantRunsAgainInAFreshWorkerThatGivesTheVerdict() throws Exception {
+            assumeTrue(!System.getProperty("os.name").startsWith("Windows"), "exit codes of killed processes are Unix's");
+            Path marker = project.root.resolve("target/till-marker");
+            Files.deleteIfExists(marker);
+            try (java.net.ServerSocket till = new java.net.ServerSocket(0, 1, java.net.InetAddress.getLoopbackAddress())) {
+                WorkerSettings settings = settings("killed-outside").withSystemProperties(java.util.Map.of(
+                        "shop.till", Integer.toString(till.getLocalPort()), "shop.tillMarker", marker.toString()));
+                Thread killer = new Thread(() -> killTheWorkerThatCalls(till), "killer");
+                killer.start();
+                try (WorkerPool pool = WorkerPool.open(settings, setup())) {
+                    List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")),
+                            job("till", 0, method("TillTest", "addsUpTheTill"))), result -> { });
+                    killer.join();
+                    JobResult tallied = results.get(1);
+                    assertEquals(Outcome.KILLED, tallied.outcome(), tallied::toString);
+                    assertTrue(tallied.message().startsWith("AssertionFailedError"), tallied.message());
+                    assertTrue(tallied.message().endsWith("; the first worker died (exit 137) and the mutant ran again in a fresh one"),
+                            tallied.message());
+                    assertEquals(2, pool.workersStarted());
+                }
+            }
+        }
+
+        private void killTheWorkerThatCalls(java.net.ServerSocket till) {
+            try (java.net.Socket call = till.accept()) {
+                String pid = new java.io.BufferedReader(new java.io.InputStreamReader(call.getInputStream())).readLine();
+                ProcessHandle worker = ProcessHandle.of(Long.parseLong(pid.strip())).orElseThrow();
+                worker.destroyForcibly();
+                worker.onExit().join();
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
             }
         }
     }
