@@ -138,11 +138,15 @@ final class DefaultWorkerPool implements WorkerPool {
         }
     }
 
+    /** Every worker is asked to exit first, then each is waited for, so they share one grace period. */
     @Override
     public void stop() {
         stopped = true;
         for (WorkerSlot slot : slots) {
-            slot.stop();
+            slot.askToStop();
+        }
+        for (WorkerSlot slot : slots) {
+            slot.awaitStop();
         }
     }
 
@@ -186,7 +190,7 @@ final class DefaultWorkerPool implements WorkerPool {
         }
     }
 
-    /** An interrupt of the caller means "stop": the workers are killed, and the threads are still waited for. */
+    /** An interrupt of the caller means "stop": the workers are ended, and the threads are still waited for. */
     private void joinStoppingOnInterrupt(Thread thread) {
         boolean interrupted = false;
         while (true) {

@@ -9,7 +9,8 @@ import java.util.List;
  * @param outcome  what the run came to
  * @param testId   the test that failed (killed), or that was running at the deadline (timed out) or
  *                 when the worker died (crashed); null when it survived
- * @param message  the failure's short message, or what happened to the worker; null when it survived
+ * @param message  the failure's short message, or what happened to the worker; null when it survived, unless its
+ *                 first worker died and the verdict comes from a second run in a fresh one ({@link CrashCheck})
  * @param testsRun the tests that finished, in the order they ran (the one running at a timeout or
  *                 crash is not among them)
  * @param nanos    wall time from sending the job to its answer

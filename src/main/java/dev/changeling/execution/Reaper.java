@@ -5,7 +5,8 @@ import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Makes sure no worker JVM outlives the tool, whichever way the tool ends: on shutdown it first stops
- * the pools (so their running jobs are not mistaken for crashes), then kills any worker still alive.
+ * the pools (so their running jobs are not mistaken for crashes, and their workers exit as test JVMs do), then
+ * kills any worker still alive.
  */
 final class Reaper {
 

@@ -35,8 +35,9 @@ public interface WorkerPool extends AutoCloseable {
     List<JobResult> run(List<MutantJob> jobs, Consumer<JobResult> onResult);
 
     /**
-     * Stops everything at once (for Ctrl-C): kills the workers and makes a running {@link #run} return what
-     * finished. May be called from any thread; the pool runs nothing more afterwards.
+     * Stops everything at once (for Ctrl-C): asks the workers to exit, as test JVMs exit (their shutdown hooks
+     * run), kills those that have not within two seconds, and makes a running {@link #run} return what finished.
+     * May be called from any thread; the pool runs nothing more afterwards.
      */
     void stop();
 
@@ -45,7 +46,7 @@ public interface WorkerPool extends AutoCloseable {
     /** How many worker JVMs this pool has started so far. */
     int workersStarted();
 
-    /** Lets the workers quit, and kills any that do not. */
+    /** Lets the workers quit, and kills any that have not within two seconds. */
     @Override
     void close();
 }

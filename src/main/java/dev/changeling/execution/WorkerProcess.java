@@ -28,7 +28,8 @@ import java.util.function.Consumer;
 
 /**
  * One worker JVM seen from the tool: started with the tests' output going to a log file, spoken to over
- * its own loopback socket, and killed (with anything it started) on a deadline, on stop or on close.
+ * its own loopback socket, and ended the way a test JVM ends (asked to exit, so its shutdown hooks run) on a
+ * deadline, on stop or on close; killed, with anything it started, only when it has not exited in time.
  */
 final class WorkerProcess {
 
@@ -52,6 +53,11 @@ final class WorkerProcess {
      * or swallows the error, never does.
      */
     static final long STOP_GRACE_MILLIS = 1_000;
+    /**
+     * How long a worker asked to exit may take to run its shutdown hooks (files marked {@code deleteOnExit} are
+     * deleted by one) before it is killed.
+     */
+    static final long EXIT_GRACE_MILLIS = 2_000;
     private static final int TAIL_BYTES = 8192;
     private static final int TAIL_LINES = 3;
     private static final int TAIL_CHARACTERS = 400;
@@ -65,10 +71,18 @@ final class WorkerProcess {
     private DataInputStream in;
     private DataOutputStream out;
     private Socket control;
-    private DataOutputStream stops;
+    private final Object controlLock = new Object();
+    private volatile DataOutputStream stops;
     /** Steps the worker announced so far; the worker numbers them the same way, from 1. */
     private int steps;
     private volatile boolean killed;
+    /** Set when the tool asked the worker to exit: its death from then on is no crash. */
+    private volatile boolean ending;
+    private volatile long exitAskedNanos;
+    /** What the worker had started when it was asked to exit: its exit leaves them without a parent to find them by. */
+    private volatile List<ProcessHandle> childrenWhenAsked = List.of();
+    /** How the worker ended, when it died unasked: "exit 137", say. */
+    private volatile String death;
     private final Set<String> containersRun = new HashSet<>();
 
     private WorkerProcess(Process process, ServerSocket server, String token, Path log) {
@@ -149,7 +163,7 @@ final class WorkerProcess {
             String answer = Wire.readString(in);
             in.readLong();
             if (hello != Wire.HELLO || version != Wire.VERSION || !token.equals(answer)) {
-                kill();
+                end();
                 throw new IllegalStateException("the process that answered is not this tool's worker, or speaks protocol " + version
                         + " instead of " + Wire.VERSION);
             }
@@ -158,12 +172,12 @@ final class WorkerProcess {
             control.setTcpNoDelay(true);
             control.setSoTimeout((int) Math.max(1, TimeUnit.NANOSECONDS.toMillis(deadline - System.nanoTime())));
             if (!token.equals(Wire.readString(new DataInputStream(new BufferedInputStream(control.getInputStream()))))) {
-                kill();
+                end();
                 throw new IllegalStateException("the second connection is not this worker's");
             }
             stops = new DataOutputStream(new BufferedOutputStream(control.getOutputStream()));
         } catch (SocketTimeoutException e) {
-            kill();
+            end();
             throw new Lost(true, "the worker JVM did not start within " + timeoutMillis + " ms");
         } catch (IOException e) {
             throw died(launchMark);
@@ -185,7 +199,7 @@ final class WorkerProcess {
             expect(Wire.PREPARED, next(deadline));
             return new Prepared(Wire.readInts(in), Wire.readStrings(in));
         } catch (SocketTimeoutException e) {
-            kill();
+            end();
             throw new Lost(true, "preparing the worker took more than " + timeoutMillis + " ms");
         } catch (IOException e) {
             throw died(mark);
@@ -224,7 +238,7 @@ final class WorkerProcess {
             return new Baseline(tests, containers, prepared.reachedWhileInitialising(), prepared.initialisationFailures(),
                     System.nanoTime() - start);
         } catch (SocketTimeoutException e) {
-            kill();
+            end();
             throw new Lost(true, "the unmutated suite took more than " + timeoutMillis + " ms");
         } catch (IOException e) {
             throw died(mark);
@@ -235,7 +249,7 @@ final class WorkerProcess {
      * Runs one mutant's tests; a deadline or the worker's death becomes the outcome. Each step the worker announces
      * gets its own deadline, from the baseline times of the tests in it. At a step's deadline the worker is told to
      * stop that step in place (its switches throw); only if it has not answered within {@link #STOP_GRACE_MILLIS}
-     * more is it killed.
+     * more is it ended.
      */
     JobResult run(MutantJob job) {
         long start = System.nanoTime();
@@ -257,8 +271,7 @@ final class WorkerProcess {
                     if (stopSent || steps == 0) {
                         throw expired;
                     }
-                    stops.writeInt(steps);
-                    stops.flush();
+                    tell(steps);
                     stopSent = true;
                     deadline = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(STOP_GRACE_MILLIS);
                     continue;
@@ -280,10 +293,10 @@ final class WorkerProcess {
                 runs.add(new TestRun(id, status, nanos, Wire.readString(in)));
             }
         } catch (SocketTimeoutException e) {
-            kill();
+            end();
             return new JobResult(job.key(), Outcome.TIMED_OUT, running(job, runs),
                     "no answer within " + allowed + " ms" + (stopSent ? ", nor " + STOP_GRACE_MILLIS + " ms after the stop;"
-                            + " the worker was killed" : ""), runs, System.nanoTime() - start);
+                            + " the worker was ended" : ""), runs, System.nanoTime() - start);
         } catch (IOException e) {
             Lost lost = died(mark);
             return new JobResult(job.key(), Outcome.CRASHED, running(job, runs), lost.getMessage(), runs, System.nanoTime() - start);
@@ -321,15 +334,51 @@ final class WorkerProcess {
         return finished.size() < job.tests().size() ? job.tests().get(finished.size()) : null;
     }
 
-    /** Asks the worker to quit, and kills it if it has not within a moment. */
+    /**
+     * Tells an idle worker to quit, as at the end of a run (it closes its launcher session, then exits), and
+     * kills it if it has not within {@link #EXIT_GRACE_MILLIS}. A worker that cannot be told is ended.
+     */
     void close() {
-        if (out != null && process.isAlive()) {
+        if (out == null || ending || !process.isAlive()) {
+            end();
+            return;
+        }
+        markEnding();
+        try {
+            out.writeByte(Wire.QUIT);
+            out.flush();
+        } catch (IOException ignored) {
+            // it is going away anyway
+        }
+        awaitExit();
+    }
+
+    /**
+     * Ends the JVM the way a test JVM ends, whatever it is doing: asked to exit, so its shutdown hooks run, and
+     * killed with anything it started if it has not exited within {@link #EXIT_GRACE_MILLIS}.
+     */
+    void end() {
+        askToExit();
+        awaitExit();
+    }
+
+    /**
+     * Asks the JVM to exit, over the connection that is read even while a test runs, and returns at once; any
+     * thread may call it. {@link #awaitExit} then waits for the exit.
+     */
+    void askToExit() {
+        if (stops == null || !process.isAlive() || !markEnding()) {
+            return;
+        }
+        tell(Wire.EXIT);
+    }
+
+    /** Waits out what is left of the grace period since the worker was asked to exit, then kills what is left. */
+    void awaitExit() {
+        long left = EXIT_GRACE_MILLIS - TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - exitAskedNanos);
+        if (ending && left > 0) {
             try {
-                out.writeByte(Wire.QUIT);
-                out.flush();
-                process.waitFor(2, TimeUnit.SECONDS);
-            } catch (IOException ignored) {
-                // it is going away anyway
+                process.waitFor(left, TimeUnit.MILLISECONDS);
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
             }
@@ -337,10 +386,39 @@ final class WorkerProcess {
         kill();
     }
 
-    /** Kills the JVM and every process it started, and waits until they are gone. */
+    /** Marks the worker as ending and notes what it runs; false when that was done already. */
+    private synchronized boolean markEnding() {
+        if (ending) {
+            return false;
+        }
+        childrenWhenAsked = process.descendants().toList();
+        exitAskedNanos = System.nanoTime();
+        ending = true;
+        return true;
+    }
+
+    /** Writes a number on the second connection: a step to stop, or {@link Wire#EXIT}. */
+    private void tell(int number) {
+        synchronized (controlLock) {
+            try {
+                stops.writeInt(number);
+                stops.flush();
+            } catch (IOException ignored) {
+                // the worker is gone already; waiting for it finds that out
+            }
+        }
+    }
+
+    /** How the worker ended when it died unasked ("exit 137"), or null while it has not. */
+    String death() {
+        return death;
+    }
+
+    /** Kills the JVM and every process it started, and waits until they are gone; {@link Reaper} kills leftovers so. */
     void kill() {
         killed = true;
-        List<ProcessHandle> descendants = process.descendants().toList();
+        List<ProcessHandle> descendants = new ArrayList<>(childrenWhenAsked);
+        descendants.addAll(process.descendants().toList());
         process.destroyForcibly();
         descendants.forEach(ProcessHandle::destroyForcibly);
         closeQuietly(socket);
@@ -383,16 +461,19 @@ final class WorkerProcess {
 
     /** The worker is gone: says how it ended (exit code and its last line of output) and makes sure it is dead. */
     private Lost died(long logMark) {
-        boolean wasKilled = killed;
+        boolean wasEnded = killed || ending;
         try {
             process.waitFor(5, TimeUnit.SECONDS);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
         }
-        String how = process.isAlive() ? "the worker JVM closed its connection"
-                : "the worker JVM exited with code " + process.exitValue();
-        kill();
-        if (wasKilled) {
+        boolean exited = !process.isAlive();
+        String how = exited ? "the worker JVM exited with code " + process.exitValue() : "the worker JVM closed its connection";
+        if (!wasEnded) {
+            death = exited ? "exit " + process.exitValue() : "it closed its connection";
+        }
+        end();
+        if (wasEnded) {
             return new Lost(false, "the worker JVM was stopped");
         }
         String last = lastLines(logMark);

@@ -83,6 +83,12 @@ final class WorkerSlot {
                 pool.throwIfStopped();
                 result = runInWorker(job);
             }
+            if (result.outcome() == Outcome.CRASHED) {
+                String death = worker == null ? null : worker.death();
+                retire();
+                pool.throwIfStopped();
+                result = CrashCheck.settle(result, death, runInWorker(job));
+            }
         } catch (RuntimeException e) {
             retire();
             throw e;
@@ -143,15 +149,21 @@ final class WorkerSlot {
         return worker.run(MutantJob.schema(key, new int[0], List.of(testId), settings.startTimeout().toMillis()));
     }
 
-    /** Kills whatever this slot has running, at once. */
-    void stop() {
-        WorkerProcess current = live;
-        if (current != null) {
-            current.kill();
+    /** Asks whatever this slot has running to exit now, whatever it does (Ctrl-C); {@link #awaitStop} follows. */
+    void askToStop() {
+        for (WorkerProcess running : new WorkerProcess[] {live, liveAlone}) {
+            if (running != null) {
+                running.askToExit();
+            }
         }
-        WorkerProcess alone = liveAlone;
-        if (alone != null) {
-            alone.kill();
+    }
+
+    /** Waits for what this slot ran to exit, and kills what has not within the grace period since it was asked. */
+    void awaitStop() {
+        for (WorkerProcess running : new WorkerProcess[] {live, liveAlone}) {
+            if (running != null) {
+                running.awaitExit();
+            }
         }
     }
 
@@ -163,7 +175,21 @@ final class WorkerSlot {
         }
     }
 
+    /** A mutant compiled alone runs in a fresh worker of its own; a crash there is confirmed in another one. */
     private JobResult executeAlone(MutantJob job) {
+        AloneRun first = runAlone(job);
+        if (first.result().outcome() != Outcome.CRASHED) {
+            return first.result();
+        }
+        pool.throwIfStopped();
+        return CrashCheck.settle(first.result(), first.death(), runAlone(job).result());
+    }
+
+    /** The result of one run of a mutant compiled alone, and how its worker died, if it did. */
+    private record AloneRun(JobResult result, String death) {
+    }
+
+    private AloneRun runAlone(MutantJob job) {
         long start = System.nanoTime();
         WorkerProcess alone = launch(List.of(job.aloneClasses()), aloneTemp, aloneArgumentFile, true);
         try {
@@ -172,10 +198,11 @@ final class WorkerSlot {
             } catch (WorkerProcess.Lost lost) {
                 pool.throwIfStopped();
                 // Only the mutant's own classes differ from a worker that prepares fine: its static initialiser did this.
-                return new JobResult(job.key(), lost.timedOut ? Outcome.TIMED_OUT : Outcome.CRASHED, null,
-                        "while its classes were initialised: " + lost.getMessage(), List.of(), System.nanoTime() - start);
+                return new AloneRun(new JobResult(job.key(), lost.timedOut ? Outcome.TIMED_OUT : Outcome.CRASHED, null,
+                        "while its classes were initialised: " + lost.getMessage(), List.of(), System.nanoTime() - start),
+                        alone.death());
             }
-            return alone.run(job);
+            return new AloneRun(alone.run(job), alone.death());
         } finally {
             alone.close();
             liveAlone = null;
@@ -216,7 +243,7 @@ final class WorkerSlot {
                 prepared = answer;
             }
         } catch (WorkerProcess.Lost lost) {
-            started.kill();
+            started.end();
             live = null;
             pool.throwIfStopped();
             throw new UserError("a worker JVM failed while the production classes were initialised: " + lost.getMessage()
@@ -244,22 +271,23 @@ final class WorkerSlot {
             live = started;
         }
         if (pool.stopped()) {
-            started.kill();
+            started.end();
             throw new CancellationException("stopped");
         }
         try {
             started.connect(settings.startTimeout().toMillis());
         } catch (WorkerProcess.Lost lost) {
-            started.kill();
+            started.end();
             pool.throwIfStopped();
             throw new UserError("a worker JVM did not start: " + lost.getMessage() + "; its output is in " + log);
         }
         return started;
     }
 
+    /** Ends the current worker the way a test JVM ends (killed only if it will not), and empties its temp folder. */
     private void retire() {
         if (worker != null) {
-            worker.kill();
+            worker.end();
         }
         worker = null;
         live = null;

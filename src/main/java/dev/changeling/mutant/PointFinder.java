@@ -23,11 +23,16 @@ public final class PointFinder {
         this.operators = List.copyOf(operators);
     }
 
+    /**
+     * The points of a parsed file. Where the parser read Unicode escapes decoded, nodes that hold one are not
+     * visited and hosts that hold one are not changed: the written text there is not the text the tree describes.
+     */
     public List<Point> find(JavaSources.Parsed parsed) {
         SourceFile file = parsed.file();
-        Proposals proposals = new Proposals(file);
+        Proposals proposals = new Proposals(file, parsed::touchesDecodedEscape);
+        boolean decoded = !parsed.decodedEscapes().isEmpty();
         parsed.unit().walk(Node.TreeTraversal.PREORDER, node -> {
-            if (!Eligibility.excluded(node)) {
+            if (!Eligibility.excluded(node) && !(decoded && parsed.touchesDecodedEscape(file.spanOf(node)))) {
                 for (MutationOperator operator : operators) {
                     proposals.from(operator);
                     operator.visit(node, proposals);

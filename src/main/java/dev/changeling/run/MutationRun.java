@@ -53,7 +53,7 @@ public final class MutationRun {
         return run();
     }
 
-    /** Stops the run from another thread (Ctrl-C): workers are killed and the finished verdicts kept. */
+    /** Stops the run from another thread (Ctrl-C): workers are ended (asked to exit, killed if they will not) and the finished verdicts kept. */
     public void stop() {
         stopped = true;
         WorkerPool running = pool;

@@ -14,7 +14,9 @@ import java.util.List;
  * <pre>
  * worker -> tool on connect  HELLO version:int token:str pid:long
  * worker -> tool, 2nd socket TOKEN token:str, then tool -> worker: stepNumber:int whenever a step's deadline passes
- *                            (the worker's switches then throw until that step ends; steps count from 1 per worker)
+ *                            (the worker's switches then throw until that step ends; steps count from 1 per worker),
+ *                            or EXIT (-1) when the tool is done with the worker, whatever it runs: the worker exits
+ *                            through System.exit, so its shutdown hooks run (deleteOnExit files go) as in a test JVM
  * tool -> worker  PREPARE    points:int preinitialise:strs includedTags:strs excludedTags:strs parameters:strs (name, value, name, …)
  *                   reply    PREPARED reachedWhileInitialising:ints failures:strs
  * tool -> worker  BASELINE   testClasses:strs
@@ -25,7 +27,7 @@ import java.util.List;
  *                   reply    STEP count:int (before each group of tests run in one request: the next count tests)
  *                            TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE
  *                            (status STOPPED: the step was stopped at its deadline; it is the last test reported)
- * tool -> worker  QUIT       (no reply; the worker exits)
+ * tool -> worker  QUIT       (no reply; the worker closes its launcher session and exits through System.exit)
  * any reply may instead be   FAILURE message:str   (the command failed inside the worker; the worker goes on)
  * </pre>
  *
@@ -34,7 +36,7 @@ import java.util.List;
  */
 public final class Wire {
 
-    public static final int VERSION = 4;
+    public static final int VERSION = 5;
     private static final int MAX_SIZE = 1 << 26;
 
     public static final byte HELLO = 1;
@@ -49,6 +51,9 @@ public final class Wire {
     public static final byte QUIT = 10;
     public static final byte FAILURE = 11;
     public static final byte STEP = 12;
+
+    /** Sent on the second connection instead of a step number: exit now, as a test JVM does when its tests end. */
+    public static final int EXIT = -1;
 
     /** The test passed. */
     public static final byte PASSED = 0;

@@ -45,8 +45,8 @@ public final class WorkerMain {
     }
 
     /**
-     * Opens the second connection, over which the tool names a step whose deadline passed; a thread of its own
-     * reads it, as the main thread is then busy in the test that runs too long.
+     * Opens the second connection, over which the tool names a step whose deadline passed, or asks the JVM to exit;
+     * a thread of its own reads it, as the main thread is then busy in the test that runs too long.
      */
     private static void listenForStops(int port, String token) throws IOException {
         Socket control = new Socket(InetAddress.getLoopbackAddress(), port);
@@ -57,7 +57,12 @@ public final class WorkerMain {
         Thread listener = new Thread(() -> {
             try {
                 while (true) {
-                    Probe.stop(stops.readInt());
+                    int step = stops.readInt();
+                    if (step == Wire.EXIT) {
+                        exitAsATestJvmDoes();
+                        continue;
+                    }
+                    Probe.stop(step);
                 }
             } catch (IOException toolClosed) {
                 // the tool is done with this worker
@@ -65,6 +70,19 @@ public final class WorkerMain {
         }, "changeling-stop-listener");
         listener.setDaemon(true);
         listener.start();
+    }
+
+    /**
+     * Exits through {@code System.exit}, so the shutdown hooks of the tests run (files marked {@code deleteOnExit}
+     * are deleted by one) while a test may still be running. A security manager that refuses leaves it to the
+     * tool, which kills the JVM after a grace period.
+     */
+    private static void exitAsATestJvmDoes() {
+        try {
+            System.exit(0);
+        } catch (SecurityException refused) {
+            // the tool kills this JVM when its grace period ends
+        }
     }
 
     /** A test stuck in a loop never reads the socket again, so the tool's death must be noticed apart from it. */

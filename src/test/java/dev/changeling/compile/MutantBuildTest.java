@@ -133,6 +133,43 @@ class MutantBuildTest {
     }
 
     @Nested
+    class UnicodeEscapesOutsideLiterals {
+
+        /** The sum is written with an escaped plus, which javac decodes before it reads the code (JLS §3.3). */
+        private static final String KETTLE = """
+                package sample;
+
+                public final class Kettle {
+
+                    private Kettle() {
+                    }
+
+                    public static int doubled(int litres) {
+                        return litres \\u002B litres;
+                    }
+
+                    public static boolean boils(int degrees, int altitude) {
+                        return degrees >= 100 - altitude / 300;
+                    }
+                }
+                """;
+
+        @Test
+        void aFileWithAnEscapedOperator_isMutatedAroundIt_andEveryMutantRunsAsItsOwnFile() {
+            TestProject project = TestProject.create(dir, Map.of("sample/Kettle.java", KETTLE));
+            List<Point> points = project.points("sample/Kettle.java", SampleOperators.all());
+            List<Mutant> mutants = firstOrder(points);
+
+            assertFalse(points.isEmpty(), "the file is parsed, not skipped");
+            points.forEach(point -> assertEquals(13, point.line(), "no point touches the escape: " + point));
+            BuildResult result = project.build(mutants);
+            Map<Placement.Kind, Integer> counts = Equivalence.assertEachMutantRunsAsItsOwnFile(project, result, mutants,
+                    "sample.Kettle");
+            assertEquals(mutants.size(), count(counts, Placement.Kind.IN_SCHEMA), counts.toString());
+        }
+    }
+
+    @Nested
     class Stillborn {
 
         private final MutationOperator swapOperands = SampleOperators.of("sample-swap", (node, out) -> {

@@ -25,6 +25,13 @@ import javax.tools.ToolProvider;
  * that never ends; 11 {@code write} writes one mark too many on a sheet that a test class shares between its tests;
  * 12 {@code retry} never ends and swallows every error thrown in it, a stop included.
  *
+ * <p>{@code TillTest}, the first time it runs where the system property {@code shop.tillMarker} names a file that
+ * is not there yet, makes that file, connects to the port {@code shop.till} names, sends its JVM's pid and waits
+ * for an answer that never comes, so a test can kill its JVM from outside while it runs; then it checks {@code add}.
+ *
+ * <p>{@code ScratchTest} makes the folder that the system property {@code shop.scratch} names and marks it
+ * {@code deleteOnExit}, as tests that tidy up after themselves do: only a JVM that exits normally deletes it.
+ *
  * <p>A launcher started in a JVM with {@code -Dshop.slowStart=<ms>} takes that long to start, once per JVM, as
  * loading a large suite's engines and classes can: {@code shop.SlowStart}, a registered test execution listener,
  * sleeps in its static initialiser.
@@ -190,6 +197,45 @@ final class TinyProject {
                         static final StringBuilder NOTE = new StringBuilder();
                         @Test void notesThenCounts() { NOTE.append('y'); assertEquals(3, Prices.countUpTo(3)); NOTE.setLength(0); }
                         @Test void findsNoNote() { assertEquals("", NOTE.toString()); }
+                    }
+                    """),
+            Map.entry("shop/TillTest.java", """
+                    package shop;
+
+                    import static org.junit.jupiter.api.Assertions.assertEquals;
+
+                    import java.io.File;
+                    import java.io.PrintWriter;
+                    import java.net.InetAddress;
+                    import java.net.Socket;
+                    import org.junit.jupiter.api.Test;
+
+                    class TillTest {
+                        @Test void addsUpTheTill() throws Exception {
+                            String marker = System.getProperty("shop.tillMarker");
+                            if (marker != null && new File(marker).createNewFile()) {
+                                try (Socket till = new Socket(InetAddress.getLoopbackAddress(), Integer.getInteger("shop.till"))) {
+                                    PrintWriter out = new PrintWriter(till.getOutputStream(), true);
+                                    out.println(ProcessHandle.current().pid());
+                                    till.getInputStream().read();
+                                }
+                            }
+                            assertEquals(5, Prices.add(2, 3));
+                        }
+                    }
+                    """),
+            Map.entry("shop/ScratchTest.java", """
+                    package shop;
+
+                    import java.io.File;
+                    import org.junit.jupiter.api.Test;
+
+                    class ScratchTest {
+                        @Test void keepsAScratchFolderWhileTheJvmRuns() {
+                            File scratch = new File(System.getProperty("shop.scratch", "target/scratch"));
+                            scratch.mkdirs();
+                            scratch.deleteOnExit();
+                        }
                     }
                     """),
             Map.entry("shop/RatesTest.java", """

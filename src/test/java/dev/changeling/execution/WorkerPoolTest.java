@@ -298,7 +298,7 @@ class WorkerPoolTest {
                         result -> workersWhenTold.add(liveWorkers()));
                 assertEquals(Outcome.TIMED_OUT, results.get(0).outcome());
                 assertEquals(method("HostileTest", "retries"), results.get(0).testId());
-                assertTrue(results.get(0).message().endsWith("the worker was killed"), results.get(0).message());
+                assertTrue(results.get(0).message().endsWith("the worker was ended"), results.get(0).message());
                 assertEquals(List.of(), workersWhenTold.get(0), "the killed worker is gone before its result is told");
                 assertEquals(Outcome.KILLED, results.get(1).outcome());
                 assertEquals(2, pool.workersStarted());
@@ -404,11 +404,118 @@ class WorkerPoolTest {
                 assertEquals(Outcome.CRASHED, results.get(0).outcome());
                 assertEquals(method("HostileTest", "checksOut"), results.get(0).testId());
                 assertTrue(results.get(0).message().contains("exited with code 7"), results.get(0).message());
+                assertTrue(results.get(0).message().endsWith("; again in a fresh worker"), results.get(0).message());
                 // the error fails the test as Surefire's own run would fail it; no JVM flag of ours turns it into an exit
                 assertEquals(Outcome.KILLED, results.get(1).outcome());
                 assertTrue(results.get(1).message().startsWith("OutOfMemoryError"), results.get(1).message());
                 assertEquals(Outcome.KILLED, results.get(2).outcome());
-                assertEquals(3, pool.workersStarted());
+                // one for each job, and one more for the exit, which is confirmed in a fresh worker
+                assertEquals(4, pool.workersStarted());
+            }
+        }
+
+        /**
+         * The till test sends its worker's pid the first time it runs, and waits; the worker is then killed from
+         * outside, as kill -9 or the kernel's out-of-memory killer would. Exit 137 is 128 + 9, SIGKILL's number:
+         * how the JDK reports a process ended by a signal on Unix (java.lang.Process#exitValue, from memory).
+         */
+        @Test
+        void aWorkerKilledFromOutside_isNoCrash_theMutantRunsAgainInAFreshWorkerThatGivesTheVerdict() throws Exception {
+            assumeTrue(!System.getProperty("os.name").startsWith("Windows"), "exit codes of killed processes are Unix's");
+            Path marker = project.root.resolve("target/till-marker");
+            Files.deleteIfExists(marker);
+            try (java.net.ServerSocket till = new java.net.ServerSocket(0, 1, java.net.InetAddress.getLoopbackAddress())) {
+                WorkerSettings settings = settings("killed-outside").withSystemProperties(java.util.Map.of(
+                        "shop.till", Integer.toString(till.getLocalPort()), "shop.tillMarker", marker.toString()));
+                Thread killer = new Thread(() -> killTheWorkerThatCalls(till), "killer");
+                killer.start();
+                try (WorkerPool pool = WorkerPool.open(settings, setup())) {
+                    List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")),
+                            job("till", 0, method("TillTest", "addsUpTheTill"))), result -> { });
+                    killer.join();
+                    JobResult tallied = results.get(1);
+                    assertEquals(Outcome.KILLED, tallied.outcome(), tallied::toString);
+                    assertTrue(tallied.message().startsWith("AssertionFailedError"), tallied.message());
+                    assertTrue(tallied.message().endsWith("; the first worker died (exit 137) and the mutant ran again in a fresh one"),
+                            tallied.message());
+                    assertEquals(2, pool.workersStarted());
+                }
+            }
+        }
+
+        private void killTheWorkerThatCalls(java.net.ServerSocket till) {
+            try (java.net.Socket call = till.accept()) {
+                String pid = new java.io.BufferedReader(new java.io.InputStreamReader(call.getInputStream())).readLine();
+                ProcessHandle worker = ProcessHandle.of(Long.parseLong(pid.strip())).orElseThrow();
+                worker.destroyForcibly();
+                worker.onExit().join();
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        }
+    }
+
+    /**
+     * A worker the tool is done with exits as a test JVM exits, so the tests' shutdown hooks run: a folder marked
+     * {@code deleteOnExit} (by {@code ScratchTest}) is gone once the worker has been replaced or stopped.
+     */
+    @Nested
+    class Ending {
+
+        Path scratch(String name) {
+            return project.root.resolve("target/scratch-" + name);
+        }
+
+        WorkerSettings marking(String name) {
+            return settings(name).withSystemProperties(java.util.Map.of("shop.scratch", scratch(name).toString()));
+        }
+
+        MutantJob marks() {
+            return job("marks", 6, method("ScratchTest", "keepsAScratchFolderWhileTheJvmRuns"));
+        }
+
+        @Test
+        void aWorkerEndedAfterALoopThatSwallowsTheStop_runsItsShutdownHooks() {
+            try (WorkerPool pool = WorkerPool.open(marking("swallowing"), setup())) {
+                List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")), marks(),
+                        MutantJob.schema("retries", new int[] {12}, List.of(method("HostileTest", "retries")), 1_000)),
+                        result -> { });
+                assertFalse(Files.exists(scratch("swallowing")), "the worker was killed before its shutdown hooks ran");
+                assertEquals(Outcome.TIMED_OUT, results.get(2).outcome());
+                assertTrue(results.get(2).message().endsWith("the worker was ended"), results.get(2).message());
+            }
+        }
+
+        @Test
+        void aWorkerReplacedAfterItsHeapRanOut_runsItsShutdownHooks() {
+            try (WorkerPool pool = WorkerPool.open(marking("hoarding"), setup())) {
+                List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")), marks(),
+                        job("hogs", 4, method("HostileTest", "hogs"))), result -> { });
+                assertEquals(Outcome.KILLED, results.get(2).outcome());
+                assertFalse(Files.exists(scratch("hoarding")), "the worker was killed before its shutdown hooks ran");
+            }
+        }
+
+        @Test
+        void workersStoppedMidTest_runTheirShutdownHooks() throws Exception {
+            CountDownLatch marked = new CountDownLatch(2);
+            try (WorkerPool pool = WorkerPool.open(marking("stopped"), setup())) {
+                Thread stopper = new Thread(() -> {
+                    try {
+                        marked.await();
+                        pool.stop();
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                });
+                stopper.start();
+                List<JobResult> results = pool.run(List.of(job("warm", 0, method("PricesTest", "addsZero")), marks(),
+                        MutantJob.schema("loops", new int[] {2}, List.of(method("HostileTest", "countsToThree")), 600_000)),
+                        result -> marked.countDown());
+                stopper.join();
+                assertEquals(List.of("warm", "marks"), keys(results));
+                assertEquals(List.of(), liveWorkers());
+                assertFalse(Files.exists(scratch("stopped")), "the worker was killed before its shutdown hooks ran");
             }
         }
     }

@@ -196,6 +196,12 @@ class InterruptedRunTest {
             assertEquals(filesBefore, SampleProjects.fingerprint(project));
         }
 
+        /** The baseline ran the sample's SpoolFolderTest, whose folder only a worker that exits normally deletes. */
+        @Test
+        void endsItsWorkersAsTestJvmsEnd_soTheirDeleteOnExitFilesGo() {
+            assertFalse(Files.exists(project.resolve(HostileRunTest.SPOOL)), "a worker was killed before its shutdown hooks ran");
+        }
+
         @Test
         void leavesNoWorkerJvm_ofTheOnesThatRan() {
             assertNotEquals(List.of(), workersWhileRunning, "no worker was found while the run went on, so the check below proves nothing");

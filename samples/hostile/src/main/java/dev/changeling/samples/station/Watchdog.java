@@ -20,4 +20,12 @@ public final class Watchdog {
         }
         return faults == 0 ? "healthy" : "degraded";
     }
+
+    /** Whether the station keeps running after one more fault. */
+    public static boolean outlastsAnotherFault(int faults) {
+        // Hostile: the plus below is a Unicode escape, which javac decodes before it reads anything (JLS §3.3), so
+        // the written text of this comparison is not the text it means. The file is mutated all the same; only
+        // code whose text holds the escape gets no mutant.
+        return faults \u002B 1 < FATAL_FAULTS;
+    }
 }
