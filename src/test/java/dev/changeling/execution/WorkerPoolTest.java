@@ -425,8 +425,8 @@ class WorkerPoolTest {
             Path marker = project.root.resolve("target/till-marker");
             Files.deleteIfExists(marker);
             try (java.net.ServerSocket till = new java.net.ServerSocket(0, 1, java.net.InetAddress.getLoopbackAddress())) {
-                WorkerSettings settings = settings("killed-outside").withSystemProperties(java.util.Map.of(
-                        "shop.till", Integer.toString(till.getLocalPort()), "shop.tillMarker", marker.toString()));
+                WorkerSettings settings = settings("killed-outside").toBuilder().systemProperties(java.util.Map.of(
+                        "shop.till", Integer.toString(till.getLocalPort()), "shop.tillMarker", marker.toString())).build();
                 Thread killer = new Thread(() -> killTheWorkerThatCalls(till), "killer");
                 killer.start();
                 try (WorkerPool pool = WorkerPool.open(settings, setup())) {
@@ -467,7 +467,7 @@ class WorkerPoolTest {
         }
 
         WorkerSettings marking(String name) {
-            return settings(name).withSystemProperties(java.util.Map.of("shop.scratch", scratch(name).toString()));
+            return settings(name).toBuilder().systemProperties(java.util.Map.of("shop.scratch", scratch(name).toString())).build();
         }
 
         MutantJob marks() {
