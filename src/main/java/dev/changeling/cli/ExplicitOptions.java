@@ -1,7 +1,7 @@
 package dev.changeling.cli;
 
+import dev.changeling.ExitCode;
 import dev.changeling.UserError;
-import dev.changeling.project.DiscoveryOptions;
 import dev.changeling.project.ExplicitProject;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -36,12 +36,8 @@ final class ExplicitOptions {
         }
         if (sourceRoots.isEmpty() || classes == null || testClasses == null) {
             throw new UserError("a project Maven does not build needs --source-root, --classes and --test-classes"
-                    + " (and --classpath for its libraries); give all of them, or run in a folder with pom.xml");
+                    + " (and --classpath for its libraries); give all of them, or run in a folder with pom.xml", ExitCode.USAGE);
         }
         return Optional.of(new ExplicitProject(sourceRoots, testSourceRoots, classes, testClasses, classpath));
-    }
-
-    DiscoveryOptions applyTo(DiscoveryOptions options) {
-        return project().map(options::withExplicitProject).orElse(options);
     }
 }

@@ -1,18 +1,8 @@
 package dev.changeling.cli;
 
-import dev.changeling.UserError;
-import dev.changeling.mutant.HigherOrder;
-import dev.changeling.mutant.MutantRequest;
-import dev.changeling.mutant.Point;
-import dev.changeling.mutant.Selection;
-import dev.changeling.operator.MutationOperator;
-import dev.changeling.operator.Operators;
-import java.nio.file.FileSystems;
-import java.nio.file.Path;
-import java.nio.file.PathMatcher;
+import dev.changeling.mutant.SelectionInput;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.function.Predicate;
 import picocli.CommandLine.Option;
 
 /** Which mutants to make: operators, orders, files, sampling. Shared by the commands that make mutants. */
@@ -46,44 +36,8 @@ final class MutantOptions {
             description = "Pick as many mutants as give a score within ±E at 95%% (Cochran), e.g. 0.05.")
     Double margin;
 
-    Selection selection(Predicate<Point> extraFilter) {
-        if (sample != null && margin != null) {
-            throw new UserError("--sample and --sample-for-margin both choose the sample size; give one of them");
-        }
-        List<MutationOperator> chosen;
-        try {
-            chosen = operators.isEmpty() ? Operators.defaults() : Operators.named(operators);
-        } catch (IllegalArgumentException e) {
-            throw new UserError(e.getMessage());
-        }
-        HigherOrder.Scope scope;
-        try {
-            scope = HigherOrder.Scope.valueOf(combineWithin.toUpperCase(java.util.Locale.ROOT));
-        } catch (IllegalArgumentException e) {
-            throw new UserError("--combine-within takes method, class or file, not '" + combineWithin + "'");
-        }
-        MutantRequest request;
-        try {
-            request = new MutantRequest(chosen, orders, scope, seed, filesFilter().and(extraFilter));
-        } catch (IllegalArgumentException e) {
-            throw new UserError("--orders: " + e.getMessage());
-        }
-        if (margin != null && !(margin > 0 && margin < 1)) {
-            throw new UserError("--sample-for-margin takes a margin between 0 and 1, such as 0.05, not " + margin);
-        }
-        if (sample != null && sample < 1) {
-            throw new UserError("--sample takes a positive number of mutants, not " + sample);
-        }
-        return new Selection(request, sample, margin, seed);
-    }
-
-    private Predicate<Point> filesFilter() {
-        if (fileGlobs.isEmpty()) {
-            return point -> true;
-        }
-        List<PathMatcher> matchers = fileGlobs.stream()
-                .map(glob -> FileSystems.getDefault().getPathMatcher("glob:" + glob))
-                .toList();
-        return point -> matchers.stream().anyMatch(matcher -> matcher.matches(Path.of(point.file())));
+    /** What was typed; the core checks it and makes the selection ({@link SelectionInput#resolve()}). */
+    SelectionInput input() {
+        return new SelectionInput(operators, orders, combineWithin, seed, fileGlobs, sample, margin);
     }
 }

@@ -46,7 +46,7 @@ final class MutantsCommand implements Callable<Integer> {
     public Integer call() {
         ProjectLayout layout = project.layout();
         Optional<ChangeScope> scope = change.spec().map(spec -> spec.resolve(layout.root()));
-        Selection selection = mutants.selection(point -> true);
+        Selection selection = mutants.input().resolve();
         Selection.Chosen chosen = scope.map(changed -> selection.narrowedTo(changed.filter())).orElse(selection)
                 .choose(layout, project.limits(layout));
         PrintWriter out = spec.commandLine().getOut();

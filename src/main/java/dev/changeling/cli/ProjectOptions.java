@@ -1,6 +1,5 @@
 package dev.changeling.cli;
 
-import dev.changeling.project.ExplicitProject;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.terminal.Style;
 import java.nio.file.Path;
@@ -25,11 +24,7 @@ final class ProjectOptions {
 
     /** The project's layout as every command works it out ({@link ProjectLayout#locate}). */
     ProjectLayout layout() {
-        return layout(Optional.empty());
-    }
-
-    ProjectLayout layout(Optional<ExplicitProject> explicit) {
-        return ProjectLayout.locate(paths.isEmpty() ? Path.of("") : paths.get(0), explicit);
+        return ProjectLayout.locate(paths.isEmpty() ? Path.of("") : paths.get(0), Optional.empty());
     }
 
     /** The paths that limit the work, or none when the whole project is meant. */

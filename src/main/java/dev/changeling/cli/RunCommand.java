@@ -4,12 +4,12 @@ import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.execution.WorkerSettings;
-import dev.changeling.project.DiscoveryOptions;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
 import dev.changeling.run.MutationRun;
+import dev.changeling.run.RunInput;
 import dev.changeling.run.RunListener;
 import dev.changeling.run.RunRequest;
 import dev.changeling.terminal.Progress;
@@ -21,7 +21,6 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -98,27 +97,14 @@ final class RunCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InterruptedException {
         if (minScore != null && !(minScore >= 0 && minScore <= 1)) {
-            throw new UserError("--min-score takes a score from 0 to 1, such as 0.8, not " + minScore);
+            throw new UserError("--min-score takes a score from 0 to 1, such as 0.8, not " + minScore, ExitCode.USAGE);
         }
-        ProjectLayout layout = project.layout(explicit.project());
+        RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
+                workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts)
+                .resolve();
+        ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Deadlines deadlines;
-        try {
-            deadlines = new Deadlines(timeFactor, timeExtraMillis);
-        } catch (IllegalArgumentException e) {
-            throw new UserError("--time-factor/--time-extra: " + e.getMessage());
-        }
-        if (workerHeap != null && !workerHeap.matches("[0-9]+[kKmMgGtT]?")) {
-            throw new UserError("--worker-heap takes a size such as 512m or 2g, not '" + workerHeap + "'", ExitCode.USAGE);
-        }
-        int workerCount = workers == null ? Runtime.getRuntime().availableProcessors() : workers;
-        if (workerCount < 1) {
-            throw new UserError("--workers takes a positive number, not " + workerCount);
-        }
-        RunRequest request = new RunRequest(layout, project.limits(layout), mutants.selection(point -> true),
-                change.spec(), explicit.applyTo(DiscoveryOptions.defaults().withMavenArguments(mavenArguments)),
-                workerCount, deadlines, Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
         Style style = project.style();
         ProgressListener listener = new ProgressListener(err, project.plain());
         MutationRun run = new MutationRun(request, listener);

@@ -1,5 +1,6 @@
 package dev.changeling.scope;
 
+import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import java.nio.file.Path;
 import java.util.Optional;
@@ -18,12 +19,13 @@ public record ChangeSpec(String sinceRevision, boolean uncommitted, Path diffFil
     /**
      * The change named by at most one of the three ways, or none when no way was used.
      *
-     * @throws UserError when more than one way names it
+     * @throws UserError (exit code 2) when more than one way names it
      */
     public static Optional<ChangeSpec> of(String sinceRevision, boolean uncommitted, Path diffFile) {
         int given = (sinceRevision != null ? 1 : 0) + (uncommitted ? 1 : 0) + (diffFile != null ? 1 : 0);
         if (given > 1) {
-            throw new UserError("--changed-since, --uncommitted and --diff-file each name the change; give one of them");
+            throw new UserError("--changed-since, --uncommitted and --diff-file each name the change; give one of them",
+                    ExitCode.USAGE);
         }
         return given == 0 ? Optional.empty() : Optional.of(new ChangeSpec(sinceRevision, uncommitted, diffFile));
     }

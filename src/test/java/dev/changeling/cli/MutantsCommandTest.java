@@ -95,7 +95,7 @@ class MutantsCommandTest {
     @Test
     void anUnknownOperatorIsOneLineWithTheKnownOnes() {
         Outcome listed = execute("mutants", SampleCopy.original("greenhouse").toString(), "--operators", "no-such-thing");
-        assertEquals(ExitCode.USER_ERROR, listed.code());
+        assertEquals(ExitCode.USAGE, listed.code());
         assertTrue(listed.err().startsWith("changeling: unknown operator 'no-such-thing'; known operators: relational-subset"), listed.err());
         assertEquals(1, listed.err().strip().lines().count(), listed.err());
     }

@@ -28,7 +28,7 @@ class RunCommandTest {
     void aProjectNamedByHandNeedsItsSourcesClassesAndTestClasses() throws IOException {
         Files.createDirectories(folder.resolve("src"));
         String[] outcome = run("run", folder.toString(), "--source-root", folder.resolve("src").toString());
-        assertEquals(Integer.toString(ExitCode.USER_ERROR), outcome[0], outcome[2]);
+        assertEquals(Integer.toString(ExitCode.USAGE), outcome[0], outcome[2]);
         assertTrue(outcome[2].startsWith("changeling: a project Maven does not build needs --source-root, --classes and --test-classes"), outcome[2]);
         assertEquals(1, outcome[2].strip().lines().count(), outcome[2]);
     }
@@ -36,14 +36,14 @@ class RunCommandTest {
     @Test
     void aMinimumScoreOutsideZeroToOneIsRefusedBeforeAnythingRuns() {
         String[] outcome = run("run", folder.toString(), "--min-score", "1.5");
-        assertEquals(Integer.toString(ExitCode.USER_ERROR), outcome[0], outcome[2]);
+        assertEquals(Integer.toString(ExitCode.USAGE), outcome[0], outcome[2]);
         assertTrue(outcome[2].contains("--min-score takes a score from 0 to 1"), outcome[2]);
     }
 
     @Test
     void twoWaysOfNamingTheChangeAreRefused() {
         String[] outcome = run("run", folder.toString(), "--uncommitted", "--changed-since", "HEAD");
-        assertEquals(Integer.toString(ExitCode.USER_ERROR), outcome[0], outcome[2]);
+        assertEquals(Integer.toString(ExitCode.USAGE), outcome[0], outcome[2]);
         assertTrue(outcome[2].contains("give one of them"), outcome[2]);
     }
 }

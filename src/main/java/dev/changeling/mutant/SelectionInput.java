@@ -1,0 +1,84 @@
+package dev.changeling.mutant;
+
+import dev.changeling.ExitCode;
+import dev.changeling.UserError;
+import dev.changeling.operator.MutationOperator;
+import dev.changeling.operator.Operators;
+import java.nio.file.FileSystems;
+import java.nio.file.Path;
+import java.nio.file.PathMatcher;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Predicate;
+
+/**
+ * Which mutants to make, as the user typed it: operator ids, orders, where k-order mutants combine, the seed,
+ * file globs and a sample size or margin. {@link #resolve()} checks it and makes the {@link Selection}.
+ *
+ * @param operators     operator ids; empty for the default set
+ * @param orders        mutant orders, 1 for first-order
+ * @param combineWithin method, class or file
+ * @param seed          the seed of combination and sampling
+ * @param fileGlobs     project-relative path globs; empty for every file
+ * @param sample        a sample size, or null
+ * @param margin        a margin for a sample sized by Cochran's formula, or null
+ */
+public record SelectionInput(List<String> operators, List<Integer> orders, String combineWithin, long seed,
+                             List<String> fileGlobs, Integer sample, Double margin) {
+
+    public SelectionInput {
+        operators = List.copyOf(operators);
+        orders = List.copyOf(orders);
+        fileGlobs = List.copyOf(fileGlobs);
+    }
+
+    /**
+     * The selection the input names.
+     *
+     * @throws UserError (exit code 2) naming the option whose value cannot be used
+     */
+    public Selection resolve() {
+        if (sample != null && margin != null) {
+            throw usage("--sample and --sample-for-margin both choose the sample size; give one of them");
+        }
+        List<MutationOperator> chosen;
+        try {
+            chosen = operators.isEmpty() ? Operators.defaults() : Operators.named(operators);
+        } catch (IllegalArgumentException e) {
+            throw usage(e.getMessage());
+        }
+        HigherOrder.Scope scope;
+        try {
+            scope = HigherOrder.Scope.valueOf(combineWithin.toUpperCase(Locale.ROOT));
+        } catch (IllegalArgumentException e) {
+            throw usage("--combine-within takes method, class or file, not '" + combineWithin + "'");
+        }
+        MutantRequest request;
+        try {
+            request = new MutantRequest(chosen, orders, scope, seed, filesFilter());
+        } catch (IllegalArgumentException e) {
+            throw usage("--orders: " + e.getMessage());
+        }
+        if (margin != null && !(margin > 0 && margin < 1)) {
+            throw usage("--sample-for-margin takes a margin between 0 and 1, such as 0.05, not " + margin);
+        }
+        if (sample != null && sample < 1) {
+            throw usage("--sample takes a positive number of mutants, not " + sample);
+        }
+        return new Selection(request, sample, margin, seed);
+    }
+
+    private Predicate<Point> filesFilter() {
+        if (fileGlobs.isEmpty()) {
+            return point -> true;
+        }
+        List<PathMatcher> matchers = fileGlobs.stream()
+                .map(glob -> FileSystems.getDefault().getPathMatcher("glob:" + glob))
+                .toList();
+        return point -> matchers.stream().anyMatch(matcher -> matcher.matches(Path.of(point.file())));
+    }
+
+    private static UserError usage(String message) {
+        return new UserError(message, ExitCode.USAGE);
+    }
+}

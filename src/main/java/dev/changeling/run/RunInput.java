@@ -1,0 +1,84 @@
+package dev.changeling.run;
+
+import dev.changeling.ExitCode;
+import dev.changeling.UserError;
+import dev.changeling.execution.Deadlines;
+import dev.changeling.mutant.SelectionInput;
+import dev.changeling.project.DiscoveryOptions;
+import dev.changeling.project.ExplicitProject;
+import dev.changeling.project.ProjectLayout;
+import dev.changeling.scope.ChangeSpec;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * A run as the user typed it. {@link #resolve()} is the one place that turns it into a {@link RunRequest}: it
+ * locates the layout, checks every value and fills in the defaults.
+ *
+ * @param paths            the project folder, or files and folders inside it; empty for the current folder
+ * @param explicit         the project's folders and classpath given by hand, if any
+ * @param selection        which mutants to make
+ * @param change           the change to limit mutation to, if any
+ * @param mavenArguments   extra arguments for every mvn call
+ * @param workers          worker JVMs at once, or null for one per core
+ * @param timeFactor       the deadline factor over the tests' baseline time
+ * @param timeExtraMillis  the constant added to every deadline
+ * @param workerHeap       each worker's heap (such as 512m), or null for the pom's or the default
+ * @param mutantsPerWorker mutants a worker runs before it is replaced
+ * @param skipTests        test class patterns to leave out
+ * @param skipTags         JUnit tags to leave out
+ * @param recheckTimeouts  whether timed-out mutants run again with ten times their deadline afterwards
+ */
+public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, SelectionInput selection,
+                       Optional<ChangeSpec> change, List<String> mavenArguments, Integer workers, double timeFactor,
+                       long timeExtraMillis, String workerHeap, int mutantsPerWorker, List<String> skipTests,
+                       List<String> skipTags, boolean recheckTimeouts) {
+
+    public RunInput {
+        paths = List.copyOf(paths);
+        mavenArguments = List.copyOf(mavenArguments);
+        skipTests = List.copyOf(skipTests);
+        skipTags = List.copyOf(skipTags);
+    }
+
+    /**
+     * The complete request.
+     *
+     * @throws UserError with exit code 2 naming the option whose value cannot be used, or 1 when the project
+     *                   cannot be located
+     */
+    public RunRequest resolve() {
+        Deadlines deadlines;
+        try {
+            deadlines = new Deadlines(timeFactor, timeExtraMillis);
+        } catch (IllegalArgumentException e) {
+            throw usage("--time-factor/--time-extra: " + e.getMessage());
+        }
+        if (workerHeap != null && !workerHeap.matches("[0-9]+[kKmMgGtT]?")) {
+            throw usage("--worker-heap takes a size such as 512m or 2g, not '" + workerHeap + "'");
+        }
+        int workerCount = workers == null ? Runtime.getRuntime().availableProcessors() : workers;
+        if (workerCount < 1) {
+            throw usage("--workers takes a positive number, not " + workerCount);
+        }
+        if (mutantsPerWorker < 1) {
+            throw usage("--mutants-per-worker takes a positive number, not " + mutantsPerWorker);
+        }
+        ProjectLayout layout = ProjectLayout.locate(paths.isEmpty() ? Path.of("") : paths.get(0), explicit);
+        List<Path> limits = paths.stream()
+                .map(path -> path.toAbsolutePath().normalize())
+                .filter(path -> !path.equals(layout.root()))
+                .toList();
+        DiscoveryOptions discovery = DiscoveryOptions.defaults().withMavenArguments(mavenArguments);
+        if (explicit.isPresent()) {
+            discovery = discovery.withExplicitProject(explicit.get());
+        }
+        return new RunRequest(layout, limits, selection.resolve(), change, discovery, workerCount, deadlines,
+                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
+    }
+
+    private static UserError usage(String message) {
+        return new UserError(message, ExitCode.USAGE);
+    }
+}
