@@ -3,25 +3,23 @@ package dev.changeling.cli;
 import dev.changeling.AtomicFiles;
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
-import dev.changeling.analysis.Score;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.Gate;
 import dev.changeling.review.Settled;
+import dev.changeling.review.Standing;
 import dev.changeling.review.export.MarkdownReport;
 import dev.changeling.review.export.PatchFolder;
 import dev.changeling.review.export.SarifReport;
 import dev.changeling.review.export.Summary;
-import dev.changeling.review.export.Survivors;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
-import java.util.function.Predicate;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -80,67 +78,41 @@ final class ExportCommand implements Callable<Integer> {
     /** Known equivalent mutants (by full id) and the test for mutants marked fixed locally. */
     @Override
     public Integer call() {
-        if (minScore != null && (minScore.signum() < 0 || minScore.compareTo(BigDecimal.ONE) > 0)) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "--min-score takes a score from 0 to 1, such as 0.8, not " + minScore.toPlainString());
-        }
+        Gate gate = new Gate(failOnSurvivors, minScore);
         ProjectLayout layout = project.layout();
         Path resultsFile = layout.resultsFile();
-        RunResults all = ResultsFile.read(resultsFile);
-        RunResults results = all.limitedTo(layout.root(), project.limits(layout));
-        boolean gating = failOnSurvivors || minScore != null;
-        if (gating && !results.complete()) {
+        RunResults results = ResultsFile.read(resultsFile).limitedTo(layout.root(), project.limits(layout));
+        if (gate.asked() && !results.complete()) {
             throw new UserError(resultsFile + ": the run was interrupted, so its figures are incomplete;"
                     + " run 'changeling run' to the end before using --fail-on-survivors or --min-score");
         }
-        Settled settled = Settled.load(layout.root());
-        Predicate<MutantResult> resolved = settled::resolved;
-        Score score = Score.of(results.mutants(), settled.equivalent());
-        List<MutantResult> survivors = Survivors.unresolved(results.mutants(), resolved);
+        Standing standing = Standing.of(results, Settled.load(layout.root()));
+        List<MutantResult> survivors = standing.toLookAt();
 
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        out.println(Summary.line(results, score.overall(), survivors.size()));
+        out.println(Summary.line(standing));
         if (markdown != null) {
-            write(markdown, MarkdownReport.render(results, score, resolved));
+            write(markdown, MarkdownReport.render(standing));
             out.println("wrote " + markdown);
         }
         if (sarif != null) {
-            write(sarif, SarifReport.render(results, resolved, VersionProvider.number()));
+            write(sarif, SarifReport.render(standing, VersionProvider.number()));
             out.println("wrote " + sarif + " (" + survivors.size() + (survivors.size() == 1 ? " result)" : " results)"));
         }
         if (patches != null) {
             try {
-                List<Path> written = PatchFolder.write(patches, results.mutants(), resolved);
+                List<Path> written = PatchFolder.write(patches, survivors);
                 out.println("wrote " + written.size() + (written.size() == 1 ? " patch" : " patches") + " to " + patches);
             } catch (IOException e) {
                 throw new UserError(patches + ": cannot write the patches (" + e.getMessage() + "); give a folder you can write to");
             }
         }
         out.flush();
-        return gate(score, survivors.size(), err);
-    }
-
-    private int gate(Score score, int unresolved, PrintWriter err) {
-        int exit = ExitCode.OK;
-        if (failOnSurvivors && unresolved > 0) {
-            err.println("changeling: " + unresolved + (unresolved == 1 ? " unresolved survivor remains" : " unresolved survivors remain")
-                    + " (--fail-on-survivors)");
-            exit = ExitCode.SURVIVORS_REMAIN;
-        }
-        if (minScore != null) {
-            int detected = score.overall().detected();
-            int denominator = score.overall().denominator();
-            if (denominator == 0) {
-                err.println("changeling: no mutant counts towards a score, so --min-score passes");
-            } else if (BigDecimal.valueOf(detected).compareTo(minScore.multiply(BigDecimal.valueOf(denominator))) < 0) {
-                err.println("changeling: " + detected + " of " + denominator + " mutants detected is a score under --min-score "
-                        + minScore.toPlainString());
-                exit = ExitCode.SCORE_TOO_LOW;
-            }
-        }
+        Gate.Outcome outcome = gate.check(standing);
+        outcome.reasons().forEach(reason -> err.println("changeling: " + reason));
         err.flush();
-        return exit;
+        return outcome.exitCode();
     }
 
     private static void write(Path file, String text) {

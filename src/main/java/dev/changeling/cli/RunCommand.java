@@ -8,6 +8,9 @@ import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.Gate;
+import dev.changeling.review.Settled;
+import dev.changeling.review.Standing;
 import dev.changeling.run.MutationRun;
 import dev.changeling.run.RunInput;
 import dev.changeling.run.RunListener;
@@ -16,6 +19,7 @@ import dev.changeling.terminal.Progress;
 import dev.changeling.terminal.Style;
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
@@ -86,7 +90,7 @@ final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--min-score", paramLabel = "S",
             description = "Exit with code 3 when the mutation score is below S (0 to 1).")
-    Double minScore;
+    BigDecimal minScore;
 
     @Option(names = "--maven-arg", paramLabel = "ARG", description = "Pass an argument to every mvn call, e.g. -o or -s settings.xml (repeatable).")
     List<String> mavenArguments = new ArrayList<>();
@@ -96,9 +100,7 @@ final class RunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InterruptedException {
-        if (minScore != null && !(minScore >= 0 && minScore <= 1)) {
-            throw new UserError("--min-score takes a score from 0 to 1, such as 0.8, not " + minScore, ExitCode.USAGE);
-        }
+        Gate gate = new Gate(false, minScore);
         RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
                 workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts)
                 .resolve();
@@ -134,16 +136,16 @@ final class RunCommand implements Callable<Integer> {
         } catch (IllegalStateException shuttingDown) {
             return ExitCode.INTERRUPTED;
         }
-        new RunReport(style).print(out, results, resultsFile, layout);
+        Standing standing = Standing.of(results, Settled.load(layout.root()));
+        new RunReport(style).print(out, standing, resultsFile, layout);
         out.flush();
         if (!results.complete()) {
             return ExitCode.INTERRUPTED;
         }
-        if (minScore != null && RunReport.scoreOf(results, layout) < minScore) {
-            err.println("changeling: the score is under --min-score " + minScore);
-            return ExitCode.SCORE_TOO_LOW;
-        }
-        return ExitCode.OK;
+        Gate.Outcome outcome = gate.check(standing);
+        outcome.reasons().forEach(reason -> err.println("changeling: " + reason));
+        err.flush();
+        return outcome.exitCode();
     }
 
     private static void write(Path file, RunResults results) {

@@ -5,8 +5,7 @@ import dev.changeling.analysis.Tally;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
-import dev.changeling.results.Verdict;
-import dev.changeling.review.Settled;
+import dev.changeling.review.Standing;
 import dev.changeling.review.export.Summary;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
@@ -28,19 +27,16 @@ final class RunReport {
     }
 
 
-    static double scoreOf(RunResults results, ProjectLayout layout) {
-        return Score.of(results.mutants(), Settled.load(layout.root()).equivalent()).overall().score().orElse(1.0);
-    }
-
-    void print(PrintWriter out, RunResults results, Path resultsFile, ProjectLayout layout) {
-        Settled settled = Settled.load(layout.root());
-        Score score = Score.of(results.mutants(), settled.equivalent());
-        Tally all = score.overall();
-        List<MutantResult> survivors = results.mutants().stream()
-                .filter(mutant -> mutant.verdict() == Verdict.SURVIVED && !settled.equivalent().contains(mutant.id()))
-                .toList();
+    void print(PrintWriter out, Standing standing, Path resultsFile, ProjectLayout layout) {
+        RunResults results = standing.results();
+        Score score = standing.score();
+        List<MutantResult> survivors = standing.toLookAt();
         out.println();
-        out.println(style.bold(Summary.line(results, all, survivors.size())));
+        out.println(style.bold(Summary.line(standing)));
+        if (!standing.unreadFiles().isEmpty()) {
+            out.println(style.yellow(standing.unreadSummary() + ":"));
+            standing.unreadFiles().forEach(problem -> out.println("  " + problem));
+        }
         if (score.byFile().size() > 1) {
             out.println("by file:");
             table(out, score.byFile().entrySet().stream().collect(Collectors.toMap(e -> e.getKey(), e -> e.getValue(),

@@ -1,11 +1,9 @@
 package dev.changeling.review.export;
 
-import dev.changeling.analysis.Score;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
-import dev.changeling.results.RunResults;
+import dev.changeling.review.Standing;
 import java.util.List;
-import java.util.function.Predicate;
 import java.util.stream.Collectors;
 
 /**
@@ -17,16 +15,18 @@ public final class MarkdownReport {
     private MarkdownReport() {
     }
 
-    /**
-     * @param score    the figures of {@code results}, with the known equivalents left out
-     * @param resolved whether triage has settled a mutant (known equivalent, or marked fixed locally)
-     */
-    public static String render(RunResults results, Score score, Predicate<MutantResult> resolved) {
-        List<MutantResult> survivors = Survivors.unresolved(results.mutants(), resolved);
+    /** The comment for a run as it stands: summary, the files not read, then every survivor to look at. */
+    public static String render(Standing standing) {
+        List<MutantResult> survivors = standing.toLookAt();
         StringBuilder out = new StringBuilder();
         out.append("**Changeling:** ")
-                .append(MarkdownText.text(Summary.line(results, score.overall(), survivors.size())))
+                .append(MarkdownText.text(Summary.line(standing)))
                 .append("\n\n");
+        if (!standing.unreadFiles().isEmpty()) {
+            out.append("**").append(MarkdownText.text(standing.unreadSummary())).append(":**\n\n");
+            standing.unreadFiles().forEach(problem -> out.append("- ").append(MarkdownText.text(problem)).append('\n'));
+            out.append('\n');
+        }
         if (survivors.isEmpty()) {
             out.append("No survivors to look at: the tests detect every mutant still in question.\n");
             return out.toString();

@@ -12,7 +12,6 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.function.Predicate;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 
@@ -32,12 +31,11 @@ public final class PatchFolder {
     }
 
     /**
-     * @param resolved whether triage has settled a mutant (known equivalent, or marked fixed locally)
+     * @param toLookAt the survivors to look at ({@link dev.changeling.review.Standing#toLookAt()})
      * @return the patches written, in survivor order
      */
-    public static List<Path> write(Path folder, List<MutantResult> mutants, Predicate<MutantResult> resolved)
-            throws IOException {
-        List<MutantResult> survivors = Survivors.unresolved(mutants, resolved).stream()
+    public static List<Path> write(Path folder, List<MutantResult> toLookAt) throws IOException {
+        List<MutantResult> survivors = toLookAt.stream()
                 .filter(survivor -> survivor.diff() != null && !survivor.diff().isEmpty())
                 .toList();
         Files.createDirectories(folder);

@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.Standing;
 import java.net.URI;
 import java.net.URISyntaxException;
 import java.nio.file.Path;
@@ -15,7 +16,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.TreeSet;
-import java.util.function.Predicate;
 import java.util.stream.Collectors;
 
 /**
@@ -36,11 +36,14 @@ public final class SarifReport {
     }
 
     /**
-     * @param resolved    whether triage has settled a mutant (known equivalent, or marked fixed locally)
+     * The log of a run as it stands: a result per survivor to look at, and a notification per file the run could
+     * not read ({@code invocations[0].toolExecutionNotifications}, level {@code error}).
+     *
      * @param toolVersion this tool's version, for {@code tool.driver.version}
      */
-    public static String render(RunResults results, Predicate<MutantResult> resolved, String toolVersion) {
-        List<MutantResult> survivors = Survivors.unresolved(results.mutants(), resolved);
+    public static String render(Standing standing, String toolVersion) {
+        RunResults results = standing.results();
+        List<MutantResult> survivors = standing.toLookAt();
         List<String> rules = ruleIds(results, survivors);
 
         ObjectNode log = JSON.createObjectNode();
@@ -57,7 +60,12 @@ public final class SarifReport {
             descriptor.putObject("shortDescription")
                     .put("text", "A mutant made by the mutation operator " + rule + " survived: no test failed with it.");
         }
-        run.putArray("invocations").addObject().put("executionSuccessful", results.complete());
+        ObjectNode invocation = run.putArray("invocations").addObject().put("executionSuccessful", results.complete());
+        if (!standing.unreadFiles().isEmpty()) {
+            ArrayNode notifications = invocation.putArray("toolExecutionNotifications");
+            standing.unreadFiles().forEach(problem -> notifications.addObject().put("level", "error")
+                    .putObject("message").put("text", "not in the score, the file could not be read: " + problem));
+        }
         projectUri(results).ifPresent(uri -> run.putObject("originalUriBaseIds").putObject(SOURCE_ROOT).put("uri", uri));
         run.put("columnKind", "utf16CodeUnits");
         ArrayNode resultArray = run.putArray("results");

@@ -3,6 +3,7 @@ package dev.changeling.review.export;
 import dev.changeling.analysis.Interval;
 import dev.changeling.analysis.Tally;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.Standing;
 import dev.changeling.results.Verdict;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
@@ -20,11 +21,11 @@ public final class Summary {
     private Summary() {
     }
 
-    /**
-     * @param overall    the figures of every mutant in view
-     * @param unresolved how many survivors are still to look at
-     */
-    public static String line(RunResults results, Tally overall, int unresolved) {
+    /** The line for a run as it stands: figures of every mutant in view, survivors to look at, files not read. */
+    public static String line(Standing standing) {
+        RunResults results = standing.results();
+        Tally overall = standing.score().overall();
+        int unresolved = standing.toLookAt().size();
         StringBuilder line = new StringBuilder("mutation score ");
         if (overall.score().isPresent()) {
             line.append(down(overall.score().getAsDouble()))
@@ -41,6 +42,9 @@ public final class Summary {
         }
         line.append(DOT).append(String.join(DOT, counts(overall)));
         line.append(DOT).append(unresolved).append(unresolved == 1 ? " survivor" : " survivors").append(" to look at");
+        if (!standing.unreadFiles().isEmpty()) {
+            line.append(DOT).append(standing.unreadSummary());
+        }
         if (!results.complete()) {
             line.append(DOT).append("partial run: it was interrupted");
         }

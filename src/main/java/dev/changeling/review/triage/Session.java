@@ -6,7 +6,7 @@ import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
 import dev.changeling.review.EquivalentsList;
 import dev.changeling.review.TriageMarks;
-import dev.changeling.review.export.Survivors;
+import dev.changeling.review.Survivors;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
 import java.nio.file.Path;

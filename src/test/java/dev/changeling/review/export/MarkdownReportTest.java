@@ -1,5 +1,6 @@
 package dev.changeling.review.export;
 
+import dev.changeling.review.Survivors;
 import static dev.changeling.results.ResultsForTests.result;
 import static dev.changeling.results.ResultsForTests.run;
 import static dev.changeling.results.ResultsForTests.survivorsOf;
@@ -58,7 +59,7 @@ class MarkdownReportTest {
 
     private static String render(List<MutantResult> mutants, Predicate<MutantResult> resolved) {
         RunResults results = run(mutants, false, mutants.size());
-        return MarkdownReport.render(results, Score.of(mutants, Set.of()), resolved);
+        return MarkdownReport.render(Standings.of(results, resolved));
     }
 
     private static Node parse(String markdown) {
@@ -255,11 +256,23 @@ class MarkdownReportTest {
             }
             RunResults sampled = run(mutants, true, 500);
 
-            String markdown = MarkdownReport.render(sampled, Score.of(mutants, Set.of()), mutant -> false);
+            String markdown = MarkdownReport.render(Standings.of(sampled, mutant -> false));
 
             Paragraph first = all(parse(markdown), Paragraph.class).get(0);
             assertTrue(plain(first).startsWith("Changeling: mutation score 0.75 (15 of 20 detected; 95% interval 0.53–0.89,"
                     + " a sample of 20 from 500)"), plain(first));
         }
+    }
+
+    @Test
+    void filesThatCouldNotBeRead_areListedUnderTheSummary() {
+        RunResults read = run(List.of(), false, 0);
+        RunResults unread = new RunResults(read.format(), true, read.settings(), read.tests(), read.timings(), read.mutants(),
+                List.of("src/main/java/shop/Ledger.java:4: Parse error"), read.sourceHashes());
+
+        String markdown = MarkdownReport.render(Standings.of(unread, mutant -> false));
+
+        assertTrue(markdown.contains("**1 file could not be read — not in the score:**\n\n- src/main/java/shop/Ledger.java:4: Parse error\n"),
+                markdown);
     }
 }

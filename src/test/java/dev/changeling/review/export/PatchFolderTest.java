@@ -1,5 +1,6 @@
 package dev.changeling.review.export;
 
+import dev.changeling.review.Survivors;
 import static dev.changeling.results.ResultsForTests.result;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -132,7 +133,7 @@ class PatchFolderTest {
 
         @Test
         void everyPatch_passesGitApplyCheck_onTheCleanCheckout() throws IOException {
-            List<Path> written = PatchFolder.write(patches, survivors, mutant -> false);
+            List<Path> written = PatchFolder.write(patches, Survivors.unresolved(survivors, mutant -> false));
 
             assertEquals(survivors.size(), written.size());
             for (Path patch : written) {
@@ -143,7 +144,7 @@ class PatchFolderTest {
 
         @Test
         void everyPatch_appliedForReal_givesTheMutantsText() throws IOException {
-            List<Path> written = PatchFolder.write(patches, survivors, mutant -> false);
+            List<Path> written = PatchFolder.write(patches, Survivors.unresolved(survivors, mutant -> false));
 
             for (int i = 0; i < written.size(); i++) {
                 MutantResult mutant = survivors.get(i);
@@ -158,7 +159,7 @@ class PatchFolderTest {
 
         @Test
         void gitApplyCheck_failsOnceTheSiteChanged() throws IOException {
-            List<Path> written = PatchFolder.write(patches, survivors, mutant -> false);
+            List<Path> written = PatchFolder.write(patches, Survivors.unresolved(survivors, mutant -> false));
             int cut = indexOfFile("src/main/java/shop/Cut.java");
             write("src/main/java/shop/Cut.java", CUT_NO_NEWLINE.replace("a <= 9", "a <= 8"));
 
@@ -180,7 +181,7 @@ class PatchFolderTest {
 
         @Test
         void namesAreShortIds_andContentIsTheStoredDiffByteForByte() throws IOException {
-            List<Path> written = PatchFolder.write(patches, survivors, mutant -> false);
+            List<Path> written = PatchFolder.write(patches, Survivors.unresolved(survivors, mutant -> false));
 
             for (int i = 0; i < written.size(); i++) {
                 assertEquals(survivors.get(i).shortId() + ".patch", written.get(i).getFileName().toString());
@@ -195,7 +196,7 @@ class PatchFolderTest {
                     result("bbbbbbbb02", "B.java", "op", 1, Verdict.SURVIVED),
                     result("cccccccc03", "C.java", "op", 1, Verdict.KILLED));
 
-            List<Path> written = PatchFolder.write(patches, mutants, mutant -> mutant.id().startsWith("b"));
+            List<Path> written = PatchFolder.write(patches, Survivors.unresolved(mutants, mutant -> mutant.id().startsWith("b")));
 
             assertEquals(List.of(patches.resolve("aaaaaaaa.patch")), written);
             assertFalse(Files.exists(patches.resolve("bbbbbbbb.patch")));
@@ -208,7 +209,7 @@ class PatchFolderTest {
                     result("abcdef0111", "A.java", "op", 1, Verdict.SURVIVED),
                     result("abcdef0122", "B.java", "op", 1, Verdict.SURVIVED));
 
-            List<Path> written = PatchFolder.write(patches, mutants, mutant -> false);
+            List<Path> written = PatchFolder.write(patches, Survivors.unresolved(mutants, mutant -> false));
 
             assertEquals(Set.of("abcdef0111.patch", "abcdef0122.patch"),
                     written.stream().map(p -> p.getFileName().toString()).collect(Collectors.toSet()));
@@ -220,7 +221,7 @@ class PatchFolderTest {
             Files.writeString(patches.resolve("cafebabe.patch"), "my own notes\n");
             Files.writeString(patches.resolve("notes.txt"), "--- a/x\n+++ b/x\n");
 
-            PatchFolder.write(patches, List.of(result("aaaaaaaa01", "A.java", "op", 1, Verdict.SURVIVED)), mutant -> false);
+            PatchFolder.write(patches, List.of(result("aaaaaaaa01", "A.java", "op", 1, Verdict.SURVIVED)));
 
             assertFalse(Files.exists(patches.resolve("deadbeef.patch")));
             assertTrue(Files.exists(patches.resolve("cafebabe.patch")));
@@ -232,7 +233,7 @@ class PatchFolderTest {
         void missingFolder_isCreated() throws IOException {
             Path nested = patches.resolve("review/patches");
 
-            PatchFolder.write(nested, List.of(result("aaaaaaaa01", "A.java", "op", 1, Verdict.SURVIVED)), mutant -> false);
+            PatchFolder.write(nested, List.of(result("aaaaaaaa01", "A.java", "op", 1, Verdict.SURVIVED)));
 
             assertTrue(Files.isRegularFile(nested.resolve("aaaaaaaa.patch")));
         }

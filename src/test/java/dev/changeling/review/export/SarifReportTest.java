@@ -1,5 +1,6 @@
 package dev.changeling.review.export;
 
+import dev.changeling.review.Survivors;
 import static dev.changeling.results.ResultsForTests.result;
 import static dev.changeling.results.ResultsForTests.run;
 import static dev.changeling.results.ResultsForTests.survivorsOf;
@@ -44,7 +45,7 @@ class SarifReportTest {
             """;
 
     private static JsonNode sarif(RunResults results) throws IOException {
-        return JSON.readTree(SarifReport.render(results, mutant -> false, "1.2.3"));
+        return JSON.readTree(SarifReport.render(Standings.of(results, mutant -> false), "1.2.3"));
     }
 
     private static List<MutantResult> sample() {
@@ -88,6 +89,21 @@ class SarifReportTest {
         @Test
         void noSurvivors_validate() throws IOException {
             assertEquals(List.of(), schema.validate(sarif(run(List.of(), false, 0))));
+        }
+
+        @Test
+        void aFileThatCouldNotBeRead_isAnErrorNotification_andValidates() throws IOException {
+            RunResults complete = run(sample(), false, 0);
+            RunResults withUnread = new RunResults(complete.format(), true, complete.settings(), complete.tests(),
+                    complete.timings(), complete.mutants(), List.of("src/main/java/shop/Ledger.java:12: Parse error"),
+                    complete.sourceHashes());
+            JsonNode log = sarif(withUnread);
+
+            assertEquals(List.of(), schema.validate(log));
+            JsonNode notification = log.at("/runs/0/invocations/0/toolExecutionNotifications/0");
+            assertEquals("error", notification.get("level").asText());
+            assertTrue(notification.at("/message/text").asText().contains("src/main/java/shop/Ledger.java:12: Parse error"),
+                    notification::toString);
         }
 
         @Test
@@ -145,7 +161,7 @@ class SarifReportTest {
             List<MutantResult> expected = Survivors.unresolved(mutants, mutant -> false);
             MutantResult settled = expected.get(0);
 
-            JsonNode results = JSON.readTree(SarifReport.render(run(mutants, false, 0), mutant -> mutant == settled, "1"))
+            JsonNode results = JSON.readTree(SarifReport.render(Standings.of(run(mutants, false, 0), mutant -> mutant == settled), "1"))
                     .at("/runs/0/results");
 
             assertEquals(expected.size() - 1, results.size());

@@ -1,5 +1,7 @@
 package dev.changeling.review.export;
 
+import dev.changeling.results.RunResults;
+import dev.changeling.review.Survivors;
 import static dev.changeling.results.ResultsForTests.result;
 import static dev.changeling.results.ResultsForTests.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -26,8 +28,7 @@ class SummaryTest {
     }
 
     private static String line(List<MutantResult> mutants, boolean sampled, Set<String> equivalent) {
-        return Summary.line(run(mutants, sampled, 1000), Score.of(mutants, equivalent).overall(),
-                Survivors.unresolved(mutants, m -> equivalent.contains(m.id())).size());
+        return Summary.line(Standings.of(run(mutants, sampled, 1000), equivalent, m -> false));
     }
 
     @Nested
@@ -72,5 +73,18 @@ class SummaryTest {
             assertEquals("mutation score n/a (no mutant counts) · 0 mutants · killed 0 · survived 0 · 0 survivors to look at",
                     line(List.of(), false, Set.of()));
         }
+    }
+
+    @Test
+    void filesThatCouldNotBeRead_areCountedOutsideTheScore() {
+        RunResults read = run(detectedOf(3, 4), false, 0);
+        RunResults unread = new RunResults(read.format(), true, read.settings(), read.tests(), read.timings(),
+                read.mutants(), List.of("A.java:3: Parse error", "B.java:9: Parse error"), read.sourceHashes());
+
+        String line = Summary.line(Standings.of(unread, m -> false));
+
+        assertTrue(line.startsWith("mutation score 0.75 (3 of 4 detected)"), line);
+        assertTrue(line.contains(" · 2 files could not be read — not in the score"), line);
+        assertFalse(Summary.line(Standings.of(read, m -> false)).contains("could not be read"));
     }
 }

@@ -6,7 +6,7 @@ import dev.changeling.results.ResultsFile;
 import dev.changeling.results.ResultsForTests;
 import dev.changeling.results.RunResults;
 import dev.changeling.results.TestRecord;
-import dev.changeling.review.export.Survivors;
+import dev.changeling.review.Survivors;
 import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
 import java.io.IOException;

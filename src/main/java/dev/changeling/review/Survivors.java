@@ -1,4 +1,4 @@
-package dev.changeling.review.export;
+package dev.changeling.review;
 
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
@@ -9,7 +9,7 @@ import java.util.function.Predicate;
 /** Picks the survivors a reviewer still has to look at, in file and position order. */
 public final class Survivors {
 
-    static final Comparator<MutantResult> IN_FILE_ORDER = Comparator.comparing(MutantResult::file)
+    public static final Comparator<MutantResult> IN_FILE_ORDER = Comparator.comparing(MutantResult::file)
             .thenComparingInt(mutant -> mutant.first().line())
             .thenComparingInt(mutant -> mutant.first().column())
             .thenComparingInt(MutantResult::order)
