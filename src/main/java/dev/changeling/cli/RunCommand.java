@@ -1,6 +1,7 @@
 package dev.changeling.cli;
 
 import dev.changeling.ExitCode;
+import dev.changeling.analysis.Score;
 import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.execution.WorkerSettings;
@@ -25,6 +26,7 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -108,7 +110,8 @@ final class RunCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         Style style = project.style();
-        ProgressListener listener = new ProgressListener(err, project.plain());
+        Set<String> equivalent = Settled.load(layout.root()).equivalent();
+        ProgressListener listener = new ProgressListener(err, project.plain(), equivalent);
         MutationRun run = new MutationRun(request, listener);
         Path resultsFile = layout.resultsFile();
         CountDownLatch written = new CountDownLatch(1);
@@ -160,11 +163,14 @@ final class RunCommand implements Callable<Integer> {
     private static final class ProgressListener implements RunListener {
         private final PrintWriter err;
         private final boolean plain;
+        private final Set<String> equivalent;
         private Progress progress;
 
-        ProgressListener(PrintWriter err, boolean plain) {
+        /** @param equivalent the listed equivalents, left out of the score so far as out of the final one */
+        ProgressListener(PrintWriter err, boolean plain, Set<String> equivalent) {
             this.err = err;
             this.plain = plain;
+            this.equivalent = equivalent;
         }
 
         @Override
@@ -181,7 +187,8 @@ final class RunCommand implements Callable<Integer> {
         @Override
         public void finished(MutantResult result) {
             if (progress != null) {
-                progress.finished(result.verdict().counted(), result.verdict().detected());
+                progress.finished(result.verdict().counted() && !Score.isEquivalent(result, equivalent),
+                        result.verdict().detected());
             }
         }
 

@@ -1,12 +1,14 @@
 package dev.changeling.results;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.changeling.UserError;
+import dev.changeling.ExitCode;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -62,5 +64,20 @@ class ResultsFileTest {
         UserError older = assertThrows(UserError.class, () -> ResultsFile.read(file));
         assertTrue(older.getMessage().contains("results format 1 is not " + RunResults.FORMAT), older.getMessage());
         assertTrue(older.getMessage().contains("run 'changeling run' again"), older.getMessage());
+    }
+
+    @Test
+    void aFileWithOnlyItsFormat_orCutOff_orOfWrongShape_isOneLineWithTheFile_neverALibrarysText() throws Exception {
+        Path file = folder.resolve("results.json");
+        for (String text : List.of("{\"format\":" + RunResults.FORMAT + "}", "[1,2",
+                "{\"format\":" + RunResults.FORMAT + ",\"mutants\":\"many\"}")) {
+            Files.writeString(file, text);
+            UserError error = assertThrows(UserError.class, () -> ResultsFile.read(file), text);
+            assertTrue(error.getMessage().startsWith(file + ": "), error.getMessage());
+            assertTrue(error.getMessage().endsWith("run 'changeling run' again to rewrite it"), error.getMessage());
+            assertFalse(error.getMessage().contains("`") || error.getMessage().contains("Source:")
+                    || error.getMessage().contains("dev.changeling"), error.getMessage());
+            assertEquals(ExitCode.USER_ERROR, error.exitCode());
+        }
     }
 }
