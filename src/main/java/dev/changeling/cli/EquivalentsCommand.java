@@ -53,37 +53,22 @@ final class EquivalentsCommand implements Callable<Integer> {
     }
 
     @Command(name = "show", mixinStandardHelpOptions = true, description = "List every entry with its change and reason.")
-    static final class Show implements Callable<Integer> {
-
-        @Mixin
-        ProjectOptions project = new ProjectOptions();
-
-        @Spec
-        CommandSpec spec;
+    static final class Show extends ProjectCommand {
 
         @Override
         public Integer call() {
-            return show(project.layout().root(), spec.commandLine().getOut());
+            return show(project.layout().root(), out());
         }
     }
 
     @Command(name = "stale", mixinStandardHelpOptions = true,
             description = "List the entries whose mutant the last run no longer made: the code they judged has changed.")
-    static final class Stale implements Callable<Integer> {
-
-        @Mixin
-        ProjectOptions project = new ProjectOptions();
-
-        @Spec
-        CommandSpec spec;
+    static final class Stale extends ProjectCommand {
 
         @Override
         public Integer call() {
-            Path root = project.layout().root();
-            PrintWriter out = spec.commandLine().getOut();
-            EquivalentsList list = EquivalentsList.load(root);
-            Staleness staleness = list.stale(ResultsFile.read(project.layout().resultsFile()));
-            report(out, root, list, staleness);
+            PrintWriter out = out();
+            Staleness staleness = Checked.reported(project, out).staleness();
             if (!staleness.stale().isEmpty()) {
                 out.println("remove them with: changeling equivalents prune");
             }
@@ -95,25 +80,18 @@ final class EquivalentsCommand implements Callable<Integer> {
     @Command(name = "prune", mixinStandardHelpOptions = true,
             description = "Show the stale entries, then remove them once confirmed.",
             exitCodeList = {"6:No terminal to confirm in, and --yes was not given."})
-    static final class Prune implements Callable<Integer> {
-
-        @Mixin
-        ProjectOptions project = new ProjectOptions();
+    static final class Prune extends ProjectCommand {
 
         @Option(names = "--yes", description = "Remove them without asking (for scripts and CI).")
         boolean yes;
 
-        @Spec
-        CommandSpec spec;
-
         @Override
         public Integer call() {
-            Path root = project.layout().root();
-            PrintWriter out = spec.commandLine().getOut();
-            EquivalentsList list = EquivalentsList.load(root);
-            Staleness staleness = list.stale(ResultsFile.read(project.layout().resultsFile()));
-            report(out, root, list, staleness);
-            List<EquivalentEntry> stale = staleness.stale();
+            PrintWriter out = out();
+            Checked checked = Checked.reported(project, out);
+            Path root = checked.root();
+            EquivalentsList list = checked.list();
+            List<EquivalentEntry> stale = checked.staleness().stale();
             if (stale.isEmpty()) {
                 out.flush();
                 return ExitCode.OK;
@@ -220,6 +198,18 @@ final class EquivalentsCommand implements Callable<Integer> {
                 : count(entries.size(), "equivalent mutant", "equivalent mutants") + " in " + shown(root, list));
         out.flush();
         return ExitCode.OK;
+    }
+
+    /** The list held against the last run, the comparison already printed. */
+    private record Checked(Path root, EquivalentsList list, Staleness staleness) {
+
+        static Checked reported(ProjectOptions project, PrintWriter out) {
+            Path root = project.layout().root();
+            EquivalentsList list = EquivalentsList.load(root);
+            Staleness staleness = list.stale(ResultsFile.read(project.layout().resultsFile()));
+            report(out, root, list, staleness);
+            return new Checked(root, list, staleness);
+        }
     }
 
     private static void report(PrintWriter out, Path root, EquivalentsList list, Staleness staleness) {

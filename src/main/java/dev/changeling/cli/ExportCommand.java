@@ -19,12 +19,9 @@ import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** Writes the attachments for a review from the results file, and can serve as a CI gate. */
 @Command(name = "export", mixinStandardHelpOptions = true,
@@ -45,10 +42,7 @@ import picocli.CommandLine.Spec;
         footerHeading = "%nExample:%n",
         footer = "  changeling export --markdown target/changeling/review.md --sarif target/changeling/survivors.sarif"
                 + " --patches target/changeling/patches --fail-on-survivors")
-final class ExportCommand implements Callable<Integer> {
-
-    @Mixin
-    ProjectOptions project = new ProjectOptions();
+final class ExportCommand extends ProjectCommand {
 
     @Option(names = "--markdown", paramLabel = "FILE",
             description = "Write a review comment in Markdown: the summary line, then each unresolved survivor with its diff.")
@@ -72,9 +66,6 @@ final class ExportCommand implements Callable<Integer> {
                     + " for a sample, the point estimate counts. Results where no mutant counts pass.")
     BigDecimal minScore;
 
-    @Spec
-    CommandSpec spec;
-
     /** Known equivalent mutants (by full id) and the test for mutants marked fixed locally. */
     @Override
     public Integer call() {
@@ -89,8 +80,8 @@ final class ExportCommand implements Callable<Integer> {
         Standing standing = Standing.of(results, Settled.load(layout.root()));
         List<MutantResult> survivors = standing.toLookAt();
 
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         out.println(Summary.line(standing));
         if (markdown != null) {
             write(markdown, MarkdownReport.render(standing));
@@ -109,10 +100,7 @@ final class ExportCommand implements Callable<Integer> {
             }
         }
         out.flush();
-        Gate.Outcome outcome = gate.check(standing);
-        outcome.reasons().forEach(reason -> err.println("changeling: " + reason));
-        err.flush();
-        return outcome.exitCode();
+        return gate.check(standing).reportedTo(err);
     }
 
     private static void write(Path file, String text) {

@@ -13,22 +13,16 @@ import java.io.PrintWriter;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
-import java.util.concurrent.Callable;
 import java.util.function.Function;
 import java.util.stream.Collectors;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** Lists the mutants that would be run, with counts per operator and file, and optionally their diffs. */
 @Command(name = "mutants", mixinStandardHelpOptions = true,
         description = "List the mutants of a project (nothing is compiled or run).")
-final class MutantsCommand implements Callable<Integer> {
-
-    @Mixin
-    ProjectOptions project = new ProjectOptions();
+final class MutantsCommand extends ProjectCommand {
 
     @Mixin
     MutantOptions mutants = new MutantOptions();
@@ -39,9 +33,6 @@ final class MutantsCommand implements Callable<Integer> {
     @Option(names = "--diffs", description = "Print every mutant as a unified diff.")
     boolean diffs;
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         ProjectLayout layout = project.layout();
@@ -49,8 +40,8 @@ final class MutantsCommand implements Callable<Integer> {
         Selection selection = mutants.input().resolve();
         Selection.Chosen chosen = scope.map(changed -> selection.narrowedTo(changed.filter())).orElse(selection)
                 .choose(layout, project.limits(layout));
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         for (ParseProblem problem : chosen.generated().problems()) {
             err.println("skipped " + problem);
         }

@@ -145,10 +145,7 @@ final class RunCommand implements Callable<Integer> {
         if (!results.complete()) {
             return ExitCode.INTERRUPTED;
         }
-        Gate.Outcome outcome = gate.check(standing);
-        outcome.reasons().forEach(reason -> err.println("changeling: " + reason));
-        err.flush();
-        return outcome.exitCode();
+        return gate.check(standing).reportedTo(err);
     }
 
     private static void write(Path file, RunResults results) {

@@ -3,6 +3,7 @@ package dev.changeling.review;
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import dev.changeling.analysis.Tally;
+import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
@@ -22,6 +23,13 @@ public record Gate(boolean failOnSurvivors, BigDecimal minScore) {
 
         public Outcome {
             reasons = List.copyOf(reasons);
+        }
+
+        /** Writes one line per reason, as every message of the tool, and gives the exit code. */
+        public int reportedTo(PrintWriter err) {
+            reasons.forEach(reason -> err.println("changeling: " + reason));
+            err.flush();
+            return exitCode;
         }
     }
 
