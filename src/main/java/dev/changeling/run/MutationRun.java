@@ -96,6 +96,7 @@ public final class MutationRun {
             pool = workers;
             checkNotStopped();
             Baseline baseline = clock.time("baseline", () -> workers.baseline(name -> { }));
+            TestJvm.noteUnusedSkipTags(request, baseline, listener);
             GreenBaseline.require(baseline, setup, project.layout().root());
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
             listener.phase(String.format(Locale.ROOT, "baseline: %d tests green in %.1f s%s",
