@@ -17,8 +17,6 @@ import dev.changeling.terminal.Style;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -37,7 +35,7 @@ import picocli.CommandLine.Model.CommandSpec;
             "1:A mistake to fix: no project, a build that fails, an unreadable file, a bad change scope.",
             "3:The mutation score is under --min-score.",
             "5:The project's tests fail without any mutant.",
-            "130:Stopped by Ctrl-C; the verdicts of the mutants that finished are in the results file."})
+            "130:Stopped by Ctrl-C; the verdicts of the mutants that finished, if any did, are in the results file."})
 final class RunCommand implements Callable<Integer> {
 
     @Mixin
@@ -95,7 +93,7 @@ final class RunCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Override
-    public Integer call() throws InterruptedException {
+    public Integer call() {
         if (minScore != null && !(minScore >= 0 && minScore <= 1)) {
             throw new UserError("--min-score takes a score from 0 to 1, such as 0.8, not " + minScore, ExitCode.USAGE);
         }
@@ -105,37 +103,47 @@ final class RunCommand implements Callable<Integer> {
         ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Style style = project.style();
         ProgressListener listener = new ProgressListener(err, project.plain());
         MutationRun run = new MutationRun(request, listener);
-        Path resultsFile = layout.resultsFile();
-        CountDownLatch written = new CountDownLatch(1);
-        Thread onInterrupt = new Thread(() -> {
-            run.stop();
-            try {
-                written.await(30, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-            err.println("changeling: stopped; the verdicts so far are in " + resultsFile);
-            err.flush();
-        }, "changeling-interrupt");
-        Runtime.getRuntime().addShutdownHook(onInterrupt);
+        Interruption interruption = Interruption.watch(run, err);
+        try {
+            return runAndReport(run, listener, interruption, out, err, project.style(), layout);
+        } finally {
+            listener.close();
+            interruption.told();
+        }
+    }
+
+    /**
+     * Runs, writes the results and says how it went. After Ctrl-C it says where this run's verdicts are only if
+     * they were written; a run that completed before the stop took effect still gets its report.
+     */
+    private Integer runAndReport(MutationRun run, ProgressListener listener, Interruption interruption,
+                                 PrintWriter out, PrintWriter err, Style style, ProjectLayout layout) {
         RunResults results;
         try {
             results = run.execute();
-            write(resultsFile, results);
-        } finally {
-            written.countDown();
+        } catch (UserError failure) {
+            if (failure.exitCode() != ExitCode.INTERRUPTED) {
+                throw failure;
+            }
             listener.close();
+            err.println("changeling: " + failure.getMessage());
+            return ExitCode.INTERRUPTED;
         }
-        try {
-            Runtime.getRuntime().removeShutdownHook(onInterrupt);
-        } catch (IllegalStateException shuttingDown) {
+        Path resultsFile = layout.resultsFile();
+        write(resultsFile, results);
+        listener.close();
+        if (interruption.happened() && !results.complete()) {
+            err.println("changeling: stopped; the verdicts so far are in " + resultsFile);
             return ExitCode.INTERRUPTED;
         }
         new RunReport(style).print(out, results, resultsFile, layout);
         out.flush();
+        if (interruption.happened()) {
+            err.println("changeling: stopped after every mutant had its verdict; the results are complete");
+            return ExitCode.INTERRUPTED;
+        }
         if (!results.complete()) {
             return ExitCode.INTERRUPTED;
         }
@@ -183,9 +191,11 @@ final class RunCommand implements Callable<Integer> {
             }
         }
 
+        /** Ends the progress bar's line; again, it does nothing. */
         void close() {
             if (progress != null) {
                 progress.close();
+                progress = null;
             }
         }
     }
