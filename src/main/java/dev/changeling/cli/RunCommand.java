@@ -76,10 +76,17 @@ final class RunCommand implements Callable<Integer> {
     int mutantsPerWorker = WorkerSettings.DEFAULT_MUTANTS_PER_WORKER;
 
     @Option(names = "--skip-tests", paramLabel = "PATTERN",
-            description = "Leave out test classes matching this pattern, e.g. '*IT' or 'com.acme.db.**' (repeatable).")
+            description = {"Leave out test classes matching this pattern (repeatable); a pattern that matches no test class"
+                    + " is noted on the tests: line.",
+                "- PerformanceTest is the simple name, in any package; com.acme.perf.PerformanceTest the fully qualified name.",
+                "- * stays within one package segment or name ('*IT', 'com.acme.*.SlowTest'); ? is one character.",
+                "- A leading *. or **. stands for any package prefix, none included ('*.perf.PerformanceTest').",
+                "- ** stands for any number of package segments, none included ('com.acme.db.**', '**.perf.*').",
+                "- A nested class (Outer$Inner) follows its outer class; a path (com/acme/PerfTest.java) reads as a name."})
     List<String> skipTests = new ArrayList<>();
 
-    @Option(names = "--skip-tag", paramLabel = "TAG", description = "Leave out tests with this JUnit tag (repeatable).")
+    @Option(names = "--skip-tag", paramLabel = "TAG",
+            description = "Leave out tests with this JUnit tag or tag expression (repeatable); one that matches no test is noted after the baseline.")
     List<String> skipTags = new ArrayList<>();
 
     @Option(names = "--min-score", paramLabel = "S",
