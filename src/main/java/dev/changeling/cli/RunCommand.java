@@ -22,8 +22,6 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.nio.file.Path;
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
@@ -43,7 +41,7 @@ import picocli.CommandLine.Model.CommandSpec;
             "1:A mistake to fix: no project, a build that fails, an unreadable file, a bad change scope.",
             "3:The mutation score is under --min-score.",
             "5:The project's tests fail without any mutant.",
-            "130:Stopped by Ctrl-C; the verdicts of the mutants that finished are in the results file."})
+            "130:Stopped by Ctrl-C; the verdicts of the mutants that finished, if any did, are in the results file."})
 final class RunCommand implements Callable<Integer> {
 
     @Mixin
@@ -84,10 +82,17 @@ final class RunCommand implements Callable<Integer> {
     int mutantsPerWorker = WorkerSettings.DEFAULT_MUTANTS_PER_WORKER;
 
     @Option(names = "--skip-tests", paramLabel = "PATTERN",
-            description = "Leave out test classes matching this pattern, e.g. '*IT' or 'com.acme.db.**' (repeatable).")
+            description = {"Leave out test classes matching this pattern (repeatable); a pattern that matches no test class"
+                    + " is noted on the tests: line.",
+                "- PerformanceTest is the simple name, in any package; com.acme.perf.PerformanceTest the fully qualified name.",
+                "- * stays within one package segment or name ('*IT', 'com.acme.*.SlowTest'); ? is one character.",
+                "- A leading *. or **. stands for any package prefix, none included ('*.perf.PerformanceTest').",
+                "- ** stands for any number of package segments, none included ('com.acme.db.**', '**.perf.*').",
+                "- A nested class (Outer$Inner) follows its outer class; a path (com/acme/PerfTest.java) reads as a name."})
     List<String> skipTests = new ArrayList<>();
 
-    @Option(names = "--skip-tag", paramLabel = "TAG", description = "Leave out tests with this JUnit tag (repeatable).")
+    @Option(names = "--skip-tag", paramLabel = "TAG",
+            description = "Leave out tests with this JUnit tag or tag expression (repeatable); one that matches no test is noted after the baseline.")
     List<String> skipTags = new ArrayList<>();
 
     @Option(names = "--min-score", paramLabel = "S",
@@ -101,7 +106,7 @@ final class RunCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Override
-    public Integer call() throws InterruptedException {
+    public Integer call() {
         Gate gate = new Gate(false, minScore);
         RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
                 workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts)
@@ -109,39 +114,49 @@ final class RunCommand implements Callable<Integer> {
         ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Style style = project.style();
         Set<String> equivalent = Settled.load(layout.root()).equivalent();
         ProgressListener listener = new ProgressListener(err, project.plain(), equivalent);
         MutationRun run = new MutationRun(request, listener);
-        Path resultsFile = layout.resultsFile();
-        CountDownLatch written = new CountDownLatch(1);
-        Thread onInterrupt = new Thread(() -> {
-            run.stop();
-            try {
-                written.await(30, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-            err.println("changeling: stopped; the verdicts so far are in " + resultsFile);
-            err.flush();
-        }, "changeling-interrupt");
-        Runtime.getRuntime().addShutdownHook(onInterrupt);
+        Interruption interruption = Interruption.watch(run, err);
+        try {
+            return runAndReport(run, listener, interruption, gate, out, err, layout);
+        } finally {
+            listener.close();
+            interruption.told();
+        }
+    }
+
+    /**
+     * Runs, writes the results and says how it went. After Ctrl-C it says where this run's verdicts are only if
+     * they were written; a run that completed before the stop took effect still gets its report.
+     */
+    private Integer runAndReport(MutationRun run, ProgressListener listener, Interruption interruption, Gate gate,
+                                 PrintWriter out, PrintWriter err, ProjectLayout layout) {
         RunResults results;
         try {
             results = run.execute();
-            write(resultsFile, results);
-        } finally {
-            written.countDown();
+        } catch (UserError failure) {
+            if (failure.exitCode() != ExitCode.INTERRUPTED) {
+                throw failure;
+            }
             listener.close();
+            err.println("changeling: " + failure.getMessage());
+            return ExitCode.INTERRUPTED;
         }
-        try {
-            Runtime.getRuntime().removeShutdownHook(onInterrupt);
-        } catch (IllegalStateException shuttingDown) {
+        Path resultsFile = layout.resultsFile();
+        write(resultsFile, results);
+        listener.close();
+        if (interruption.happened() && !results.complete()) {
+            err.println("changeling: stopped; the verdicts so far are in " + resultsFile);
             return ExitCode.INTERRUPTED;
         }
         Standing standing = Standing.of(results, Settled.load(layout.root()));
-        new RunReport(style).print(out, standing, resultsFile, layout);
+        new RunReport(project.style()).print(out, standing, resultsFile, layout);
         out.flush();
+        if (interruption.happened()) {
+            err.println("changeling: stopped after every mutant had its verdict; the results are complete");
+            return ExitCode.INTERRUPTED;
+        }
         if (!results.complete()) {
             return ExitCode.INTERRUPTED;
         }
@@ -189,9 +204,11 @@ final class RunCommand implements Callable<Integer> {
             }
         }
 
+        /** Ends the progress bar's line; again, it does nothing. */
         void close() {
             if (progress != null) {
                 progress.close();
+                progress = null;
             }
         }
     }

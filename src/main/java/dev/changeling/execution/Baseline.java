@@ -3,11 +3,14 @@ package dev.changeling.execution;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.BitSet;
+import java.util.Collection;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * The unmutated suite's run: every test with its time and reach, the containers that failed, and what
@@ -21,6 +24,7 @@ public final class Baseline {
     private final List<String> initialisationFailures;
     private final long nanos;
     private final List<String> classesRunInFreshWorkers;
+    private final Set<String> tagsThatLeftOutTests;
     private final Map<String, RecordedTest> byId = new LinkedHashMap<>();
     private final Map<Integer, BitSet> testsByPoint = new HashMap<>();
 
@@ -34,12 +38,14 @@ public final class Baseline {
      */
     public Baseline(List<RecordedTest> tests, List<FailedContainer> failedContainers,
                     int[] reachedWhileInitialising, List<String> initialisationFailures, long nanos) {
-        this(tests, failedContainers, reachedWhileInitialising, initialisationFailures, nanos, List.of());
+        this(tests, failedContainers, reachedWhileInitialising, initialisationFailures, nanos, List.of(), Set.of());
     }
 
     private Baseline(List<RecordedTest> tests, List<FailedContainer> failedContainers, int[] reachedWhileInitialising,
-                     List<String> initialisationFailures, long nanos, List<String> classesRunInFreshWorkers) {
+                     List<String> initialisationFailures, long nanos, List<String> classesRunInFreshWorkers,
+                     Set<String> tagsThatLeftOutTests) {
         this.classesRunInFreshWorkers = List.copyOf(classesRunInFreshWorkers);
+        this.tagsThatLeftOutTests = Set.copyOf(tagsThatLeftOutTests);
         this.tests = List.copyOf(tests);
         this.failedContainers = List.copyOf(failedContainers);
         this.reachedWhileInitialising = reachedWhileInitialising.clone();
@@ -65,13 +71,29 @@ public final class Baseline {
     static Baseline merge(List<Baseline> parts, long nanos, List<String> classesRunInFreshWorkers) {
         List<RecordedTest> tests = new ArrayList<>();
         List<FailedContainer> containers = new ArrayList<>();
+        Set<String> tags = new HashSet<>();
         parts.forEach(part -> {
             tests.addAll(part.tests);
             containers.addAll(part.failedContainers);
+            tags.addAll(part.tagsThatLeftOutTests);
         });
         int[] reached = parts.isEmpty() ? new int[0] : parts.get(0).reachedWhileInitialising;
         List<String> failures = parts.isEmpty() ? List.of() : parts.get(0).initialisationFailures;
-        return new Baseline(tests, containers, reached, failures, nanos, classesRunInFreshWorkers);
+        return new Baseline(tests, containers, reached, failures, nanos, classesRunInFreshWorkers, tags);
+    }
+
+    /** The same run, with the excluded tag expressions that left out at least one test (the worker says which). */
+    Baseline withTagsThatLeftOutTests(Collection<String> tags) {
+        return new Baseline(tests, failedContainers, reachedWhileInitialising, initialisationFailures, nanos,
+                classesRunInFreshWorkers, Set.copyOf(tags));
+    }
+
+    /**
+     * The excluded tag expressions (the build's and {@code --skip-tag}'s) that left out at least one test; an
+     * expression missing here matched no test of the classes that ran.
+     */
+    public Set<String> tagsThatLeftOutTests() {
+        return tagsThatLeftOutTests;
     }
 
     /** Test classes that ran in a worker of their own, as the build runs every class in a fresh JVM. */

@@ -235,8 +235,9 @@ final class WorkerProcess {
             for (int count = in.readInt(); count > 0; count--) {
                 containers.add(new FailedContainer(Wire.readString(in), Wire.readString(in), Wire.readString(in)));
             }
+            List<String> tagsThatLeftOutTests = Wire.readStrings(in);
             return new Baseline(tests, containers, prepared.reachedWhileInitialising(), prepared.initialisationFailures(),
-                    System.nanoTime() - start);
+                    System.nanoTime() - start).withTagsThatLeftOutTests(tagsThatLeftOutTests);
         } catch (SocketTimeoutException e) {
             end();
             throw new Lost(true, "the unmutated suite took more than " + timeoutMillis + " ms");

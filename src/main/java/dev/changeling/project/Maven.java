@@ -23,6 +23,9 @@ final class Maven {
     private static final Pattern PLAIN_WORD = Pattern.compile("[A-Za-z0-9_./:=@%+,-]+");
     private static final Pattern COLOUR = Pattern.compile("\u001B\\[[0-9;]*m");
     private static final int LONGEST_QUOTED_ERROR = 240;
+    /** 128 plus the signal's number, as a shell reports a command a signal ended (POSIX sh, "Exit Status"). */
+    private static final int SIGINT_EXIT = 128 + 2;
+    private static final int SIGTERM_EXIT = 128 + 15;
 
     private final Path executable;
     private final List<String> extraArguments;
@@ -54,8 +57,15 @@ final class Maven {
                     + command.stream().map(Maven::quoted).collect(Collectors.joining(" "));
         }
 
-        /** One line: what failed, Maven's first error, where the log is and how to run it again. */
+        /**
+         * One line: what failed, Maven's first error, where the log is and how to run it again; or, when mvn was
+         * ended by Ctrl-C or a termination signal (as a terminal's Ctrl-C reaches mvn and the tool at once), that.
+         */
         UserError failure(String what) {
+            if (exitCode == SIGINT_EXIT || exitCode == SIGTERM_EXIT) {
+                return new UserError("mvn was interrupted (exit code " + exitCode + ") in " + directory + "; nothing was written",
+                        ExitCode.INTERRUPTED);
+            }
             String firstError = firstError().map(error -> ": " + error).orElse("");
             return new UserError(what + " (mvn exit code " + exitCode + ")" + firstError
                     + "; full log: " + log + "; to reproduce: " + reproduction());

@@ -42,20 +42,43 @@ public final class MutationRun {
     private final RunListener listener;
     private volatile WorkerPool pool;
     private volatile boolean stopped;
+    private volatile boolean mutantsStarted;
+    /** The thread building the project, while it does: a stop interrupts it, which ends a running mvn. */
+    private Thread building;
 
     public MutationRun(RunRequest request, RunListener listener) {
         this.request = request;
         this.listener = listener;
     }
 
-    /** Runs everything; after {@link #stop()} it returns what finished, marked incomplete. */
+    /**
+     * Runs everything. After {@link #stop()} it returns what finished (complete only if every mutant has its
+     * verdict), or, when it was stopped before it could record anything, throws a {@link UserError} with the code
+     * {@link ExitCode#INTERRUPTED} that says so: whatever failed after a stop failed because of it.
+     */
     public RunResults execute() {
-        return run();
+        try {
+            return run();
+        } catch (RuntimeException failure) {
+            if (!stopped || failure instanceof UserError user && user.exitCode() == ExitCode.INTERRUPTED) {
+                throw failure;
+            }
+            throw new UserError((mutantsStarted ? "stopped" : "stopped before any mutant ran") + "; nothing was written",
+                    ExitCode.INTERRUPTED);
+        }
     }
 
-    /** Stops the run from another thread (Ctrl-C): workers are ended (asked to exit, killed if they will not) and the finished verdicts kept. */
+    /**
+     * Stops the run from another thread (Ctrl-C): a running mvn is ended, workers are ended (asked to exit, killed
+     * if they will not) and the finished verdicts kept.
+     */
     public void stop() {
-        stopped = true;
+        synchronized (this) {
+            stopped = true;
+            if (building != null) {
+                building.interrupt();
+            }
+        }
         WorkerPool running = pool;
         if (running != null) {
             running.stop();
@@ -71,7 +94,7 @@ public final class MutationRun {
     /** The phases in order: discover, generate and narrow, compile, baseline, execute, record. */
     private RunResults run() {
         PhaseClock clock = new PhaseClock();
-        DiscoveredProject project = clock.time("maven", () -> ProjectDiscovery.discover(request.layout(), request.discovery()));
+        DiscoveredProject project = clock.time("maven", this::discover);
         listener.phase("maven: " + project.build() + " (" + project.junitSetup() + ")");
         checkNotStopped();
 
@@ -96,6 +119,7 @@ public final class MutationRun {
             pool = workers;
             checkNotStopped();
             Baseline baseline = clock.time("baseline", () -> workers.baseline(name -> { }));
+            TestJvm.noteUnusedSkipTags(request, baseline, listener);
             GreenBaseline.require(baseline, setup, project.layout().root());
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
             listener.phase(String.format(Locale.ROOT, "baseline: %d tests green in %.1f s%s",
@@ -105,17 +129,42 @@ public final class MutationRun {
             results.putAll(plan.unreached());
             results.values().forEach(listener::finished);
             listener.running(plan.jobs().size());
+            mutantsStarted = true;
             List<JobResult> finished = clock.time("execute", () -> workers.run(plan.jobs(), job -> {
                 MutantResult result = plan.resultOf(job, files);
                 results.put(job.key(), result);
                 listener.finished(result);
             }));
-            complete = !stopped && finished.size() == plan.jobs().size();
-            if (complete && request.recheckTimeouts()) {
+            complete = finished.size() == plan.jobs().size();
+            if (complete && !stopped && request.recheckTimeouts()) {
                 TimeoutRecheck.run(workers, plan.jobs(), finished, request.deadlines(), plan::label, listener);
             }
         }
         return record(chosen, change, results, tests, complete, clock);
+    }
+
+    /**
+     * Builds the project where a stop can interrupt it: mvn is ended then, and whatever the build says after that
+     * (mvn's own exit on the same Ctrl-C, say) is reported as the interruption it is.
+     */
+    private DiscoveredProject discover() {
+        synchronized (this) {
+            checkNotStopped();
+            building = Thread.currentThread();
+        }
+        try {
+            return ProjectDiscovery.discover(request.layout(), request.discovery());
+        } catch (RuntimeException failure) {
+            if (stopped) {
+                throw new UserError("interrupted while the project was being built; nothing was written", ExitCode.INTERRUPTED);
+            }
+            throw failure;
+        } finally {
+            synchronized (this) {
+                building = null;
+                Thread.interrupted();
+            }
+        }
     }
 
     private Selection.Chosen generate(ProjectLayout layout, Optional<ChangeScope> change) {

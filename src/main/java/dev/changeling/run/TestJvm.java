@@ -2,6 +2,7 @@ package dev.changeling.run;
 
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
+import dev.changeling.execution.Baseline;
 import dev.changeling.execution.ClassPatterns;
 import dev.changeling.execution.SuiteSetup;
 import dev.changeling.execution.WorkerSettings;
@@ -54,11 +55,25 @@ final class TestJvm {
                 + (leftOut > 0 ? "; " + leftOut + " left out by --skip-tests" : "")
                 + (request.skipTags().isEmpty() ? "" : "; tags left out by --skip-tag: " + String.join(", ", request.skipTags())));
         suite.notices().forEach(notice -> listener.phase("tests: note: " + notice));
+        request.skipTests().stream()
+                .filter(pattern -> suite.testClasses().stream().noneMatch(ClassPatterns.matching(pattern)))
+                .forEach(pattern -> listener.phase("tests: note: --skip-tests '" + pattern + "' matches no test class"));
         return SuiteSetup.of(pointCount, classes)
                 .withPreinitialise(productionClasses)
                 .withTags(suite.includedTags(), excludedTags)
                 .withConfigurationParameters(suite.configurationParameters())
                 .withFreshJvmPerClass(suite.freshJvmPerClass());
+    }
+
+    /**
+     * One notice per {@code --skip-tag} that left out no test. Which tags the tests carry is known only once the
+     * baseline has discovered them, so this comes after it, and before a red baseline is reported, as a mistyped
+     * tag is a likely reason for one.
+     */
+    static void noteUnusedSkipTags(RunRequest request, Baseline baseline, RunListener listener) {
+        request.skipTags().stream()
+                .filter(tag -> !baseline.tagsThatLeftOutTests().contains(tag))
+                .forEach(tag -> listener.phase("tests: note: --skip-tag '" + tag + "' matches no test"));
     }
 
     /**

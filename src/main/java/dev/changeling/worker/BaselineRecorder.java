@@ -98,7 +98,8 @@ final class BaselineRecorder implements TestExecutionListener {
         }
     }
 
-    void write(DataOutputStream out) throws IOException {
+    /** The BASELINE_DONE message, which ends with the excluded tag expressions that left out a test. */
+    void write(DataOutputStream out, List<String> tagsThatLeftSomethingOut) throws IOException {
         out.writeByte(Wire.BASELINE_DONE);
         out.writeInt(tests.size());
         BitSet union = new BitSet();
@@ -120,6 +121,7 @@ final class BaselineRecorder implements TestExecutionListener {
             Wire.writeString(out, container.name());
             Wire.writeString(out, container.message());
         }
+        Wire.writeStrings(out, tagsThatLeftSomethingOut);
     }
 
     private void skipped(TestIdentifier identifier, String reason) {

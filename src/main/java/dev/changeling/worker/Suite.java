@@ -49,7 +49,10 @@ final class Suite {
         this.configurationParameters = Map.copyOf(configurationParameters);
     }
 
-    /** Runs the tests of these classes, as the build selects them: the classes, then the tags. */
+    /**
+     * Runs the tests of these classes, as the build selects them: the classes, then the tags; the reply also
+     * names the excluded tags that left out a test.
+     */
     void baseline(List<String> testClasses, DataOutputStream out) throws IOException {
         LauncherDiscoveryRequestBuilder request = LauncherDiscoveryRequestBuilder.request()
                 .selectors(testClasses.stream().map(name -> selectClass(name)).toList())
@@ -58,8 +61,9 @@ final class Suite {
         if (!includedTags.isEmpty()) {
             request.filters(TagFilter.includeTags(includedTags));
         }
-        if (!excludedTags.isEmpty()) {
-            request.filters(TagFilter.excludeTags(excludedTags));
+        TagExclusions exclusions = new TagExclusions(excludedTags);
+        if (!exclusions.isEmpty()) {
+            request.filters(exclusions);
         }
         BaselineRecorder recorder = new BaselineRecorder(name -> progress(out, name));
         Probe.drainReached();
@@ -69,7 +73,7 @@ final class Suite {
         } finally {
             Probe.record(false);
         }
-        recorder.write(out);
+        recorder.write(out, exclusions.thatLeftSomethingOut());
     }
 
     SingleTestRun.Result runOne(String uniqueId) {

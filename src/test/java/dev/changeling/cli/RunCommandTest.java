@@ -41,6 +41,16 @@ class RunCommandTest {
     }
 
     @Test
+    void theHelpShowsEveryFormOfSkipTestsPattern() {
+        String help = run("run", "--help")[1].replaceAll("\\s+", " ");
+        for (String form : new String[] {"PerformanceTest is the simple name", "com.acme.perf.PerformanceTest the fully qualified",
+            "'*IT'", "'*.perf.PerformanceTest'", "'com.acme.db.**'", "'**.perf.*'", "(Outer$Inner) follows its outer class",
+            "matches no test class is noted"}) {
+            assertTrue(help.contains(form), form + " is missing from: " + help);
+        }
+    }
+
+    @Test
     void twoWaysOfNamingTheChangeAreRefused() {
         String[] outcome = run("run", folder.toString(), "--uncommitted", "--changed-since", "HEAD");
         assertEquals(Integer.toString(ExitCode.USAGE), outcome[0], outcome[2]);

@@ -77,6 +77,67 @@ class ClassPatternsTest {
         }
     }
 
+    /** The forms users type on the command line, matched as {@code --skip-tests} applies them. */
+    @Nested
+    class TypedForms {
+
+        static boolean skips(String pattern, String className) {
+            return ClassPatterns.matching(pattern).test(className);
+        }
+
+        @Test
+        void leadingStarDot_matchesAnyPackagePrefix() {
+            assertTrue(skips("*.perf.PerformanceTest", "com.acme.perf.PerformanceTest"));
+            assertTrue(skips("*.perf.PerformanceTest", "perf.PerformanceTest"));
+            assertFalse(skips("*.perf.PerformanceTest", "com.acme.db.PerformanceTest"));
+        }
+
+        @Test
+        void leadingDoubleStarDot_thenAPackage_matchesAnyPackagePrefix() {
+            assertTrue(skips("**.perf.*", "com.acme.perf.PerformanceTest"));
+            assertTrue(skips("**.perf.*", "perf.LoadTest"));
+            assertFalse(skips("**.perf.*", "com.acme.perf.deep.LoadTest"));
+            assertFalse(skips("**.perf.*", "com.acme.perfx.LoadTest"));
+        }
+
+        @Test
+        void simpleName_inAnyPackage() {
+            assertTrue(skips("PerformanceTest", "com.acme.perf.PerformanceTest"));
+            assertTrue(skips("PerformanceTest", "PerformanceTest"));
+            assertFalse(skips("PerformanceTest", "com.acme.perf.PerformanceTests"));
+        }
+
+        @Test
+        void qualifiedName_exactly() {
+            assertTrue(skips("com.acme.perf.PerformanceTest", "com.acme.perf.PerformanceTest"));
+            assertFalse(skips("com.acme.perf.PerformanceTest", "org.com.acme.perf.PerformanceTest"));
+        }
+
+        @Test
+        void starInOneSegment() {
+            assertTrue(skips("*IT", "com.acme.db.StoreIT"));
+            assertTrue(skips("com.acme.*.SlowTest", "com.acme.db.SlowTest"));
+            assertFalse(skips("com.acme.*.SlowTest", "com.acme.db.deep.SlowTest"));
+            assertFalse(skips("com.acme.*.SlowTest", "com.acme.SlowTest"));
+        }
+
+        @Test
+        void doubleStarAcrossPackages() {
+            assertTrue(skips("com.acme.db.**", "com.acme.db.StoreTest"));
+            assertTrue(skips("com.acme.db.**", "com.acme.db.deep.StoreTest"));
+            assertFalse(skips("com.acme.db.**", "com.acme.dbx.StoreTest"));
+        }
+
+        @Test
+        void nestedClassFollowsItsOuterClass() {
+            assertTrue(skips("PerformanceTest", "com.acme.perf.PerformanceTest$Slow"));
+            assertTrue(skips("*.perf.PerformanceTest", "com.acme.perf.PerformanceTest$Slow$Slower"));
+            assertTrue(skips("com.acme.perf.PerformanceTest", "com.acme.perf.PerformanceTest$Slow"));
+            assertTrue(skips("PerformanceTest$Slow", "com.acme.perf.PerformanceTest$Slow"));
+            assertFalse(skips("PerformanceTest$Slow", "com.acme.perf.PerformanceTest"));
+        }
+    }
+
     @Nested
     class Mistakes {
 

@@ -12,18 +12,14 @@ import dev.changeling.cli.Main;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
-import java.io.BufferedReader;
 import java.io.File;
 import java.io.IOException;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.BlockingQueue;
-import java.util.concurrent.LinkedBlockingQueue;
+import java.util.regex.Pattern;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Nested;
@@ -37,7 +33,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The real binary in a JVM of its own, stopped by SIGINT while its mutants run: it keeps the verdicts so far,
  * exits with 130, and leaves neither a changed source file nor a worker JVM behind. The signal goes to the tool
- * alone, and, as Ctrl-C in a terminal sends it, to the tool and its worker JVMs at once.
+ * alone, and, as Ctrl-C in a terminal sends it, to the tool and its worker JVMs at once. Also what it says when
+ * stopped while mvn runs or after the last mutant, and that a failure with no signal never claims a stop.
  */
 @Tag("e2e")
 @DisabledOnOs(value = OS.WINDOWS, disabledReason = "sends SIGINT with the kill command")
@@ -45,7 +42,6 @@ class InterruptedRunTest {
 
     /** The hostile sample's blocked uploader thread, given ten minutes, keeps the run busy until the signal. */
     static final String BLOCKED = "Uploader count<expectedBatches → <=";
-    static final long WAIT_SECONDS = 300;
 
     /** The command line of the real {@code changeling}, on this test run's classpath (the jar may not be built yet). */
     static List<String> javaCommand(String... arguments) {
@@ -66,6 +62,134 @@ class InterruptedRunTest {
         if (exit != 0) {
             throw new AssertionError(String.join(" ", command) + " failed with " + exit);
         }
+    }
+
+    /** A stand-in for mvn under MAVEN_HOME, a shell script with this body; the environment that makes the tool use it. */
+    static Map<String, String> fakeMaven(Path home, String body) throws IOException {
+        Path mvn = Files.createDirectories(home.resolve("bin")).resolve("mvn");
+        Files.writeString(mvn, "#!/bin/sh\n" + body + "\n");
+        assertTrue(mvn.toFile().setExecutable(true), "cannot make " + mvn + " executable");
+        return Map.of("MAVEN_HOME", home.toString());
+    }
+
+    static List<String> messages(List<String> stderr) {
+        return stderr.stream().filter(line -> line.startsWith("changeling:")).toList();
+    }
+
+    /** Failures that stop nothing: only what failed is said, and never that a run was stopped. */
+    @Nested
+    class FailureWithoutAnySignal {
+
+        @Test
+        void noPom_saysOnlyThat_andNothingAboutStopping(@TempDir Path folder) throws Exception {
+            Files.createDirectories(folder.resolve("src/shop"));
+            Files.writeString(folder.resolve("src/shop/Till.java"), "package shop;\n\nclass Till {\n}\n");
+            try (ToolProcess tool = ToolProcess.start(javaCommand("run", "--plain", folder.toString()), Map.of(),
+                    ProcessBuilder.Redirect.DISCARD)) {
+                assertEquals(ExitCode.USER_ERROR, tool.awaitEnd(), tool.stderr()::toString);
+                assertEquals(1, tool.stderr().size(), tool.stderr()::toString);
+                assertTrue(tool.stderr().get(0).startsWith("changeling: " + folder + ": no pom.xml here"), tool.stderr()::toString);
+            }
+        }
+
+        @Test
+        void mavenFails_saysWhatFailed_andNothingAboutStopping(@TempDir Path folder) throws Exception {
+            Path project = SampleProjects.copy("greenhouse", folder.resolve("greenhouse"));
+            Map<String, String> maven = fakeMaven(folder.resolve("maven"), "echo '[ERROR] cannot find symbol'\nexit 1");
+            try (ToolProcess tool = ToolProcess.start(javaCommand("run", "--plain", project.toString()), maven,
+                    ProcessBuilder.Redirect.DISCARD)) {
+                assertEquals(ExitCode.USER_ERROR, tool.awaitEnd(), tool.stderr()::toString);
+                List<String> messages = messages(tool.stderr());
+                assertEquals(1, messages.size(), tool.stderr()::toString);
+                assertTrue(messages.get(0).startsWith("changeling: mvn could not compile"), tool.stderr()::toString);
+            }
+        }
+    }
+
+    /** Ctrl-C while mvn builds the project (a stand-in that waits): the tool says it was interrupted, and mvn ends. */
+    @Nested
+    class SignalWhileMavenRuns {
+
+        @Test
+        void toTheToolAlone_saysItWasInterrupted_andEndsMaven(@TempDir Path folder) throws Exception {
+            interruptWhileMavenRuns(folder, List.of(), pid -> kill("-INT", Long.toString(pid)));
+        }
+
+        /** The terminal's Ctrl-C reaches mvn too, which then fails: that is still an interruption, not a failed build. */
+        @Test
+        void toItsProcessGroup_saysItWasInterrupted_notThatMavenCouldNotCompile(@TempDir Path folder) throws Exception {
+            assumeTrue(Files.isExecutable(Path.of("/usr/bin/setsid")) || Files.isExecutable(Path.of("/bin/setsid")), "needs setsid");
+            interruptWhileMavenRuns(folder, List.of("setsid"), pid -> kill("-INT", "--", "-" + pid));
+        }
+
+        private void interruptWhileMavenRuns(Path folder, List<String> launcher, Signal signal) throws Exception {
+            Path project = SampleProjects.copy("greenhouse", folder.resolve("greenhouse"));
+            Path started = folder.resolve("mvn-started");
+            Map<String, String> maven = fakeMaven(folder.resolve("maven"),
+                    "echo $$ > '" + started + ".part' && mv '" + started + ".part' '" + started + "'\nexec sleep 300");
+            List<String> command = new ArrayList<>(launcher);
+            command.addAll(javaCommand("run", "--plain", project.toString()));
+            ProcessHandle mvn = null;
+            try (ToolProcess tool = ToolProcess.start(command, maven, ProcessBuilder.Redirect.DISCARD)) {
+                tool.awaitFile(started);
+                mvn = ProcessHandle.of(Long.parseLong(Files.readString(started).strip())).orElse(null);
+                signal.send(tool.pid());
+
+                assertEquals(ExitCode.INTERRUPTED, tool.awaitEnd(), tool.stderr()::toString);
+                List<String> messages = messages(tool.stderr());
+                assertEquals(1, messages.size(), tool.stderr()::toString);
+                assertTrue(messages.get(0).contains("interrupted") && messages.get(0).endsWith("; nothing was written"),
+                        tool.stderr()::toString);
+                assertFalse(Files.exists(ProjectLayout.of(project).resultsFile()));
+                if (mvn != null) {
+                    mvn.onExit().get(ToolProcess.WAIT_SECONDS, TimeUnit.SECONDS);
+                }
+            } finally {
+                if (mvn != null && mvn.isAlive()) {
+                    mvn.destroyForcibly();
+                }
+            }
+        }
+    }
+
+    /**
+     * Ctrl-C once every mutant has its verdict, while the timed-out ones are checked again (the uploader's blocked
+     * thread, given a short deadline first): the results are complete, and the report says so.
+     */
+    @Nested
+    class SignalAfterTheLastMutant {
+
+        static final Pattern ALL_FINISHED = Pattern.compile("progress: (\\d+)/\\1 mutants.*");
+
+        @Test
+        void printsTheReport_ofTheCompleteResults(@TempDir Path temporary) throws Exception {
+            Path project = SampleProjects.copy("hostile", temporary.resolve("station"));
+            Path report = temporary.resolve("report.txt");
+            List<String> command = javaCommand("run", "--plain", "--files", "**/Uploader.java", "--time-extra", "1000",
+                    "--recheck-timeouts", project.toString());
+            int exitCode;
+            List<String> stderr;
+            try (ToolProcess tool = ToolProcess.start(command, Map.of(), ProcessBuilder.Redirect.to(report.toFile()))) {
+                tool.awaitLine(line -> ALL_FINISHED.matcher(line).matches());
+                kill("-INT", Long.toString(tool.pid()));
+                exitCode = tool.awaitEnd();
+                stderr = tool.stderr();
+            }
+
+            assertEquals(ExitCode.INTERRUPTED, exitCode, stderr::toString);
+            Path resultsFile = ProjectLayout.of(project).resultsFile();
+            assertTrue(ResultsFile.read(resultsFile).complete());
+            String out = Files.readString(report);
+            assertTrue(out.contains("results: " + resultsFile), () -> out + stderr);
+            assertEquals(List.of("changeling: stopped after every mutant had its verdict; the results are complete"), messages(stderr),
+                    stderr::toString);
+        }
+    }
+
+    /** Sends a signal to a process. */
+    @FunctionalInterface
+    interface Signal {
+        void send(long pid) throws Exception;
     }
 
     @Nested
@@ -121,53 +245,14 @@ class InterruptedRunTest {
             project = SampleProjects.copy("hostile", temporary.resolve("station"));
             filesBefore = SampleProjects.fingerprint(project);
             command.addAll(javaCommand("run", "--plain", "--time-extra", "600000", project.toString()));
-            Process tool = new ProcessBuilder(command).redirectOutput(ProcessBuilder.Redirect.DISCARD).start();
-            BlockingQueue<String> lines = new LinkedBlockingQueue<>();
-            Thread reader = new Thread(() -> readLines(tool, lines), "tool-stderr");
-            reader.setDaemon(true);
-            reader.start();
-            try {
-                awaitLine(tool, lines, "  baseline: ");
+            try (ToolProcess tool = ToolProcess.start(command, Map.of(), ProcessBuilder.Redirect.DISCARD)) {
+                tool.awaitLine(line -> line.startsWith("  baseline: "));
                 workersWhileRunning = Workers.aliveFor(project);
                 signal(tool.pid());
-                if (!tool.waitFor(WAIT_SECONDS, TimeUnit.SECONDS)) {
-                    throw new AssertionError("the tool did not stop within " + WAIT_SECONDS + " s of SIGINT: " + stderr);
-                }
-                exitCode = tool.exitValue();
-                reader.join(TimeUnit.SECONDS.toMillis(WAIT_SECONDS));
-                lines.drainTo(stderr);
-            } finally {
-                if (tool.isAlive()) {
-                    ExternalCommand.killWithChildren(tool.toHandle());
-                }
+                exitCode = tool.awaitEnd();
+                stderr.addAll(tool.stderr());
             }
             results = ResultsFile.read(ProjectLayout.of(project).resultsFile());
-        }
-
-        private void awaitLine(Process tool, BlockingQueue<String> lines, String start) throws InterruptedException {
-            long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(WAIT_SECONDS);
-            while (System.nanoTime() < deadline) {
-                String line = lines.poll(1, TimeUnit.SECONDS);
-                if (line != null) {
-                    stderr.add(line);
-                    if (line.startsWith(start)) {
-                        return;
-                    }
-                } else if (!tool.isAlive()) {
-                    throw new AssertionError("the tool ended (exit " + tool.exitValue() + ") before printing '" + start + "': " + stderr);
-                }
-            }
-            throw new AssertionError("no line starting '" + start + "' within " + WAIT_SECONDS + " s: " + stderr);
-        }
-
-        private static void readLines(Process tool, BlockingQueue<String> lines) {
-            try (BufferedReader err = new BufferedReader(new InputStreamReader(tool.getErrorStream(), StandardCharsets.UTF_8))) {
-                for (String line = err.readLine(); line != null; line = err.readLine()) {
-                    lines.add(line);
-                }
-            } catch (IOException ended) {
-                // the stream closes with the process
-            }
         }
 
         /** 130 is 128 + 2, SIGINT's number: the shells' convention for a command ended by a signal (POSIX sh, "Exit Status"). */

@@ -90,6 +90,79 @@ class RunCommandLineTest {
         }
     }
 
+    /**
+     * The bike-share sample with two failing classes, one left out by a pattern that starts with {@code *.} and one
+     * by its tag, beside a pattern and a tag that match nothing.
+     */
+    @Nested
+    @Tag("e2e")
+    @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+    class SkipsAsUsersTypeThem {
+
+        static final String SLOW_BY_NAME = """
+                package dev.changeling.samples.bikeshare.perf;
+
+                import static org.junit.jupiter.api.Assertions.fail;
+
+                import org.junit.jupiter.api.Test;
+
+                class PerformanceTest {
+
+                    @Test
+                    void failsUnlessLeftOut() {
+                        fail("left out by --skip-tests '*.perf.PerformanceTest'");
+                    }
+                }
+                """;
+
+        static final String SLOW_BY_TAG = """
+                package dev.changeling.samples.bikeshare;
+
+                import static org.junit.jupiter.api.Assertions.fail;
+
+                import org.junit.jupiter.api.Tag;
+                import org.junit.jupiter.api.Test;
+
+                class DockCapacityTest {
+
+                    @Test
+                    @Tag("wip")
+                    void failsUnlessLeftOut() {
+                        fail("left out by --skip-tag wip");
+                    }
+                }
+                """;
+
+        ToolRun run;
+
+        @BeforeAll
+        void runLeavingOutBothFailingClasses(@TempDir Path folder) throws IOException {
+            Path project = SampleProjects.copy("jupiter5", folder.resolve("bikeshare"));
+            Path tests = project.resolve("src/test/java/dev/changeling/samples/bikeshare");
+            Files.createDirectories(tests.resolve("perf"));
+            Files.writeString(tests.resolve("perf/PerformanceTest.java"), SLOW_BY_NAME);
+            Files.writeString(tests.resolve("DockCapacityTest.java"), SLOW_BY_TAG);
+            run = ToolRun.onCopyOfProject(project, "--sample", "1",
+                    "--skip-tests", "*.perf.PerformanceTest", "--skip-tests", "*.perf.Perf",
+                    "--skip-tag", "wip", "--skip-tag", "wipp");
+        }
+
+        @Test
+        void leadingStarDotPattern_leavesOutTheClassInADeeperPackage() {
+            assertEquals(ExitCode.OK, run.exitCode(), run::transcript);
+            List<String> tests = run.results().tests().stream().map(TestRecord::id).toList();
+            assertTrue(!tests.isEmpty() && tests.stream().noneMatch(id -> id.contains("PerformanceTest")), tests::toString);
+            assertTrue(run.err().contains("1 left out by --skip-tests"), run::transcript);
+        }
+
+        @Test
+        void notesEachPatternAndTagThatMatchesNothing_andOnlyThose() {
+            List<String> notes = run.err().lines().map(String::strip).filter(line -> line.startsWith("tests: note: --skip")).toList();
+            assertEquals(List.of("tests: note: --skip-tests '*.perf.Perf' matches no test class",
+                    "tests: note: --skip-tag 'wipp' matches no test"), notes, run::transcript);
+        }
+    }
+
     @Nested
     class NoPom {
 
