@@ -17,7 +17,8 @@ enum Choice {
     FIXED('f', "fixed",
             "Runs this mutant again now, against the code and tests as they are. Recorded as fixed only when a test"
                     + " now detects it; if it still survives, nothing is recorded."),
-    SKIP('s', "skip", "Leave it without a decision for now and go on; the next triage starts at it again."),
+    SKIP('s', "skip", "Leave it without a decision for now and go on; after the last survivor, round again from the first"
+            + " still without one (says so and waits when there is none). The next triage starts at it again."),
     BACK('b', "back", "Go back to the previous survivor (its decision so far is shown; a new one replaces it)."),
     CONTEXT('c', "context",
             "More lines around the change, from the file as it is now (wider each time); says so when the file"

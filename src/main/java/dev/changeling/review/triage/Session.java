@@ -17,7 +17,8 @@ import java.util.Set;
 /** One run of the triage loop: show a survivor, read an answer, act on it, until done. */
 final class Session {
 
-    private enum Step { STAY, MOVED, QUIT }
+    /** After an answer: stay at the prompt, show the (current, perhaps other) survivor, or stop. */
+    private enum Step { STAY, SHOW, QUIT }
 
     private final Triage.Setup setup;
     private final Answers answers;
@@ -87,7 +88,7 @@ final class Session {
             if (step == Step.QUIT) {
                 return;
             }
-            fresh = step == Step.MOVED;
+            fresh = step == Step.SHOW;
         }
         out.println("that was the last survivor");
     }
@@ -157,12 +158,21 @@ final class Session {
         if (!decisions.decided(mutant)) {
             skipped.add(mutant.id());
         }
-        return forward();
+        if (walk.hasNext()) {
+            return forward();
+        }
+        if (walk.wrap()) {
+            out.println(setup.revisit() ? "that was the last survivor; round again from the first"
+                    : "that was the last survivor; round again from the first still without a decision");
+            return Step.SHOW;
+        }
+        out.println("no other survivor is without a decision: decide this one, go back with b, or quit with q");
+        return Step.STAY;
     }
 
     private Step back() {
         if (walk.back()) {
-            return Step.MOVED;
+            return Step.SHOW;
         }
         out.println("this is the first survivor");
         return Step.STAY;
@@ -181,7 +191,7 @@ final class Session {
 
     private Step forward() {
         walk.forward();
-        return Step.MOVED;
+        return Step.SHOW;
     }
 
     private void farewell() {

@@ -371,6 +371,37 @@ class TriageTest {
         }
 
         @Test
+        void skipOnTheLast_wrapsToTheFirstStillWithoutADecision() {
+            String out = session("s\nt\nt\nt\nt\ns\nq\n");
+
+            assertTrue(out.contains("that was the last survivor; round again from the first still without a decision\n"), out);
+            int lastShown = out.lastIndexOf("survivor ");
+            assertTrue(out.startsWith("survivor 1 of 6 · " + shortId(0), lastShown), out.substring(lastShown));
+            assertTrue(mark(5).isEmpty());
+            assertEquals(Optional.of(shortId(0)), ending.resumesAt());
+        }
+
+        @Test
+        void skipOnTheLast_withNoOtherWithoutADecision_saysSoAndWaitsForAnotherKey() {
+            String out = session("t\nt\nt\nt\nt\ns\nt\n");
+
+            assertTrue(out.contains("no other survivor is without a decision: decide this one, go back with b, or quit with q\n"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(5).orElseThrow().kind());
+            assertEquals(6, ending.decided());
+        }
+
+        @Test
+        void skipOnTheLast_whenRevisiting_wrapsToTheVeryFirst() {
+            session("t\nt\nt\nt\nt\nt\n");
+
+            String out = session("s\ns\ns\ns\ns\ns\nq\n", rerunSaying(), true);
+
+            int wrapped = out.indexOf("that was the last survivor; round again from the first\n");
+            assertTrue(wrapped > out.indexOf("survivor 6 of 6"), out);
+            assertTrue(out.indexOf("survivor 1 of 6 · " + shortId(0), wrapped) > wrapped, out);
+        }
+
+        @Test
         void afterTheLast_endsAndSaysEveryOneIsDecided() {
             String out = session("t\nt\nt\nt\nt\nt\n");
 
