@@ -17,6 +17,9 @@ enum Choice {
     FIXED('f', "fixed",
             "Runs this mutant again now, against the code and tests as they are. Recorded as fixed only when a test"
                     + " now detects it; if it still survives, nothing is recorded."),
+    UNDO('u', "undo",
+            "Clears the decision recorded for this survivor: its entry in the equivalents list, or its local mark;"
+                    + " saved at once. Nothing else recorded changes."),
     SKIP('s', "skip", "Leave it without a decision for now and go on; after the last survivor, round again from the first"
             + " still without one (says so and waits when there is none). The next triage starts at it again."),
     BACK('b', "back", "Go back to the previous survivor (its decision so far is shown; a new one replaces it)."),

@@ -117,6 +117,7 @@ final class Session {
                 case EQUIVALENT -> equivalent(mutant, text);
                 case NEEDS_TEST -> needsTest(mutant, text);
                 case FIXED -> fixed(mutant);
+                case UNDO -> undo(mutant);
                 case SKIP -> skip(mutant);
                 case BACK -> back();
                 case CONTEXT -> context(mutant);
@@ -152,6 +153,19 @@ final class Session {
 
     private Step fixed(MutantResult mutant) {
         return fixCheck.check(mutant) ? forward() : Step.STAY;
+    }
+
+    private Step undo(MutantResult mutant) {
+        var cleared = decisions.clear(mutant);
+        if (cleared.isEmpty()) {
+            out.println(mutant.shortId() + " has no decision to clear");
+            return Step.STAY;
+        }
+        Path file = cleared.get().kind() == Decision.Kind.EQUIVALENT
+                ? EquivalentsList.in(setup.projectRoot()) : TriageMarks.in(setup.projectRoot());
+        out.println(style.green("cleared " + mutant.shortId() + ": no longer " + cleared.get().shown() + " in " + shown(file)));
+        out.println(style.dim(counts().line()));
+        return Step.STAY;
     }
 
     private Step skip(MutantResult mutant) {

@@ -148,7 +148,7 @@ class TriageTest {
         void promptListsEveryChoiceByLetter() {
             String out = session("q\n");
 
-            assertTrue(out.contains("e equivalent  t needs a test  f fixed  s skip  b back  c context  q quit  ? help > q\n"), out);
+            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  c context  q quit  ? help > q\n"), out);
         }
 
         @Test
@@ -320,6 +320,54 @@ class TriageTest {
 
             assertTrue(listed(0).isEmpty());
             assertEquals(TriageMarks.Kind.FIXED, mark(0).orElseThrow().kind());
+        }
+    }
+
+    @Nested
+    class Undo {
+
+        @Test
+        void undo_ofAnEquivalent_removesOnlyItsEntry_andKeepsEveryOtherDecision() {
+            session("s\nt kept\nq\n");
+            EquivalentsList list = EquivalentsList.load(root);
+            list.put(EquivalentEntry.of(project.walked(5), "listed by hand"));
+            list.save();
+
+            String out = session("e at dusk both read lit\nb\nb\nu\nq\n");
+
+            assertTrue(out.contains("cleared " + shortId(0) + ": no longer equivalent (at dusk both read lit)"
+                    + " in .changeling/equivalent-mutants.txt\n"), out);
+            assertTrue(listed(0).isEmpty());
+            assertEquals("listed by hand", listed(5).orElseThrow().reason());
+            assertEquals("kept", mark(1).orElseThrow().note());
+            assertEquals(Optional.of(shortId(0)), ending.resumesAt());
+        }
+
+        @Test
+        void undo_ofANeedsTestMark_removesOnlyThatMark() {
+            String out = session("t first\nt second\nb\nu\nq\n");
+
+            assertTrue(out.contains("cleared " + shortId(1) + ": no longer needs a test (second) in .changeling/local/triage.json\n"
+                    + "1 of 6 decided (0 equivalent, 1 needs a test, 0 fixed) · 5 left\n"), out);
+            assertTrue(mark(1).isEmpty());
+            assertEquals("first", mark(0).orElseThrow().note());
+        }
+
+        @Test
+        void undo_ofAFixedMark_removesIt() {
+            session("f\nb\nu\nq\n", rerunSaying(Verdict.KILLED), false);
+
+            assertTrue(mark(0).isEmpty());
+            assertEquals(6, ending.survivors());
+        }
+
+        @Test
+        void undo_withoutADecision_saysSoAndWritesNothing() {
+            String out = session("u\nq\n");
+
+            assertTrue(out.contains(shortId(0) + " has no decision to clear\n"), out);
+            assertFalse(Files.exists(EquivalentsList.in(root)));
+            assertFalse(Files.exists(TriageMarks.in(root)));
         }
     }
 
