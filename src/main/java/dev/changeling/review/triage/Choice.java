@@ -23,6 +23,9 @@ enum Choice {
     SKIP('s', "skip", "Leave it without a decision for now and go on; after the last survivor, round again from the first"
             + " still without one (says so and waits when there is none). The next triage starts at it again."),
     BACK('b', "back", "Go back to the previous survivor (its decision so far is shown; a new one replaces it)."),
+    LIST('l', "list",
+            "Lists every unresolved survivor, one line each: id, file:line, operator and the decision if any;"
+                    + " then back to this one."),
     CONTEXT('c', "context",
             "More lines around the change, from the file as it is now (wider each time); says so when the file"
                     + " has changed since the run."),

@@ -120,6 +120,7 @@ final class Session {
                 case UNDO -> undo(mutant);
                 case SKIP -> skip(mutant);
                 case BACK -> back();
+                case LIST -> list();
                 case CONTEXT -> context(mutant);
                 case QUIT -> Step.QUIT;
                 case HELP -> help();
@@ -190,6 +191,17 @@ final class Session {
         }
         out.println("this is the first survivor");
         return Step.STAY;
+    }
+
+    private Step list() {
+        out.print(SurvivorList.render(walk.survivors(), walk.position() - 1, this::status, style));
+        out.println("back at survivor " + walk.position() + " of " + walk.size() + " · " + walk.current().shortId());
+        return Step.STAY;
+    }
+
+    private String status(MutantResult mutant) {
+        return decisions.of(mutant).map(decision -> decision.kind().label())
+                .orElse(skipped.contains(mutant.id()) ? "skipped" : "");
     }
 
     private Step context(MutantResult mutant) {

@@ -148,7 +148,7 @@ class TriageTest {
         void promptListsEveryChoiceByLetter() {
             String out = session("q\n");
 
-            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  c context  q quit  ? help > q\n"), out);
+            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  l list  c context  q quit  ? help > q\n"), out);
         }
 
         @Test
@@ -368,6 +368,27 @@ class TriageTest {
             assertTrue(out.contains(shortId(0) + " has no decision to clear\n"), out);
             assertFalse(Files.exists(EquivalentsList.in(root)));
             assertFalse(Files.exists(TriageMarks.in(root)));
+        }
+    }
+
+    @Nested
+    class Listing {
+
+        @Test
+        void list_showsEveryUnresolvedSurvivorOnALine_thenStaysOnTheCurrent() {
+            String out = session("e at dusk both read lit\nt\ns\nl\nt\nq\n");
+
+            String place7 = TriageProject.BEACON + ":7 ";
+            String place11 = TriageProject.BEACON + ":11";
+            assertTrue(out.contains("6 unresolved survivors (> marks this one):\n"
+                    + "  1  " + shortId(0) + "  " + place7 + "  relational-subset  equivalent\n"
+                    + "  2  " + shortId(1) + "  " + place7 + "  relational-subset  needs a test\n"
+                    + "  3  " + shortId(2) + "  " + place7 + "  relational-subset  skipped\n"
+                    + "> 4  " + shortId(3) + "  " + place11 + "  relational-subset\n"
+                    + "  5  " + shortId(4) + "  " + place11 + "  relational-subset\n"
+                    + "  6  " + shortId(5) + "  " + place11 + "  relational-subset\n"
+                    + "back at survivor 4 of 6 · " + shortId(3) + "\n"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(3).orElseThrow().kind());
         }
     }
 
