@@ -1,5 +1,6 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.review.IdPrefix;
 import dev.changeling.terminal.Style;
 import java.util.Arrays;
 import java.util.Locale;
@@ -23,6 +24,9 @@ enum Choice {
     SKIP('s', "skip", "Leave it without a decision for now and go on; after the last survivor, round again from the first"
             + " still without one (says so and waits when there is none). The next triage starts at it again."),
     BACK('b', "back", "Go back to the previous survivor (its decision so far is shown; a new one replaces it)."),
+    GO_TO('g', "go to",
+            "Goes to the survivor whose id starts with the digits after the letter: g <id>, at least "
+                    + IdPrefix.MIN_LENGTH + " of them (l shows the ids)."),
     LIST('l', "list",
             "Lists every unresolved survivor, one line each: id, file:line, operator and the decision if any;"
                     + " then back to this one."),

@@ -5,6 +5,7 @@ import dev.changeling.UserError;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
 import dev.changeling.review.EquivalentsList;
+import dev.changeling.review.IdPrefix;
 import dev.changeling.review.TriageMarks;
 import dev.changeling.review.export.Survivors;
 import dev.changeling.terminal.Style;
@@ -120,6 +121,7 @@ final class Session {
                 case UNDO -> undo(mutant);
                 case SKIP -> skip(mutant);
                 case BACK -> back();
+                case GO_TO -> goTo(text);
                 case LIST -> list();
                 case CONTEXT -> context(mutant);
                 case QUIT -> Step.QUIT;
@@ -191,6 +193,23 @@ final class Session {
         }
         out.println("this is the first survivor");
         return Step.STAY;
+    }
+
+    private Step goTo(String id) {
+        if (id.isEmpty()) {
+            out.println("g needs the start of a survivor's id, such as g " + walk.current().shortId().substring(0, IdPrefix.MIN_LENGTH)
+                    + "; l lists them");
+            return Step.STAY;
+        }
+        MutantResult target;
+        try {
+            target = IdPrefix.single(id, walk.survivors(), MutantResult::id, "among the unresolved survivors here", "l lists them");
+        } catch (UserError e) {
+            out.println(e.getMessage());
+            return Step.STAY;
+        }
+        walk.goTo(target);
+        return Step.SHOW;
     }
 
     private Step list() {

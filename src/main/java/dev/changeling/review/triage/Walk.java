@@ -95,6 +95,15 @@ final class Walk {
         return true;
     }
 
+    /** To the given survivor, one of this walk's. */
+    void goTo(MutantResult survivor) {
+        int index = survivors.indexOf(survivor);
+        if (index < 0) {
+            throw new IllegalArgumentException("not a survivor of this walk: " + survivor.id());
+        }
+        at = index;
+    }
+
     /** Where the next triage will start: the first survivor without a decision. */
     Optional<MutantResult> resumesAt() {
         return survivors.stream().filter(decided.negate()).findFirst();

@@ -148,7 +148,7 @@ class TriageTest {
         void promptListsEveryChoiceByLetter() {
             String out = session("q\n");
 
-            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  l list  c context  q quit  ? help > q\n"), out);
+            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  g go to  l list  c context  q quit  ? help > q\n"), out);
         }
 
         @Test
@@ -368,6 +368,71 @@ class TriageTest {
             assertTrue(out.contains(shortId(0) + " has no decision to clear\n"), out);
             assertFalse(Files.exists(EquivalentsList.in(root)));
             assertFalse(Files.exists(TriageMarks.in(root)));
+        }
+    }
+
+    @Nested
+    class GoingTo {
+
+        /** Four hex digits that start none of the survivors' ids. */
+        String unusedPrefix() {
+            for (int value = 0; ; value++) {
+                String prefix = String.format("%04x", value);
+                if (project.walked.stream().noneMatch(mutant -> mutant.id().startsWith(prefix))) {
+                    return prefix;
+                }
+            }
+        }
+
+        @Test
+        void goTo_byIdPrefix_showsThatSurvivorAndDecidesThere() {
+            String out = session("g " + id(4).substring(0, 6).toUpperCase() + "\nt\nq\n");
+
+            assertTrue(out.contains("survivor 5 of 6 · " + shortId(4)), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(4).orElseThrow().kind());
+            assertTrue(mark(0).isEmpty());
+        }
+
+        @Test
+        void goTo_ambiguousPrefix_saysWhichFitAndStays() {
+            List<MutantResult> twins = new ArrayList<>();
+            for (MutantResult mutant : project.results.mutants()) {
+                boolean twin = mutant.id().equals(id(0)) || mutant.id().equals(id(1));
+                twins.add(twin ? withId(mutant, "3fa2" + mutant.id().substring(4)) : mutant);
+            }
+            RunResults whole = project.results;
+            project = new TriageProject(root, new RunResults(whole.format(), true, whole.settings(), whole.tests(),
+                    whole.timings(), twins, whole.problems(), whole.sourceHashes()));
+
+            String out = session("g 3fa2\nt\nq\n");
+
+            assertTrue(out.contains("id 3fa2 fits 2 mutants (3fa2"), out);
+            assertTrue(out.contains("); give more digits\ne equivalent"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void goTo_unknownPrefix_saysSoInOneLineAndStays() {
+            String prefix = unusedPrefix();
+
+            String out = session("g " + prefix + "\nt\nq\n");
+
+            assertTrue(out.contains("> g " + prefix + "\nno mutant " + prefix + " among the unresolved survivors here; l lists them\n"
+                    + "e equivalent"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void goTo_notAnIdOrNoId_saysWhatItNeeds() {
+            String out = session("g beacon\ng\nq\n");
+
+            assertTrue(out.contains("'beacon' is not a mutant id; give at least 4 of its hex digits\n"), out);
+            assertTrue(out.contains("g needs the start of a survivor's id, such as g " + id(0).substring(0, 4) + "; l lists them\n"), out);
+        }
+
+        MutantResult withId(MutantResult mutant, String id) {
+            return new MutantResult(id, mutant.file(), mutant.order(), mutant.points(), mutant.verdict(), mutant.killedBy(),
+                    mutant.detail(), mutant.testsRun(), mutant.reachedBy(), mutant.millis(), mutant.diff());
         }
     }
 
