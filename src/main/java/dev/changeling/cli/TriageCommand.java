@@ -27,7 +27,8 @@ import picocli.CommandLine.Spec;
             "Go through the unresolved survivors of the last run (its results file, target/changeling/results.json by default) one at a time:"
                     + " see the change and the tests that missed it, then decide. Answer with a letter and Enter"
                     + " (? lists them): e equivalent, t needs a test, f fixed (runs it again first), u undo (clears the"
-                    + " decision), s skip, b back, g <id> go to one, l list them all, c more context, q quit.",
+                    + " decision), s skip, b back, g <id> go to one, l list them all, c more context, o open the file in"
+                    + " $VISUAL or $EDITOR, q quit.",
             "Every decision is saved the moment it is made; the next triage starts at the first survivor without one."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
@@ -83,7 +84,7 @@ final class TriageCommand implements Callable<Integer> {
             Runtime.getRuntime().addShutdownHook(onCtrlC);
         }
         try {
-            Triage.run(new Triage.Setup(layout.root(), results, revisit, style), answers, out, rerun(layout, results));
+            Triage.run(new Triage.Setup(layout.root(), results, revisit, style, System.getenv()), answers, out, rerun(layout, results));
         } finally {
             if (onCtrlC != null) {
                 try {

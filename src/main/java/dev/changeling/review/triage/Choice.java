@@ -33,6 +33,9 @@ enum Choice {
     CONTEXT('c', "context",
             "More lines around the change, from the file as it is now (wider each time); says so when the file"
                     + " has changed since the run."),
+    OPEN('o', "open",
+            "Opens the file at the mutated line in $VISUAL, else $EDITOR (started as: editor +LINE FILE) on this"
+                    + " terminal; triage goes on when the editor exits."),
     QUIT('q', "quit", "Stop. Every decision is already saved; the next triage starts at the first survivor without one."),
     HELP('?', "help", "This list.");
 

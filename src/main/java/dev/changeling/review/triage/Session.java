@@ -30,6 +30,7 @@ final class Session {
     private final TestNames names;
     private final SurvivorView view;
     private final FixCheck fixCheck;
+    private final SourceEditor editor;
     private final Set<String> skipped = new HashSet<>();
     private Walk walk;
     private int contextLines;
@@ -44,6 +45,7 @@ final class Session {
         this.names = new TestNames(setup.results().tests());
         this.view = new SurvivorView(out, style, names);
         this.fixCheck = new FixCheck(rerun, decisions, names, out, style);
+        this.editor = new SourceEditor(setup.environment(), setup.projectRoot(), out, style);
     }
 
     Triage.Ending run() {
@@ -124,6 +126,7 @@ final class Session {
                 case GO_TO -> goTo(text);
                 case LIST -> list();
                 case CONTEXT -> context(mutant);
+                case OPEN -> open(mutant);
                 case QUIT -> Step.QUIT;
                 case HELP -> help();
             };
@@ -227,6 +230,16 @@ final class Session {
         contextLines += WiderContext.STEP;
         out.print(WiderContext.render(sources.of(mutant.file()), mutant, contextLines, style));
         return Step.STAY;
+    }
+
+    private Step open(MutantResult mutant) {
+        CurrentSources.Current file = sources.of(mutant.file());
+        if (file.state() == CurrentSources.State.GONE) {
+            out.println(style.yellow(mutant.file() + " is gone since the run: there is nothing to open"));
+            return Step.STAY;
+        }
+        int line = WiderContext.lineNow(file, mutant).orElse(mutant.first().line());
+        return editor.open(setup.projectRoot().resolve(mutant.file()), mutant.file(), line) ? Step.SHOW : Step.STAY;
     }
 
     private Step help() {

@@ -23,6 +23,7 @@ import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Nested;
@@ -63,6 +64,15 @@ class TriageTest {
         PrintWriter out = new PrintWriter(text);
         ending = Triage.run(new Triage.Setup(root, project.results, revisit, Style.plain()),
                 Answers.fromLines(new StringReader(script), out), out, rerun);
+        out.flush();
+        return text.toString();
+    }
+
+    String session(String script, Map<String, String> environment) {
+        StringWriter text = new StringWriter();
+        PrintWriter out = new PrintWriter(text);
+        ending = Triage.run(new Triage.Setup(root, project.results, false, Style.plain(), environment),
+                Answers.fromLines(new StringReader(script), out), out, rerunSaying());
         out.flush();
         return text.toString();
     }
@@ -148,7 +158,7 @@ class TriageTest {
         void promptListsEveryChoiceByLetter() {
             String out = session("q\n");
 
-            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  g go to  l list  c context  q quit  ? help > q\n"), out);
+            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  g go to  l list  c context  o open  q quit  ? help > q\n"), out);
         }
 
         @Test
@@ -454,6 +464,85 @@ class TriageTest {
                     + "  6  " + shortId(5) + "  " + place11 + "  relational-subset\n"
                     + "back at survivor 4 of 6 · " + shortId(3) + "\n"), out);
             assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(3).orElseThrow().kind());
+        }
+    }
+
+    @Nested
+    class Opening {
+
+        @TempDir
+        Path tools;
+
+        /** A stand-in for an editor: writes the arguments it was given, one a line, to a file, and exits with a code. */
+        Path fakeEditor(String name, int exitCode) throws IOException {
+            Path script = tools.resolve(name);
+            Files.writeString(script, "#!/bin/sh\nprintf '%s\\n' \"$@\" > '" + arguments(name) + "'\nexit " + exitCode + "\n");
+            assertTrue(script.toFile().setExecutable(true));
+            return script;
+        }
+
+        Path arguments(String editor) {
+            return tools.resolve(editor + ".arguments");
+        }
+
+        List<String> argumentsGiven(String editor) throws IOException {
+            return Files.readAllLines(arguments(editor));
+        }
+
+        String beacon() {
+            return root.resolve(TriageProject.BEACON).toAbsolutePath().toString();
+        }
+
+        @Test
+        void open_startsVisualAtTheMutatedLine_thenShowsTheSurvivorAgain() throws IOException {
+            Path visual = fakeEditor("visual", 0);
+
+            String out = session("o\nt\nq\n", Map.of("VISUAL", visual.toString(), "EDITOR", fakeEditor("editor", 0).toString()));
+
+            assertEquals(List.of("+7", beacon()), argumentsGiven("visual"));
+            assertFalse(Files.exists(arguments("editor")), "$VISUAL wins over $EDITOR");
+            assertTrue(out.contains("opening " + TriageProject.BEACON + ":7 in " + visual + " ($VISUAL); triage goes on when it exits\n"
+                    + "\nsurvivor 1 of 6 · " + shortId(0)), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void open_withoutVisual_startsEditor_keepingTheArgumentsItNames() throws IOException {
+            Path editor = fakeEditor("editor", 0);
+
+            session("s\ns\ns\no\nq\n", Map.of("VISUAL", " ", "EDITOR", editor + " --wait"));
+
+            assertEquals(List.of("--wait", "+11", beacon()), argumentsGiven("editor"));
+        }
+
+        @Test
+        void open_withNeitherVisualNorEditor_saysSoInOneLineAndStays() {
+            String out = session("o\nt\nq\n", Map.of());
+
+            assertTrue(out.contains("> o\nno editor to open " + TriageProject.BEACON + " in: set $VISUAL or $EDITOR"
+                    + " (it is started as: editor +LINE FILE)\ne equivalent"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void open_afterLinesWereAddedAbove_opensWhereTheCodeIsNow() throws IOException {
+            Files.writeString(root.resolve(TriageProject.BEACON),
+                    TriageProject.BEACON_TEXT.replace("/** The harbour beacon. */", "/**\n * The harbour beacon,\n * lit at dusk.\n */"));
+            Path visual = fakeEditor("visual", 0);
+
+            session("o\nq\n", Map.of("VISUAL", visual.toString()));
+
+            assertEquals(List.of("+10", beacon()), argumentsGiven("visual"));
+        }
+
+        @Test
+        void open_editorThatFailsOrIsMissing_saysSoAndTriageGoesOn() throws IOException {
+            String failed = session("o\nt\nq\n", Map.of("VISUAL", fakeEditor("visual", 3).toString()));
+            String missing = session("o\nt\nq\n", Map.of("VISUAL", tools.resolve("no-such-editor").toString()));
+
+            assertTrue(failed.contains("the editor exited with code 3\n"), failed);
+            assertTrue(missing.contains("cannot start the editor '" + tools.resolve("no-such-editor") + "' ($VISUAL): "), missing);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(1).orElseThrow().kind());
         }
     }
 
