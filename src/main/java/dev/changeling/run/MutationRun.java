@@ -70,17 +70,17 @@ public final class MutationRun {
 
     /** The phases in order: discover, generate and narrow, compile, baseline, execute, record. */
     private RunResults run() {
-        PhaseClock clock = new PhaseClock();
-        DiscoveredProject project = clock.time("maven", () -> ProjectDiscovery.discover(request.layout(), request.discovery()));
+        PhaseClock clock = new PhaseClock(listener::starting);
+        DiscoveredProject project = clock.time(PhaseClock.MAVEN, () -> ProjectDiscovery.discover(request.layout(), request.discovery()));
         listener.phase("maven: " + project.build() + " (" + project.junitSetup() + ")");
         checkNotStopped();
 
         Optional<ChangeScope> change = request.change().map(spec -> spec.resolve(project.layout().root()));
-        Selection.Chosen chosen = clock.time("generate", () -> generate(project.layout(), change));
+        Selection.Chosen chosen = clock.time(PhaseClock.GENERATE, () -> generate(project.layout(), change));
         checkNotStopped();
 
         Path work = project.layout().changelingDirectory();
-        BuildResult build = clock.time("compile", () -> compile(project, chosen, work));
+        BuildResult build = clock.time(PhaseClock.COMPILE, () -> compile(project, chosen, work));
         Map<String, SourceFile> files = chosen.generated().files();
         Placements placements = Placements.of(chosen.mutants(), build, files);
         listener.phase("compiled: " + build.pointCount() + " points in one schema in "
@@ -95,7 +95,7 @@ public final class MutationRun {
         try (WorkerPool workers = WorkerPool.open(workerSettings(project, build, work), setup)) {
             pool = workers;
             checkNotStopped();
-            Baseline baseline = clock.time("baseline", () -> workers.baseline(name -> { }));
+            Baseline baseline = clock.time(PhaseClock.BASELINE, () -> workers.baseline(name -> { }));
             GreenBaseline.require(baseline, setup, project.layout().root());
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
             listener.phase(String.format(Locale.ROOT, "baseline: %d tests green in %.1f s%s",
@@ -105,7 +105,7 @@ public final class MutationRun {
             results.putAll(plan.unreached());
             results.values().forEach(listener::finished);
             listener.running(plan.jobs().size());
-            List<JobResult> finished = clock.time("execute", () -> workers.run(plan.jobs(), job -> {
+            List<JobResult> finished = clock.time(PhaseClock.EXECUTE, () -> workers.run(plan.jobs(), job -> {
                 MutantResult result = plan.resultOf(job, files);
                 results.put(job.key(), result);
                 listener.finished(result);

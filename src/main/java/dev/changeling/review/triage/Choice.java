@@ -16,8 +16,8 @@ enum Choice {
             "A test should notice it; one is still to be written. An optional note may follow: t <note>."
                     + " Kept on this machine in .changeling/local/triage.json."),
     FIXED('f', "fixed",
-            "Runs this mutant again now, against the code and tests as they are. Recorded as fixed only when a test"
-                    + " now detects it; if it still survives, nothing is recorded."),
+            "Runs this mutant again now, against the code and tests as they are, saying each step as it starts."
+                    + " Recorded as fixed only when a test now detects it; if it still survives, nothing is recorded."),
     UNDO('u', "undo",
             "Clears the decision recorded for this survivor: its entry in the equivalents list, or its local mark;"
                     + " saved at once. Nothing else recorded changes."),

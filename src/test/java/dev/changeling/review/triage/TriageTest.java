@@ -47,7 +47,7 @@ class TriageTest {
     /** A re-run that answers with the verdicts given, one per call, and remembers what it was asked. */
     MutantRerun rerunSaying(Verdict... verdicts) {
         Deque<Verdict> left = new ArrayDeque<>(List.of(verdicts));
-        return mutant -> {
+        return (mutant, progress) -> {
             rerunAsked.add(mutant);
             Verdict verdict = left.removeFirst();
             return mutant.withVerdict(verdict, verdict == Verdict.KILLED ? TriageProject.LIT_AT_DUSK.id() : null, null,
@@ -280,6 +280,22 @@ class TriageTest {
         }
 
         @Test
+        void fixed_saysEachStepOfTheRerunAsItStarts_thenTheVerdict() {
+            MutantRerun telling = (mutant, progress) -> {
+                progress.accept("building the project");
+                progress.accept("running the tests that reach it, with the mutant");
+                return rerunSaying(Verdict.KILLED).rerun(mutant, progress);
+            };
+
+            String out = session("f\nq\n", telling, false);
+
+            assertTrue(out.contains("running " + shortId(0) + " again against the code and tests as they are now …\n"
+                    + "  building the project …\n"
+                    + "  running the tests that reach it, with the mutant …\n"
+                    + shortId(0) + " is killed by BeaconTest > lit at dusk now: marked fixed\n"), out);
+        }
+
+        @Test
         void timedOutOnTheRerun_countsAsDetected() {
             session("f\nq\n", rerunSaying(Verdict.TIMED_OUT), false);
 
@@ -305,7 +321,7 @@ class TriageTest {
 
         @Test
         void rerunThatCannotRun_saysWhyAndRecordsNothing() {
-            MutantRerun unavailable = mutant -> {
+            MutantRerun unavailable = (mutant, progress) -> {
                 throw new UserError("running a mutant again is not available yet");
             };
 
