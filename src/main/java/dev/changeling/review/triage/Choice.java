@@ -80,7 +80,7 @@ enum Choice {
 
     /** Every choice with what it does, for {@code ?}. */
     static String helpScreen(Style style) {
-        StringBuilder screen = new StringBuilder("Answer with one letter, then Enter:\n");
+        StringBuilder screen = new StringBuilder("Answer with one letter, then Enter (e, t and g take words after it):\n");
         for (Choice choice : values()) {
             screen.append("  ").append(style.bold(String.valueOf(choice.key))).append("  ")
                     .append(choice.label).append(": ").append(choice.help).append('\n');
