@@ -9,6 +9,7 @@ import dev.changeling.results.RunResults;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.review.EquivalentEntry;
 import dev.changeling.review.EquivalentRules;
+import dev.changeling.review.IdPrefix;
 import dev.changeling.review.EquivalentsList;
 import dev.changeling.review.Staleness;
 import java.io.Console;
@@ -39,7 +40,7 @@ import picocli.CommandLine.Model.CommandSpec;
         })
 final class EquivalentsCommand implements Callable<Integer> {
 
-    private static final int MIN_ID_LENGTH = EquivalentRules.MIN_ID_LENGTH;
+    private static final int MIN_ID_LENGTH = IdPrefix.MIN_LENGTH;
 
     @Mixin
     OutputOptions output = new OutputOptions();

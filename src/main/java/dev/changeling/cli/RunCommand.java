@@ -17,7 +17,6 @@ import dev.changeling.run.RunInput;
 import dev.changeling.run.RunListener;
 import dev.changeling.run.RunRequest;
 import dev.changeling.terminal.Progress;
-import dev.changeling.terminal.Style;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.math.BigDecimal;

@@ -25,9 +25,10 @@ import picocli.CommandLine.Spec;
 @Command(name = "triage", mixinStandardHelpOptions = true,
         description = {
             "Go through the unresolved survivors of the last run (its results file, target/changeling/results.json by default) one at a time:"
-                    + " see the change and the tests that missed it, then decide. Answer with a letter and Enter"
-                    + " (? lists them): e equivalent, t needs a test, f fixed (runs it again first), s skip, b back,"
-                    + " c more context, q quit.",
+                    + " see the change and the tests that missed it, then decide. Answer with a letter and Enter:"
+                    + " e equivalent, t needs a test, f fixed (runs it again first), u undo (clears the"
+                    + " decision), s skip, b back, g go to (g <id>), l list, c context (more lines), o open (in $VISUAL or"
+                    + " $EDITOR), q quit, ? help (explains each).",
             "Every decision is saved the moment it is made; the next triage starts at the first survivor without one."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
@@ -83,7 +84,7 @@ final class TriageCommand implements Callable<Integer> {
             Runtime.getRuntime().addShutdownHook(onCtrlC);
         }
         try {
-            Triage.run(new Triage.Setup(layout.root(), results, revisit, style), answers, out, rerun(layout, results));
+            Triage.run(new Triage.Setup(layout.root(), results, revisit, style, System.getenv()), answers, out, rerun(layout, results));
         } finally {
             if (onCtrlC != null) {
                 try {

@@ -6,31 +6,27 @@ import dev.changeling.results.RunResults;
 import dev.changeling.results.TestRecord;
 import dev.changeling.results.Verdict;
 import java.util.List;
-import java.util.Locale;
-import java.util.function.Function;
-import java.util.stream.Collectors;
 
 /**
- * What may go on the equivalents list, and which mutant a short id means. Every way of editing the list
- * (the command line, triage) asks here, so the rules are the same everywhere.
+ * What may go on the equivalents list, and which mutant or entry a short id means there (matched by
+ * {@link IdPrefix}). Every way of editing the list (the command line, triage) asks here, so the rules are the
+ * same everywhere.
  */
 public final class EquivalentRules {
 
-    /** The fewest hex digits of a fingerprint that name a mutant. */
-    public static final int MIN_ID_LENGTH = 4;
+    private static final String WHERE_TO_COPY = "copy the id from 'changeling equivalents' or the run's report";
 
     private EquivalentRules() {
     }
 
     /** The run's one mutant whose id starts with {@code id}. */
     public static MutantResult mutantOf(String id, RunResults run) {
-        return single(id, run.mutants().stream().filter(mutant -> mutant.id().startsWith(lower(id))).toList(),
-                MutantResult::id, "in the last run");
+        return IdPrefix.single(id, run.mutants(), MutantResult::id, "in the last run", WHERE_TO_COPY);
     }
 
     /** The list's one entry whose fingerprint starts with {@code id}. */
     public static EquivalentEntry entryOf(String id, EquivalentsList list, String where) {
-        return single(id, list.startingWith(lower(id)), EquivalentEntry::fingerprint, where);
+        return IdPrefix.single(id, list.entries(), EquivalentEntry::fingerprint, where, WHERE_TO_COPY);
     }
 
     /**
@@ -58,24 +54,5 @@ public final class EquivalentRules {
     private static String testName(String testId, RunResults run) {
         List<TestRecord> tests = run.tests() == null ? List.of() : run.tests();
         return tests.stream().filter(test -> test.id().equals(testId)).map(TestRecord::name).findFirst().orElse(testId);
-    }
-
-    private static <T> T single(String id, List<T> matches, Function<T, String> fingerprint, String where) {
-        if (id.length() < MIN_ID_LENGTH || !id.matches("[0-9a-fA-F]+")) {
-            throw new UserError("'" + id + "' is not a mutant id; give at least " + MIN_ID_LENGTH + " of its hex digits");
-        }
-        if (matches.isEmpty()) {
-            throw new UserError("no mutant " + id + " " + where + "; copy the id from 'changeling equivalents' or the run's report");
-        }
-        if (matches.size() > 1) {
-            throw new UserError("id " + id + " fits " + matches.size() + " mutants ("
-                    + matches.stream().map(match -> fingerprint.apply(match).substring(0, 12)).collect(Collectors.joining(", "))
-                    + "); give more digits");
-        }
-        return matches.get(0);
-    }
-
-    private static String lower(String id) {
-        return id.toLowerCase(Locale.ROOT);
     }
 }

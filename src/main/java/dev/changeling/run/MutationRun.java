@@ -93,17 +93,17 @@ public final class MutationRun {
 
     /** The phases in order: discover, generate and narrow, compile, baseline, execute, record. */
     private RunResults run() {
-        PhaseClock clock = new PhaseClock();
-        DiscoveredProject project = clock.time("maven", this::discover);
+        PhaseClock clock = new PhaseClock(listener::starting);
+        DiscoveredProject project = clock.time(PhaseClock.MAVEN, this::discover);
         listener.phase("maven: " + project.build() + " (" + project.junitSetup() + ")");
         checkNotStopped();
 
         Optional<ChangeScope> change = request.change().map(spec -> spec.resolve(project.layout().root()));
-        Selection.Chosen chosen = clock.time("generate", () -> generate(project.layout(), change));
+        Selection.Chosen chosen = clock.time(PhaseClock.GENERATE, () -> generate(project.layout(), change));
         checkNotStopped();
 
         Path work = project.layout().changelingDirectory();
-        BuildResult build = clock.time("compile", () -> compile(project, chosen, work));
+        BuildResult build = clock.time(PhaseClock.COMPILE, () -> compile(project, chosen, work));
         Map<String, SourceFile> files = chosen.generated().files();
         Placements placements = Placements.of(chosen.mutants(), build, files);
         listener.phase("compiled: " + build.pointCount() + " points in one schema in "
@@ -118,7 +118,7 @@ public final class MutationRun {
         try (WorkerPool workers = WorkerPool.open(workerSettings(project, build, work), setup)) {
             pool = workers;
             checkNotStopped();
-            Baseline baseline = clock.time("baseline", () -> workers.baseline(name -> { }));
+            Baseline baseline = clock.time(PhaseClock.BASELINE, () -> workers.baseline(name -> { }));
             TestJvm.noteUnusedSkipTags(request, baseline, listener);
             GreenBaseline.require(baseline, setup, project.layout().root());
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
@@ -130,7 +130,7 @@ public final class MutationRun {
             results.values().forEach(listener::finished);
             listener.running(plan.jobs().size());
             mutantsStarted = true;
-            List<JobResult> finished = clock.time("execute", () -> workers.run(plan.jobs(), job -> {
+            List<JobResult> finished = clock.time(PhaseClock.EXECUTE, () -> workers.run(plan.jobs(), job -> {
                 MutantResult result = plan.resultOf(job, files);
                 results.put(job.key(), result);
                 listener.finished(result);

@@ -2,15 +2,31 @@ package dev.changeling.run;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.function.Consumer;
 import java.util.function.Supplier;
 
-/** The time of each phase of a run, in the order they ran, and the whole run's as {@code total}. */
+/**
+ * The time of each phase of a run, in the order they ran, and the whole run's as {@code total}; says each
+ * phase's name as it starts.
+ */
 final class PhaseClock {
+
+    static final String MAVEN = "maven";
+    static final String GENERATE = "generate";
+    static final String COMPILE = "compile";
+    static final String BASELINE = "baseline";
+    static final String EXECUTE = "execute";
 
     private final long started = System.nanoTime();
     private final Map<String, Double> millis = new LinkedHashMap<>();
+    private final Consumer<String> onStart;
+
+    PhaseClock(Consumer<String> onStart) {
+        this.onStart = onStart;
+    }
 
     <T> T time(String phase, Supplier<T> work) {
+        onStart.accept(phase);
         long at = System.nanoTime();
         try {
             return work.get();

@@ -18,6 +18,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
@@ -132,6 +134,18 @@ class TriageCommandTest {
             assertEquals(ExitCode.USER_ERROR, outcome.exitCode());
             assertTrue(outcome.err().contains("no results yet; run 'changeling run' in the project first"), outcome.err());
         }
+    }
+
+    @Test
+    void helpNamesEveryKeyTheDocsList() throws IOException {
+        Pattern row = Pattern.compile("^\\| `(.)` \\| ([^|]+) \\|");
+        List<String> keys = Files.readString(Path.of("docs/triage.md")).lines().map(row::matcher).filter(Matcher::find)
+                .map(found -> found.group(1) + " " + found.group(2)).toList();
+
+        String help = inProcess("triage", "--help").out().replaceAll("\\s+", " ");
+
+        assertEquals(12, keys.size(), keys.toString());
+        assertEquals(List.of(), keys.stream().filter(key -> !help.contains(key)).toList(), help);
     }
 
     @Test

@@ -45,6 +45,11 @@ class TriageTerminalTest {
 
     /** A script that runs triage in the pane, then shows its exit code and waits, so the pane stays readable. */
     Path triageScript(String name) throws IOException {
+        return triageScript(name, "");
+    }
+
+    /** The same, with lines of shell (such as exports) run before triage starts. */
+    Path triageScript(String name, String before) throws IOException {
         List<String> command = RealBinary.command("triage", root.toString());
         for (String part : command) {
             if (part.contains("'")) {
@@ -53,7 +58,7 @@ class TriageTerminalTest {
         }
         Path script = scratch.resolve(name + ".sh");
         // A trap with a command (not an ignored signal) leaves Ctrl-C at its default in the JVM, and keeps the shell going after.
-        Files.writeString(script, "trap 'true' INT\n"
+        Files.writeString(script, "trap 'true' INT\n" + before
                 + command.stream().map(part -> "'" + part + "'").collect(Collectors.joining(" ")) + "\n"
                 + "echo \"[exit $?]\"\n"
                 + "read unused\n");
@@ -85,6 +90,33 @@ class TriageTerminalTest {
         assertTrue(Files.readString(EquivalentsList.in(root)).contains(project.walked(0).id() + " | " + TriageProject.BEACON));
         assertEquals(TriageMarks.Kind.NEEDS_TEST, TriageMarks.open(root).get(project.walked(1).id()).orElseThrow().kind());
         assertEquals(1, TriageMarks.open(root).all().size());
+    }
+
+    @Test
+    void open_runsTheEditorOnTheTerminal_andTriageGoesOnAfterItExits() throws IOException {
+        // A stand-in editor: records its arguments, then reads a line from the terminal, as an editor would.
+        Path editor = scratch.resolve("editor.sh");
+        Files.writeString(editor, "#!/bin/sh\n"
+                + "printf '%s\\n' \"$@\" > '" + scratch.resolve("editor.arguments") + "'\n"
+                + "printf 'stand-in editor: type a line\\n'\n"
+                + "read typed\n"
+                + "printf '%s\\n' \"$typed\" > '" + scratch.resolve("editor.typed") + "'\n");
+        assertTrue(editor.toFile().setExecutable(true));
+        tmux.start("editing", triageScript("editing", "VISUAL='" + editor + "'; export VISUAL\n"));
+
+        tmux.awaitText("editing", prompt(1));
+        tmux.typeLine("editing", "o");
+        tmux.awaitText("editing", "stand-in editor: type a line");
+        tmux.typeLine("editing", "written in the editor");
+        tmux.typeLine("editing", "t");
+        tmux.awaitText("editing", prompt(2));
+        tmux.typeLine("editing", "q");
+        tmux.awaitText("editing", "[exit 0]");
+
+        assertEquals(List.of("+7", root.resolve(TriageProject.BEACON).toAbsolutePath().toString()),
+                Files.readAllLines(scratch.resolve("editor.arguments")));
+        assertEquals(List.of("written in the editor"), Files.readAllLines(scratch.resolve("editor.typed")));
+        assertEquals(TriageMarks.Kind.NEEDS_TEST, TriageMarks.open(root).get(project.walked(0).id()).orElseThrow().kind());
     }
 
     @Test

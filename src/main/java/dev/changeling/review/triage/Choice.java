@@ -1,5 +1,6 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.review.IdPrefix;
 import dev.changeling.terminal.Style;
 import java.util.Arrays;
 import java.util.Locale;
@@ -15,13 +16,26 @@ enum Choice {
             "A test should notice it; one is still to be written. An optional note may follow: t <note>."
                     + " Kept on this machine in .changeling/local/triage.json."),
     FIXED('f', "fixed",
-            "Runs this mutant again now, against the code and tests as they are. Recorded as fixed only when a test"
-                    + " now detects it; if it still survives, nothing is recorded."),
-    SKIP('s', "skip", "Leave it without a decision for now and go on; the next triage starts at it again."),
+            "Runs this mutant again now, against the code and tests as they are, saying each step as it starts."
+                    + " Recorded as fixed only when a test now detects it; if it still survives, nothing is recorded."),
+    UNDO('u', "undo",
+            "Clears the decision recorded for this survivor: its entry in the equivalents list, or its local mark;"
+                    + " saved at once. Nothing else recorded changes."),
+    SKIP('s', "skip", "Leave it without a decision for now and go on; after the last survivor, round again from the first"
+            + " still without one (says so and waits when there is none). The next triage starts at it again."),
     BACK('b', "back", "Go back to the previous survivor (its decision so far is shown; a new one replaces it)."),
+    GO_TO('g', "go to",
+            "Goes to the survivor whose id starts with the digits after the letter: g <id>, at least "
+                    + IdPrefix.MIN_LENGTH + " of them (l shows the ids)."),
+    LIST('l', "list",
+            "Lists every unresolved survivor, one line each: id, file:line, operator and the decision if any;"
+                    + " then back to this one."),
     CONTEXT('c', "context",
             "More lines around the change, from the file as it is now (wider each time); says so when the file"
                     + " has changed since the run."),
+    OPEN('o', "open",
+            "Opens the file at the mutated line in $VISUAL, else $EDITOR (started as: editor +LINE FILE) on this"
+                    + " terminal; triage goes on when the editor exits."),
     QUIT('q', "quit", "Stop. Every decision is already saved; the next triage starts at the first survivor without one."),
     HELP('?', "help", "This list.");
 
@@ -66,7 +80,7 @@ enum Choice {
 
     /** Every choice with what it does, for {@code ?}. */
     static String helpScreen(Style style) {
-        StringBuilder screen = new StringBuilder("Answer with one letter, then Enter:\n");
+        StringBuilder screen = new StringBuilder("Answer with one letter, then Enter (e, t and g take words after it):\n");
         for (Choice choice : values()) {
             screen.append("  ").append(style.bold(String.valueOf(choice.key))).append("  ")
                     .append(choice.label).append(": ").append(choice.help).append('\n');

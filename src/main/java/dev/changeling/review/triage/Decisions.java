@@ -33,8 +33,11 @@ final class Decisions {
         if (entry.isPresent()) {
             return Optional.of(new Decision(Decision.Kind.EQUIVALENT, entry.get().reason()));
         }
-        return marks.get(mutant.id()).map(mark -> new Decision(
-                mark.kind() == TriageMarks.Kind.FIXED ? Decision.Kind.FIXED : Decision.Kind.NEEDS_TEST, mark.note()));
+        return marks.get(mutant.id()).map(Decisions::of);
+    }
+
+    private static Decision of(TriageMarks.Mark mark) {
+        return new Decision(mark.kind() == TriageMarks.Kind.FIXED ? Decision.Kind.FIXED : Decision.Kind.NEEDS_TEST, mark.note());
     }
 
     boolean decided(MutantResult mutant) {
@@ -62,6 +65,24 @@ final class Decisions {
 
     void fixed(MutantResult mutant, String note) {
         mark(mutant, TriageMarks.Kind.FIXED, note);
+    }
+
+    /**
+     * Takes away the decision about a mutant wherever it is kept (its entry in the list, or its local mark), each
+     * file read afresh and written at once; every other entry and mark stays. Returns the decision taken away.
+     */
+    Optional<Decision> clear(MutantResult mutant) {
+        EquivalentsList list = EquivalentsList.load(projectRoot);
+        Optional<EquivalentEntry> listed = list.remove(mutant.id());
+        if (listed.isPresent()) {
+            list.save();
+        }
+        equivalents = list;
+        TriageMarks fresh = TriageMarks.open(projectRoot);
+        Optional<TriageMarks.Mark> marked = fresh.get(mutant.id());
+        fresh.clear(mutant.id());
+        marks = fresh;
+        return listed.map(entry -> new Decision(Decision.Kind.EQUIVALENT, entry.reason())).or(() -> marked.map(Decisions::of));
     }
 
     private void mark(MutantResult mutant, TriageMarks.Kind kind, String note) {

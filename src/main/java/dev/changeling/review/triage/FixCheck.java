@@ -29,7 +29,10 @@ final class FixCheck {
         out.flush();
         MutantResult now;
         try {
-            now = rerun.rerun(mutant);
+            now = rerun.rerun(mutant, step -> {
+                out.println(style.dim("  " + step + " …"));
+                out.flush();
+            });
         } catch (UserError e) {
             out.println(style.yellow("cannot run it again: " + e.getMessage() + "; nothing recorded"));
             return false;

@@ -5,6 +5,7 @@ import dev.changeling.UserError;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
 import dev.changeling.review.EquivalentsList;
+import dev.changeling.review.IdPrefix;
 import dev.changeling.review.TriageMarks;
 import dev.changeling.review.Survivors;
 import dev.changeling.terminal.Style;
@@ -17,7 +18,8 @@ import java.util.Set;
 /** One run of the triage loop: show a survivor, read an answer, act on it, until done. */
 final class Session {
 
-    private enum Step { STAY, MOVED, QUIT }
+    /** After an answer: stay at the prompt, show the (current, perhaps other) survivor, or stop. */
+    private enum Step { STAY, SHOW, QUIT }
 
     private final Triage.Setup setup;
     private final Answers answers;
@@ -28,6 +30,7 @@ final class Session {
     private final TestNames names;
     private final SurvivorView view;
     private final FixCheck fixCheck;
+    private final SourceEditor editor;
     private final Set<String> skipped = new HashSet<>();
     private Walk walk;
     private int contextLines;
@@ -42,6 +45,7 @@ final class Session {
         this.names = new TestNames(setup.results().tests());
         this.view = new SurvivorView(out, style, names);
         this.fixCheck = new FixCheck(rerun, decisions, names, out, style);
+        this.editor = new SourceEditor(setup.environment(), setup.projectRoot(), out, style);
     }
 
     Triage.Ending run() {
@@ -87,7 +91,7 @@ final class Session {
             if (step == Step.QUIT) {
                 return;
             }
-            fresh = step == Step.MOVED;
+            fresh = step == Step.SHOW;
         }
         out.println("that was the last survivor");
     }
@@ -116,9 +120,13 @@ final class Session {
                 case EQUIVALENT -> equivalent(mutant, text);
                 case NEEDS_TEST -> needsTest(mutant, text);
                 case FIXED -> fixed(mutant);
+                case UNDO -> undo(mutant);
                 case SKIP -> skip(mutant);
                 case BACK -> back();
+                case GO_TO -> goTo(text);
+                case LIST -> list();
                 case CONTEXT -> context(mutant);
+                case OPEN -> open(mutant);
                 case QUIT -> Step.QUIT;
                 case HELP -> help();
             };
@@ -153,25 +161,85 @@ final class Session {
         return fixCheck.check(mutant) ? forward() : Step.STAY;
     }
 
+    private Step undo(MutantResult mutant) {
+        var cleared = decisions.clear(mutant);
+        if (cleared.isEmpty()) {
+            out.println(mutant.shortId() + " has no decision to clear");
+            return Step.STAY;
+        }
+        Path file = cleared.get().kind() == Decision.Kind.EQUIVALENT
+                ? EquivalentsList.in(setup.projectRoot()) : TriageMarks.in(setup.projectRoot());
+        out.println(style.green("cleared " + mutant.shortId() + ": no longer " + cleared.get().shown() + " in " + shown(file)));
+        out.println(style.dim(counts().line()));
+        return Step.STAY;
+    }
+
     private Step skip(MutantResult mutant) {
         if (!decisions.decided(mutant)) {
             skipped.add(mutant.id());
         }
-        return forward();
+        if (walk.hasNext()) {
+            return forward();
+        }
+        if (walk.wrap()) {
+            out.println(setup.revisit() ? "that was the last survivor; round again from the first"
+                    : "that was the last survivor; round again from the first still without a decision");
+            return Step.SHOW;
+        }
+        out.println("no other survivor is without a decision: decide this one, go back with b, or quit with q");
+        return Step.STAY;
     }
 
     private Step back() {
         if (walk.back()) {
-            return Step.MOVED;
+            return Step.SHOW;
         }
         out.println("this is the first survivor");
         return Step.STAY;
+    }
+
+    private Step goTo(String id) {
+        if (id.isEmpty()) {
+            out.println("g needs the start of a survivor's id, such as g " + walk.current().shortId().substring(0, IdPrefix.MIN_LENGTH)
+                    + "; l lists them");
+            return Step.STAY;
+        }
+        MutantResult target;
+        try {
+            target = IdPrefix.single(id, walk.survivors(), MutantResult::id, "among the unresolved survivors here", "l lists them");
+        } catch (UserError e) {
+            out.println(e.getMessage());
+            return Step.STAY;
+        }
+        walk.goTo(target);
+        return Step.SHOW;
+    }
+
+    private Step list() {
+        out.print(SurvivorList.render(walk.survivors(), walk.position() - 1, this::status, style));
+        out.println("back at survivor " + walk.position() + " of " + walk.size() + " · " + walk.current().shortId());
+        return Step.STAY;
+    }
+
+    private String status(MutantResult mutant) {
+        return decisions.of(mutant).map(decision -> decision.kind().label())
+                .orElse(skipped.contains(mutant.id()) ? "skipped" : "");
     }
 
     private Step context(MutantResult mutant) {
         contextLines += WiderContext.STEP;
         out.print(WiderContext.render(sources.of(mutant.file()), mutant, contextLines, style));
         return Step.STAY;
+    }
+
+    private Step open(MutantResult mutant) {
+        CurrentSources.Current file = sources.of(mutant.file());
+        if (file.state() == CurrentSources.State.GONE) {
+            out.println(style.yellow(mutant.file() + " is gone since the run: there is nothing to open"));
+            return Step.STAY;
+        }
+        int line = WiderContext.lineNow(file, mutant).orElse(mutant.first().line());
+        return editor.open(setup.projectRoot().resolve(mutant.file()), mutant.file(), line) ? Step.SHOW : Step.STAY;
     }
 
     private Step help() {
@@ -181,7 +249,7 @@ final class Session {
 
     private Step forward() {
         walk.forward();
-        return Step.MOVED;
+        return Step.SHOW;
     }
 
     private void farewell() {

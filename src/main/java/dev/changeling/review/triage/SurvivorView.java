@@ -24,10 +24,9 @@ final class SurvivorView {
 
     void show(MutantResult mutant, int position, int size, CurrentSources.State fileState, Optional<Decision> decision) {
         PointRecord first = mutant.first();
-        String operators = mutant.points().stream().map(PointRecord::operator).distinct().collect(Collectors.joining("+"));
         out.println();
         out.println(style.bold("survivor " + position + " of " + size + " · " + mutant.shortId() + " · "
-                + mutant.file() + ":" + first.line()) + " · " + operators + " · " + order(mutant.order()));
+                + mutant.file() + ":" + first.line()) + " · " + operators(mutant) + " · " + order(mutant.order()));
         for (PointRecord point : mutant.points()) {
             out.println("  " + (mutant.order() > 1 ? "line " + point.line() + ": " : "") + point.description()
                     + " in " + point.type() + "#" + point.member());
@@ -51,6 +50,11 @@ final class SurvivorView {
         out.println((reachedBy.size() == 1 ? "1 test reaches" : reachedBy.size() + " tests reach")
                 + " this code and passed with the change — the place to write the missing assertion:");
         reachedBy.forEach(id -> out.println("  " + names.of(id)));
+    }
+
+    /** The mutant's operators, joined by {@code +} for a higher-order mutant made by several. */
+    static String operators(MutantResult mutant) {
+        return mutant.points().stream().map(PointRecord::operator).distinct().collect(Collectors.joining("+"));
     }
 
     static String order(int order) {

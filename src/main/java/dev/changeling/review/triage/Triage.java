@@ -4,6 +4,7 @@ import dev.changeling.results.RunResults;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -20,12 +21,19 @@ public final class Triage {
      * @param results     the run (already limited to the files asked for)
      * @param revisit     stop at every unresolved survivor from the first, including those already marked needs a test
      * @param style       colours, or none
+     * @param environment the variables that name the editor to open a file in ({@code VISUAL}, {@code EDITOR})
      */
-    public record Setup(Path projectRoot, RunResults results, boolean revisit, Style style) {
+    public record Setup(Path projectRoot, RunResults results, boolean revisit, Style style, Map<String, String> environment) {
         public Setup {
             Objects.requireNonNull(projectRoot, "projectRoot");
             Objects.requireNonNull(results, "results");
             Objects.requireNonNull(style, "style");
+            environment = Map.copyOf(Objects.requireNonNull(environment, "environment"));
+        }
+
+        /** Without an editor to open files in. */
+        public Setup(Path projectRoot, RunResults results, boolean revisit, Style style) {
+            this(projectRoot, results, revisit, style, Map.of());
         }
     }
 

@@ -53,10 +53,37 @@ final class Walk {
 
     /** To the next survivor to stop at; false when there is none (the walk is then finished). */
     boolean forward() {
-        do {
-            at++;
-        } while (at < survivors.size() && !revisit && decided.test(survivors.get(at)));
+        at = nextStop(at);
         return !finished();
+    }
+
+    /** Whether a survivor to stop at comes after this one. */
+    boolean hasNext() {
+        return nextStop(at) < survivors.size();
+    }
+
+    /**
+     * From the end round to the first survivor to stop at (the first without a decision, or the very first when
+     * revisiting), other than this one; false, staying here, when there is no other.
+     */
+    boolean wrap() {
+        int first = nextStop(-1);
+        if (first == at) {
+            first = nextStop(first);
+        }
+        if (first >= survivors.size()) {
+            return false;
+        }
+        at = first;
+        return true;
+    }
+
+    private int nextStop(int from) {
+        int next = from + 1;
+        while (next < survivors.size() && !revisit && decided.test(survivors.get(next))) {
+            next++;
+        }
+        return next;
     }
 
     /** To the previous survivor; false when already at the first. */
@@ -66,6 +93,15 @@ final class Walk {
         }
         at = Math.min(at, survivors.size()) - 1;
         return true;
+    }
+
+    /** To the given survivor, one of this walk's. */
+    void goTo(MutantResult survivor) {
+        int index = survivors.indexOf(survivor);
+        if (index < 0) {
+            throw new IllegalArgumentException("not a survivor of this walk: " + survivor.id());
+        }
+        at = index;
     }
 
     /** Where the next triage will start: the first survivor without a decision. */

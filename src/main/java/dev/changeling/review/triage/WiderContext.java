@@ -33,7 +33,7 @@ final class WiderContext {
                     + DiffPrinter.render(mutant.diff(), style);
         }
         LineMap lines = new LineMap(file.text());
-        OptionalInt shift = placed(file.text(), lines, mutant, 0) ? OptionalInt.of(0) : movedBy(file.text(), lines, mutant);
+        OptionalInt shift = shift(file.text(), lines, mutant);
         if (shift.isEmpty()) {
             return style.yellow(file.path() + " changed since the run and the mutated code is no longer at line "
                     + mutant.first().line() + ", so it cannot be shown with more context; the diff as it ran:") + "\n"
@@ -42,6 +42,20 @@ final class WiderContext {
         String mutated = apply(file.text(), lines, mutant, shift.getAsInt());
         String diff = MutantDiff.unified(mutant.file(), file.text(), mutated, contextLines);
         return style.yellow(note(file, mutant, shift.getAsInt(), contextLines)) + "\n" + DiffPrinter.render(diff, style);
+    }
+
+    /** The line the mutated code starts at in the file as it is now; empty when the file is gone or the code not found. */
+    static OptionalInt lineNow(CurrentSources.Current file, MutantResult mutant) {
+        if (file.text() == null) {
+            return OptionalInt.empty();
+        }
+        OptionalInt shift = shift(file.text(), new LineMap(file.text()), mutant);
+        return shift.isPresent() ? OptionalInt.of(mutant.first().line() + shift.getAsInt()) : OptionalInt.empty();
+    }
+
+    /** How many lines the mutated code moved since the run: 0 where it was, empty when it cannot be placed. */
+    private static OptionalInt shift(String text, LineMap lines, MutantResult mutant) {
+        return placed(text, lines, mutant, 0) ? OptionalInt.of(0) : movedBy(text, lines, mutant);
     }
 
     private static String note(CurrentSources.Current file, MutantResult mutant, int shift, int contextLines) {

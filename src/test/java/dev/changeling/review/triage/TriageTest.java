@@ -23,6 +23,7 @@ import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Nested;
@@ -46,7 +47,7 @@ class TriageTest {
     /** A re-run that answers with the verdicts given, one per call, and remembers what it was asked. */
     MutantRerun rerunSaying(Verdict... verdicts) {
         Deque<Verdict> left = new ArrayDeque<>(List.of(verdicts));
-        return mutant -> {
+        return (mutant, progress) -> {
             rerunAsked.add(mutant);
             Verdict verdict = left.removeFirst();
             return mutant.withVerdict(verdict, verdict == Verdict.KILLED ? TriageProject.LIT_AT_DUSK.id() : null, null,
@@ -63,6 +64,15 @@ class TriageTest {
         PrintWriter out = new PrintWriter(text);
         ending = Triage.run(new Triage.Setup(root, project.results, revisit, Style.plain()),
                 Answers.fromLines(new StringReader(script), out), out, rerun);
+        out.flush();
+        return text.toString();
+    }
+
+    String session(String script, Map<String, String> environment) {
+        StringWriter text = new StringWriter();
+        PrintWriter out = new PrintWriter(text);
+        ending = Triage.run(new Triage.Setup(root, project.results, false, Style.plain(), environment),
+                Answers.fromLines(new StringReader(script), out), out, rerunSaying());
         out.flush();
         return text.toString();
     }
@@ -148,7 +158,7 @@ class TriageTest {
         void promptListsEveryChoiceByLetter() {
             String out = session("q\n");
 
-            assertTrue(out.contains("e equivalent  t needs a test  f fixed  s skip  b back  c context  q quit  ? help > q\n"), out);
+            assertTrue(out.contains("e equivalent  t needs a test  f fixed  u undo  s skip  b back  g go to  l list  c context  o open  q quit  ? help > q\n"), out);
         }
 
         @Test
@@ -270,6 +280,22 @@ class TriageTest {
         }
 
         @Test
+        void fixed_saysEachStepOfTheRerunAsItStarts_thenTheVerdict() {
+            MutantRerun telling = (mutant, progress) -> {
+                progress.accept("building the project");
+                progress.accept("running the tests that reach it, with the mutant");
+                return rerunSaying(Verdict.KILLED).rerun(mutant, progress);
+            };
+
+            String out = session("f\nq\n", telling, false);
+
+            assertTrue(out.contains("running " + shortId(0) + " again against the code and tests as they are now …\n"
+                    + "  building the project …\n"
+                    + "  running the tests that reach it, with the mutant …\n"
+                    + shortId(0) + " is killed by BeaconTest > lit at dusk now: marked fixed\n"), out);
+        }
+
+        @Test
         void timedOutOnTheRerun_countsAsDetected() {
             session("f\nq\n", rerunSaying(Verdict.TIMED_OUT), false);
 
@@ -295,7 +321,7 @@ class TriageTest {
 
         @Test
         void rerunThatCannotRun_saysWhyAndRecordsNothing() {
-            MutantRerun unavailable = mutant -> {
+            MutantRerun unavailable = (mutant, progress) -> {
                 throw new UserError("running a mutant again is not available yet");
             };
 
@@ -320,6 +346,219 @@ class TriageTest {
 
             assertTrue(listed(0).isEmpty());
             assertEquals(TriageMarks.Kind.FIXED, mark(0).orElseThrow().kind());
+        }
+    }
+
+    @Nested
+    class Undo {
+
+        @Test
+        void undo_ofAnEquivalent_removesOnlyItsEntry_andKeepsEveryOtherDecision() {
+            session("s\nt kept\nq\n");
+            EquivalentsList list = EquivalentsList.load(root);
+            list.put(EquivalentEntry.of(project.walked(5), "listed by hand"));
+            list.save();
+
+            String out = session("e at dusk both read lit\nb\nb\nu\nq\n");
+
+            assertTrue(out.contains("cleared " + shortId(0) + ": no longer equivalent (at dusk both read lit)"
+                    + " in .changeling/equivalent-mutants.txt\n"), out);
+            assertTrue(listed(0).isEmpty());
+            assertEquals("listed by hand", listed(5).orElseThrow().reason());
+            assertEquals("kept", mark(1).orElseThrow().note());
+            assertEquals(Optional.of(shortId(0)), ending.resumesAt());
+        }
+
+        @Test
+        void undo_ofANeedsTestMark_removesOnlyThatMark() {
+            String out = session("t first\nt second\nb\nu\nq\n");
+
+            assertTrue(out.contains("cleared " + shortId(1) + ": no longer needs a test (second) in .changeling/local/triage.json\n"
+                    + "1 of 6 decided (0 equivalent, 1 needs a test, 0 fixed) · 5 left\n"), out);
+            assertTrue(mark(1).isEmpty());
+            assertEquals("first", mark(0).orElseThrow().note());
+        }
+
+        @Test
+        void undo_ofAFixedMark_removesIt() {
+            session("f\nb\nu\nq\n", rerunSaying(Verdict.KILLED), false);
+
+            assertTrue(mark(0).isEmpty());
+            assertEquals(6, ending.survivors());
+        }
+
+        @Test
+        void undo_withoutADecision_saysSoAndWritesNothing() {
+            String out = session("u\nq\n");
+
+            assertTrue(out.contains(shortId(0) + " has no decision to clear\n"), out);
+            assertFalse(Files.exists(EquivalentsList.in(root)));
+            assertFalse(Files.exists(TriageMarks.in(root)));
+        }
+    }
+
+    @Nested
+    class GoingTo {
+
+        /** Four hex digits that start none of the survivors' ids. */
+        String unusedPrefix() {
+            for (int value = 0; ; value++) {
+                String prefix = String.format("%04x", value);
+                if (project.walked.stream().noneMatch(mutant -> mutant.id().startsWith(prefix))) {
+                    return prefix;
+                }
+            }
+        }
+
+        @Test
+        void goTo_byIdPrefix_showsThatSurvivorAndDecidesThere() {
+            String out = session("g " + id(4).substring(0, 6).toUpperCase() + "\nt\nq\n");
+
+            assertTrue(out.contains("survivor 5 of 6 · " + shortId(4)), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(4).orElseThrow().kind());
+            assertTrue(mark(0).isEmpty());
+        }
+
+        @Test
+        void goTo_ambiguousPrefix_saysWhichFitAndStays() {
+            List<MutantResult> twins = new ArrayList<>();
+            for (MutantResult mutant : project.results.mutants()) {
+                boolean twin = mutant.id().equals(id(0)) || mutant.id().equals(id(1));
+                twins.add(twin ? withId(mutant, "3fa2" + mutant.id().substring(4)) : mutant);
+            }
+            RunResults whole = project.results;
+            project = new TriageProject(root, new RunResults(whole.format(), true, whole.settings(), whole.tests(),
+                    whole.timings(), twins, whole.problems(), whole.sourceHashes()));
+
+            String out = session("g 3fa2\nt\nq\n");
+
+            assertTrue(out.contains("id 3fa2 fits 2 mutants (3fa2"), out);
+            assertTrue(out.contains("); give more digits\ne equivalent"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void goTo_unknownPrefix_saysSoInOneLineAndStays() {
+            String prefix = unusedPrefix();
+
+            String out = session("g " + prefix + "\nt\nq\n");
+
+            assertTrue(out.contains("> g " + prefix + "\nno mutant " + prefix + " among the unresolved survivors here; l lists them\n"
+                    + "e equivalent"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void goTo_notAnIdOrNoId_saysWhatItNeeds() {
+            String out = session("g beacon\ng\nq\n");
+
+            assertTrue(out.contains("'beacon' is not a mutant id; give at least 4 of its hex digits\n"), out);
+            assertTrue(out.contains("g needs the start of a survivor's id, such as g " + id(0).substring(0, 4) + "; l lists them\n"), out);
+        }
+
+        MutantResult withId(MutantResult mutant, String id) {
+            return new MutantResult(id, mutant.file(), mutant.order(), mutant.points(), mutant.verdict(), mutant.killedBy(),
+                    mutant.detail(), mutant.testsRun(), mutant.reachedBy(), mutant.millis(), mutant.diff());
+        }
+    }
+
+    @Nested
+    class Listing {
+
+        @Test
+        void list_showsEveryUnresolvedSurvivorOnALine_thenStaysOnTheCurrent() {
+            String out = session("e at dusk both read lit\nt\ns\nl\nt\nq\n");
+
+            String place7 = TriageProject.BEACON + ":7 ";
+            String place11 = TriageProject.BEACON + ":11";
+            assertTrue(out.contains("6 unresolved survivors (> marks this one):\n"
+                    + "  1  " + shortId(0) + "  " + place7 + "  relational-subset  equivalent\n"
+                    + "  2  " + shortId(1) + "  " + place7 + "  relational-subset  needs a test\n"
+                    + "  3  " + shortId(2) + "  " + place7 + "  relational-subset  skipped\n"
+                    + "> 4  " + shortId(3) + "  " + place11 + "  relational-subset\n"
+                    + "  5  " + shortId(4) + "  " + place11 + "  relational-subset\n"
+                    + "  6  " + shortId(5) + "  " + place11 + "  relational-subset\n"
+                    + "back at survivor 4 of 6 · " + shortId(3) + "\n"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(3).orElseThrow().kind());
+        }
+    }
+
+    @Nested
+    class Opening {
+
+        @TempDir
+        Path tools;
+
+        /** A stand-in for an editor: writes the arguments it was given, one a line, to a file, and exits with a code. */
+        Path fakeEditor(String name, int exitCode) throws IOException {
+            Path script = tools.resolve(name);
+            Files.writeString(script, "#!/bin/sh\nprintf '%s\\n' \"$@\" > '" + arguments(name) + "'\nexit " + exitCode + "\n");
+            assertTrue(script.toFile().setExecutable(true));
+            return script;
+        }
+
+        Path arguments(String editor) {
+            return tools.resolve(editor + ".arguments");
+        }
+
+        List<String> argumentsGiven(String editor) throws IOException {
+            return Files.readAllLines(arguments(editor));
+        }
+
+        String beacon() {
+            return root.resolve(TriageProject.BEACON).toAbsolutePath().toString();
+        }
+
+        @Test
+        void open_startsVisualAtTheMutatedLine_thenShowsTheSurvivorAgain() throws IOException {
+            Path visual = fakeEditor("visual", 0);
+
+            String out = session("o\nt\nq\n", Map.of("VISUAL", visual.toString(), "EDITOR", fakeEditor("editor", 0).toString()));
+
+            assertEquals(List.of("+7", beacon()), argumentsGiven("visual"));
+            assertFalse(Files.exists(arguments("editor")), "$VISUAL wins over $EDITOR");
+            assertTrue(out.contains("opening " + TriageProject.BEACON + ":7 in " + visual + " ($VISUAL); triage goes on when it exits\n"
+                    + "\nsurvivor 1 of 6 · " + shortId(0)), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void open_withoutVisual_startsEditor_keepingTheArgumentsItNames() throws IOException {
+            Path editor = fakeEditor("editor", 0);
+
+            session("s\ns\ns\no\nq\n", Map.of("VISUAL", " ", "EDITOR", editor + " --wait"));
+
+            assertEquals(List.of("--wait", "+11", beacon()), argumentsGiven("editor"));
+        }
+
+        @Test
+        void open_withNeitherVisualNorEditor_saysSoInOneLineAndStays() {
+            String out = session("o\nt\nq\n", Map.of());
+
+            assertTrue(out.contains("> o\nno editor to open " + TriageProject.BEACON + " in: set $VISUAL or $EDITOR"
+                    + " (it is started as: editor +LINE FILE)\ne equivalent"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(0).orElseThrow().kind());
+        }
+
+        @Test
+        void open_afterLinesWereAddedAbove_opensWhereTheCodeIsNow() throws IOException {
+            Files.writeString(root.resolve(TriageProject.BEACON),
+                    TriageProject.BEACON_TEXT.replace("/** The harbour beacon. */", "/**\n * The harbour beacon,\n * lit at dusk.\n */"));
+            Path visual = fakeEditor("visual", 0);
+
+            session("o\nq\n", Map.of("VISUAL", visual.toString()));
+
+            assertEquals(List.of("+10", beacon()), argumentsGiven("visual"));
+        }
+
+        @Test
+        void open_editorThatFailsOrIsMissing_saysSoAndTriageGoesOn() throws IOException {
+            String failed = session("o\nt\nq\n", Map.of("VISUAL", fakeEditor("visual", 3).toString()));
+            String missing = session("o\nt\nq\n", Map.of("VISUAL", tools.resolve("no-such-editor").toString()));
+
+            assertTrue(failed.contains("the editor exited with code 3\n"), failed);
+            assertTrue(missing.contains("cannot start the editor '" + tools.resolve("no-such-editor") + "' ($VISUAL): "), missing);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(1).orElseThrow().kind());
         }
     }
 
@@ -368,6 +607,37 @@ class TriageTest {
             assertTrue(out.contains("every decision is saved; the next triage starts at " + shortId(1) + " "
                     + TriageProject.BEACON + ":7"), out);
             assertEquals(Optional.of(shortId(1)), ending.resumesAt());
+        }
+
+        @Test
+        void skipOnTheLast_wrapsToTheFirstStillWithoutADecision() {
+            String out = session("s\nt\nt\nt\nt\ns\nq\n");
+
+            assertTrue(out.contains("that was the last survivor; round again from the first still without a decision\n"), out);
+            int lastShown = out.lastIndexOf("survivor ");
+            assertTrue(out.startsWith("survivor 1 of 6 · " + shortId(0), lastShown), out.substring(lastShown));
+            assertTrue(mark(5).isEmpty());
+            assertEquals(Optional.of(shortId(0)), ending.resumesAt());
+        }
+
+        @Test
+        void skipOnTheLast_withNoOtherWithoutADecision_saysSoAndWaitsForAnotherKey() {
+            String out = session("t\nt\nt\nt\nt\ns\nt\n");
+
+            assertTrue(out.contains("no other survivor is without a decision: decide this one, go back with b, or quit with q\n"), out);
+            assertEquals(TriageMarks.Kind.NEEDS_TEST, mark(5).orElseThrow().kind());
+            assertEquals(6, ending.decided());
+        }
+
+        @Test
+        void skipOnTheLast_whenRevisiting_wrapsToTheVeryFirst() {
+            session("t\nt\nt\nt\nt\nt\n");
+
+            String out = session("s\ns\ns\ns\ns\ns\nq\n", rerunSaying(), true);
+
+            int wrapped = out.indexOf("that was the last survivor; round again from the first\n");
+            assertTrue(wrapped > out.indexOf("survivor 6 of 6"), out);
+            assertTrue(out.indexOf("survivor 1 of 6 · " + shortId(0), wrapped) > wrapped, out);
         }
 
         @Test

@@ -165,7 +165,7 @@ class WiderContextTest {
             StringWriter text = new StringWriter();
             PrintWriter out = new PrintWriter(text);
             Triage.run(new Triage.Setup(root, project.results, false, Style.plain()),
-                    Answers.fromLines(new StringReader(script), out), out, mutant -> mutant);
+                    Answers.fromLines(new StringReader(script), out), out, (mutant, progress) -> mutant);
             out.flush();
             return text.toString();
         }
