@@ -15,7 +15,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.concurrent.TimeUnit;
 
 /**
  * Compiles mutants: every point that can be switched at run time goes into one schema compiled by
@@ -37,6 +36,14 @@ public final class MutantBuild {
 
     /** Builds the schema and the mutants that cannot join it; replaces earlier output in the output folder. */
     public static BuildResult compile(BuildRequest request) {
+        return compileSchema(request).compileAlone();
+    }
+
+    /**
+     * Builds the schema only, so that the unmutated suite can run (and be found red) before the mutants that
+     * cannot join the schema are compiled one by one ({@link SchemaStage#compileAlone()}).
+     */
+    public static SchemaStage compileSchema(BuildRequest request) {
         Path output = request.outputDirectory().toAbsolutePath().normalize();
         for (String folder : List.of(SCHEMA, SCHEMA_SOURCES, ALONE, SCRATCH)) {
             Outputs.deleteTree(output.resolve(folder));
@@ -59,9 +66,7 @@ public final class MutantBuild {
                     output.resolve(SCHEMA_SOURCES), output.resolve(SCRATCH)).compile(candidates);
             Map<Point, Integer> ids = new HashMap<>();
             schema.points().forEach(point -> ids.put(point, ids.size()));
-
-            long fallbackStarted = System.nanoTime();
-            List<AloneCompiler.Job> jobs = new ArrayList<>();
+            List<AloneCompiler.Job> pending = new ArrayList<>();
             for (Mutant mutant : runnable.values()) {
                 String reason = reasonToLeave(mutant, ids, schema.evicted());
                 String stillborn = reason == null ? null : certainlyStillborn(mutant, schema.stillborn());
@@ -71,18 +76,11 @@ public final class MutantBuild {
                 } else if (stillborn != null) {
                     placements.put(mutant.fingerprint(), Placement.stillborn(stillborn));
                 } else {
-                    jobs.add(new AloneCompiler.Job(mutant, request.files().get(mutant.file()),
+                    pending.add(new AloneCompiler.Job(mutant, request.files().get(mutant.file()),
                             output.resolve(ALONE).resolve(mutant.fingerprint()), reason));
                 }
             }
-            AloneCompiler alone = new AloneCompiler(javac);
-            placements.putAll(alone.compile(jobs));
-            long fallbackNanos = System.nanoTime() - fallbackStarted;
-            Outputs.deleteTree(output.resolve(SCRATCH));
-            BuildTimings timings = new BuildTimings(millis(schema.renderNanos()), millis(schema.compileNanos()),
-                    millis(fallbackNanos), schema.rounds(), jobs.size(), alone.tasks());
-            return new BuildResult(schema.points(), placements, output.resolve(SCHEMA),
-                    new ArrayList<>(schema.classNames()), timings);
+            return new SchemaStage(request.classpath(), output, schema, placements, pending);
         }
     }
 
@@ -115,9 +113,5 @@ public final class MutantBuild {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot create " + folder, e);
         }
-    }
-
-    private static long millis(long nanos) {
-        return TimeUnit.NANOSECONDS.toMillis(nanos);
     }
 }

@@ -14,6 +14,7 @@ import java.util.Objects;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -38,6 +39,15 @@ public final class ResultsFile {
             index.putIfAbsent(tests.get(i).id(), i);
         }
         AtomicFiles.write(file, out -> JSON.writer().withAttribute(TestRefs.SUITE, index).writeValue(out, results));
+    }
+
+    /** When the results were written (the file's time), or the epoch when there are none. */
+    public static Instant writtenAt(Path file) {
+        try {
+            return Files.getLastModifiedTime(file).toInstant();
+        } catch (IOException missing) {
+            return Instant.EPOCH;
+        }
     }
 
     /**

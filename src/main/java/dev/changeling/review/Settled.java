@@ -1,7 +1,10 @@
 package dev.changeling.review;
 
+import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
+import dev.changeling.results.ResultsFile;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
@@ -10,27 +13,31 @@ import java.util.stream.Collectors;
  * What triage has settled in a project: the committed equivalents list and the mutants marked fixed
  * locally. Every view that leaves settled survivors out asks here.
  *
- * @param equivalent fingerprints on the equivalents list
- * @param fixed      fingerprints marked fixed (checked by a re-run when they were marked)
+ * @param equivalent     fingerprints on the equivalents list
+ * @param fixed          the fixed marks, by fingerprint (each checked by a re-run when it was made)
+ * @param resultsWritten when the results in view were written; a fixed mark older than them stands only if they
+ *                       do not find its mutant surviving ({@link TriageMarks.Mark#standsFor})
  */
-public record Settled(Set<String> equivalent, Set<String> fixed) {
+public record Settled(Set<String> equivalent, Map<String, TriageMarks.Mark> fixed, Instant resultsWritten) {
 
     public Settled {
         equivalent = Set.copyOf(equivalent);
-        fixed = Set.copyOf(fixed);
+        fixed = Map.copyOf(fixed);
     }
 
+    /** What is settled in the project, held against its results file as it is now. */
     public static Settled load(Path projectRoot) {
         Set<String> equivalent = EquivalentsList.load(projectRoot).entries().stream()
                 .map(EquivalentEntry::fingerprint).collect(Collectors.toSet());
-        Set<String> fixed = TriageMarks.open(projectRoot).all().entrySet().stream()
+        Map<String, TriageMarks.Mark> fixed = TriageMarks.open(projectRoot).all().entrySet().stream()
                 .filter(entry -> entry.getValue().kind() == TriageMarks.Kind.FIXED)
-                .map(Map.Entry::getKey).collect(Collectors.toSet());
-        return new Settled(equivalent, fixed);
+                .collect(Collectors.toMap(Map.Entry::getKey, Map.Entry::getValue));
+        return new Settled(equivalent, fixed, ResultsFile.writtenAt(ProjectLayout.of(projectRoot).resultsFile()));
     }
 
-    /** Listed as equivalent or marked fixed: no longer a survivor to look at. */
+    /** Listed as equivalent, or marked fixed by a mark that still stands: no longer a survivor to look at. */
     public boolean resolved(MutantResult mutant) {
-        return equivalent.contains(mutant.id()) || fixed.contains(mutant.id());
+        TriageMarks.Mark mark = fixed.get(mutant.id());
+        return equivalent.contains(mutant.id()) || (mark != null && mark.standsFor(mutant, resultsWritten));
     }
 }

@@ -14,6 +14,8 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.Verdict;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
 import java.util.Arrays;
@@ -58,6 +60,21 @@ public final class TriageMarks {
 
     /** One decision: what, when, and an optional note. */
     public record Mark(Kind kind, Instant at, String note) {
+
+        /**
+         * Whether the mark still stands against results written at {@code resultsWritten}. A fixed mark says a
+         * re-run killed the mutant in the code of its day; a run made after it measured the code again, so there
+         * the mark stands only if that run does not find the mutant surviving. Every other mark always stands.
+         */
+        public boolean standsFor(MutantResult mutant, Instant resultsWritten) {
+            return kind != Kind.FIXED || at.isAfter(resultsWritten) || mutant.verdict() != Verdict.SURVIVED;
+        }
+
+        /** Why a fixed mark no longer stands, for the one who made it. */
+        public String lapse() {
+            return "marked fixed " + at.truncatedTo(java.time.temporal.ChronoUnit.MINUTES)
+                    + ", but the run since finds it survives again (the test that killed it may be gone): decide again";
+        }
     }
 
     /** The file's layout: times as ISO-8601 text, so the file reads well and needs no extra Jackson module. */

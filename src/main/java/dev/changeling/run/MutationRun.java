@@ -5,6 +5,7 @@ import dev.changeling.UserError;
 import dev.changeling.compile.BuildRequest;
 import dev.changeling.compile.BuildResult;
 import dev.changeling.compile.MutantBuild;
+import dev.changeling.compile.SchemaStage;
 import dev.changeling.execution.Baseline;
 import dev.changeling.execution.JobResult;
 import dev.changeling.execution.SuiteSetup;
@@ -91,7 +92,10 @@ public final class MutationRun {
         return "in " + files + (files == 1 ? " file" : " files");
     }
 
-    /** The phases in order: discover, generate and narrow, compile, baseline, execute, record. */
+    /**
+     * The phases in order: discover, generate and narrow, compile the schema, baseline, compile the mutants that
+     * cannot join the schema (only once the suite is known to be green), execute, record.
+     */
     private RunResults run() {
         PhaseClock clock = new PhaseClock(listener::starting);
         DiscoveredProject project = clock.time(PhaseClock.MAVEN, this::discover);
@@ -103,19 +107,15 @@ public final class MutationRun {
         checkNotStopped();
 
         Path work = project.layout().changelingDirectory();
-        BuildResult build = clock.time(PhaseClock.COMPILE, () -> compile(project, chosen, work));
-        Map<String, SourceFile> files = chosen.generated().files();
-        Placements placements = Placements.of(chosen.mutants(), build, files);
-        listener.phase("compiled: " + build.pointCount() + " points in one schema in "
-                + build.timings().compileMillis() + " ms; " + build.timings().aloneCompiles() + " mutants compiled alone; "
-                + placements.count(Verdict.STILLBORN) + " stillborn, " + placements.count(Verdict.SKIPPED) + " skipped (run once per JVM)");
+        SchemaStage schema = clock.time(PhaseClock.COMPILE, () -> compileSchema(project, chosen, work));
         checkNotStopped();
 
-        Map<String, MutantResult> results = new ConcurrentHashMap<>(placements.settled());
+        Map<String, SourceFile> files = chosen.generated().files();
+        Map<String, MutantResult> results = new ConcurrentHashMap<>();
         List<TestRecord> tests = List.of();
         boolean complete = false;
-        SuiteSetup setup = TestJvm.setup(project.suite(), request, build.pointCount(), project.productionClasses(), listener);
-        try (WorkerPool workers = WorkerPool.open(workerSettings(project, build, work), setup)) {
+        SuiteSetup setup = TestJvm.setup(project.suite(), request, schema.pointCount(), project.productionClasses(), listener);
+        try (WorkerPool workers = WorkerPool.open(workerSettings(project, schema.schemaClasses(), work), setup)) {
             pool = workers;
             checkNotStopped();
             Baseline baseline = clock.time(PhaseClock.BASELINE, () -> workers.baseline(name -> { }));
@@ -124,6 +124,14 @@ public final class MutationRun {
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
             listener.phase(String.format(Locale.ROOT, "baseline: %d tests green in %.1f s%s",
                     baseline.tests().size(), baseline.nanos() / 1e9, GreenBaseline.freshWorkers(baseline)));
+
+            BuildResult build = clock.time(PhaseClock.COMPILE_ALONE, schema::compileAlone);
+            Placements placements = Placements.of(chosen.mutants(), build, files);
+            listener.phase("compiled: " + build.pointCount() + " points in one schema in "
+                    + build.timings().compileMillis() + " ms; " + build.timings().aloneCompiles() + " mutants compiled alone; "
+                    + placements.count(Verdict.STILLBORN) + " stillborn, " + placements.count(Verdict.SKIPPED) + " skipped (run once per JVM)");
+            results.putAll(placements.settled());
+            checkNotStopped();
 
             JobPlan plan = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files);
             results.putAll(plan.unreached());
@@ -178,16 +186,16 @@ public final class MutationRun {
         return chosen;
     }
 
-    private static BuildResult compile(DiscoveredProject project, Selection.Chosen chosen, Path work) {
+    private static SchemaStage compileSchema(DiscoveredProject project, Selection.Chosen chosen, Path work) {
         List<Path> compileClasspath = new ArrayList<>(project.compileClasspath());
         compileClasspath.add(WorkerClasses.extract(work.resolve("worker-classes")));
-        return MutantBuild.compile(new BuildRequest(chosen.mutants(), chosen.generated().files(), compileClasspath,
+        return MutantBuild.compileSchema(new BuildRequest(chosen.mutants(), chosen.generated().files(), compileClasspath,
                 work.resolve("build")));
     }
 
-    private WorkerSettings workerSettings(DiscoveredProject project, BuildResult build, Path work) {
+    private WorkerSettings workerSettings(DiscoveredProject project, Path schemaClasses, Path work) {
         List<Path> classpath = new ArrayList<>();
-        classpath.add(build.schemaClasses());
+        classpath.add(schemaClasses);
         classpath.addAll(project.testClasspath());
         return TestJvm.settings(project.suite(), request, classpath, work.resolve("workers"), project.layout());
     }

@@ -15,6 +15,7 @@ final class PhaseClock {
     static final String GENERATE = "generate";
     static final String COMPILE = "compile";
     static final String BASELINE = "baseline";
+    static final String COMPILE_ALONE = "compile alone";
     static final String EXECUTE = "execute";
 
     private final long started = System.nanoTime();

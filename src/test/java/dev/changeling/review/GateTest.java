@@ -27,7 +27,7 @@ class GateTest {
         RunResults run = ResultsForTests.run(mutants, false, 0);
         RunResults withUnread = new RunResults(run.format(), true, run.settings(), run.tests(), run.timings(), run.mutants(),
                 unread, run.sourceHashes());
-        return Standing.of(withUnread, new Settled(Set.of(), Set.of()));
+        return Standing.of(withUnread, new Settled(Set.of(), java.util.Map.of(), java.time.Instant.EPOCH));
     }
 
     @Test

@@ -81,6 +81,12 @@ class RunCommandLineTest {
         }
 
         @Test
+        void compilesNoMutantAlone_beforeTheSuiteIsKnownToBeGreen() {
+            assertTrue(run.err().lines().noneMatch(line -> line.strip().startsWith("compiled:")), run::transcript);
+            assertTrue(run.err().lines().anyMatch(line -> line.strip().startsWith("tests:")), run::transcript);
+        }
+
+        @Test
         void runsGreen_withTheFailingClassLeftOutAsTheMessageSays() {
             ToolRun skipping = ToolRun.onCopyOfProject(run.project(), "--skip-tests", "*BrokenKilnTest", "--sample", "2");
             assertEquals(ExitCode.OK, skipping.exitCode(), skipping::transcript);

@@ -1,10 +1,13 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
+import dev.changeling.results.ResultsFile;
 import dev.changeling.review.EquivalentEntry;
 import dev.changeling.review.EquivalentsList;
 import dev.changeling.review.TriageMarks;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.Optional;
 
 /**
@@ -15,17 +18,21 @@ import java.util.Optional;
 final class Decisions {
 
     private final Path projectRoot;
+    private final Instant resultsWritten;
     private EquivalentsList equivalents;
     private TriageMarks marks;
 
-    private Decisions(Path projectRoot, EquivalentsList equivalents, TriageMarks marks) {
+    private Decisions(Path projectRoot, Instant resultsWritten, EquivalentsList equivalents, TriageMarks marks) {
         this.projectRoot = projectRoot;
+        this.resultsWritten = resultsWritten;
         this.equivalents = equivalents;
         this.marks = marks;
     }
 
+    /** The decisions, held against the project's results file as it is now (a fixed mark a later run contradicts lapses). */
     static Decisions load(Path projectRoot) {
-        return new Decisions(projectRoot, EquivalentsList.load(projectRoot), TriageMarks.open(projectRoot));
+        return new Decisions(projectRoot, ResultsFile.writtenAt(ProjectLayout.of(projectRoot).resultsFile()),
+                EquivalentsList.load(projectRoot), TriageMarks.open(projectRoot));
     }
 
     Optional<Decision> of(MutantResult mutant) {
@@ -33,7 +40,12 @@ final class Decisions {
         if (entry.isPresent()) {
             return Optional.of(new Decision(Decision.Kind.EQUIVALENT, entry.get().reason()));
         }
-        return marks.get(mutant.id()).map(Decisions::of);
+        return marks.get(mutant.id()).filter(mark -> mark.standsFor(mutant, resultsWritten)).map(Decisions::of);
+    }
+
+    /** Why a fixed mark of this survivor no longer stands, if it has lapsed. */
+    Optional<String> lapse(MutantResult mutant) {
+        return marks.get(mutant.id()).filter(mark -> !mark.standsFor(mutant, resultsWritten)).map(TriageMarks.Mark::lapse);
     }
 
     private static Decision of(TriageMarks.Mark mark) {

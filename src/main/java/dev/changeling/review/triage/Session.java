@@ -99,6 +99,7 @@ final class Session {
     private void show(MutantResult mutant) {
         contextLines = 0;
         view.show(mutant, walk.position(), walk.size(), sources.of(mutant.file()).state(), decisions.of(mutant));
+        decisions.lapse(mutant).ifPresent(lapse -> out.println(style.yellow(lapse)));
         out.println(style.dim(counts().line()));
     }
 
