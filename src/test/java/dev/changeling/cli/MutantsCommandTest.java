@@ -99,4 +99,26 @@ class MutantsCommandTest {
         assertTrue(listed.err().startsWith("changeling: unknown operator 'no-such-thing'; known operators: relational-subset"), listed.err());
         assertEquals(1, listed.err().strip().lines().count(), listed.err());
     }
+
+    @Test
+    void uncommitted_previewsTheMutantsOfTheChangedLinesOnly_asAScopedRunWouldMakeThem() throws IOException {
+        Path sample = SampleCopy.of("greenhouse", temp);
+        Git.initCommitted(sample);
+        Path tariff = sample.resolve("src/main/java/dev/changeling/samples/greenhouse/WaterTariff.java");
+        Files.writeString(tariff, Files.readString(tariff).replace("if (hour >= 17 && hour < 21) {", "if (hour >= 18 && hour < 21) {"));
+
+        Outcome all = execute("mutants", sample.toString(), "--plain", "--operators", "relational-subset");
+        Outcome changed = execute("mutants", sample.toString(), "--plain", "--operators", "relational-subset", "--uncommitted");
+
+        assertEquals(ExitCode.OK, changed.code(), changed.err());
+        assertTrue(changed.out().contains(" mutants (uncommitted changes)"), changed.out());
+        assertTrue(changed.out().contains("WaterTariff.java"), changed.out());
+        assertFalse(changed.out().contains("Zone.java"), changed.out());
+        assertTrue(count(changed.out()) < count(all.out()), all.out() + "\n---\n" + changed.out());
+    }
+
+    private static int count(String listing) {
+        return listing.lines().filter(line -> line.matches("\\d+ mutants.*"))
+                .mapToInt(line -> Integer.parseInt(line.substring(0, line.indexOf(' ')))).findFirst().orElse(-1);
+    }
 }
