@@ -1,2 +1,2 @@
-/** Changeling: mutation analysis for code review. The packages below split it by feature. */
+/** Changeling: mutation analysis for code review. The packages follow the pipeline; DEVELOPERS.md draws it. */
 package dev.changeling;

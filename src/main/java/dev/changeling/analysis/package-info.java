@@ -1,2 +1,2 @@
-/** What the results mean: mutation score and its interval, kill matrix, test redundancy, higher-order coupling. */
+/** What the results mean: mutation score per file, operator and order, with its Wilson interval when sampled. */
 package dev.changeling.analysis;

@@ -1,2 +1,2 @@
-/** Runs inside the test JVM. Uses only the JDK and the JUnit Platform API, never the rest of the tool. */
+/** Runs inside the test JVM. Uses only the JDK, the JUnit Platform API and the probe, never the rest of the tool. */
 package dev.changeling.worker;
