@@ -62,18 +62,6 @@ public final class Rerun {
                     steps.accept(words);
                 }
             }
-
-            @Override
-            public void phase(String line) {
-            }
-
-            @Override
-            public void running(int mutants) {
-            }
-
-            @Override
-            public void finished(MutantResult result) {
-            }
         };
     }
 }

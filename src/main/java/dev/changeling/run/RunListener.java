@@ -13,25 +13,18 @@ public interface RunListener {
     }
 
     /** A phase finished; {@code line} says what it found, e.g. "baseline: 38 tests green in 0.4 s". */
-    void phase(String line);
+    default void phase(String line) {
+    }
 
     /** Mutants are about to run. */
-    void running(int mutants);
+    default void running(int mutants) {
+    }
 
     /** One mutant has its verdict. */
-    void finished(MutantResult result);
+    default void finished(MutantResult result) {
+    }
 
+    /** Says nothing. */
     RunListener SILENT = new RunListener() {
-        @Override
-        public void phase(String line) {
-        }
-
-        @Override
-        public void running(int mutants) {
-        }
-
-        @Override
-        public void finished(MutantResult result) {
-        }
     };
 }

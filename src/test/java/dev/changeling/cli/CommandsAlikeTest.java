@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.changeling.ExitCode;
 import dev.changeling.project.ProjectLayout;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -22,22 +20,12 @@ class CommandsAlikeTest {
     @TempDir
     Path temp;
 
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome execute(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.execute(new PrintWriter(out, true), new PrintWriter(err, true), args);
-        return new Outcome(code, out.toString(), err.toString());
-    }
-
     @ParameterizedTest
     @ValueSource(strings = {"run", "mutants", "triage", "export", "equivalents", "equivalents show", "equivalents stale",
         "equivalents prune", "equivalents add", "equivalents drop", "operators"})
     void everyCommandListsItsExitCodesAndTakesTheOutputOptions(String command) {
         List<String> words = List.of(command.split(" "));
-        Outcome help = execute(concat(words, "--help"));
+        CommandOutcome help = CommandOutcome.of(concat(words, "--help"));
         assertEquals(ExitCode.OK, help.code(), help.err());
         assertTrue(help.out().contains("Exit codes:"), help.out());
         assertTrue(help.out().matches("(?s).*\n  70 +A fault inside the tool.*"), help.out());
@@ -46,14 +34,14 @@ class CommandsAlikeTest {
 
     @Test
     void theHelpCommandShowsACommandsHelp() {
-        Outcome help = execute("help", "export");
+        CommandOutcome help = CommandOutcome.of("help", "export");
         assertEquals(ExitCode.OK, help.code(), help.err());
-        assertEquals(execute("export", "--help").out(), help.out());
+        assertEquals(CommandOutcome.of("export", "--help").out(), help.out());
     }
 
     @Test
     void verboseOnAnyCommandGivesTheStackTrace() {
-        Outcome missing = execute("export", temp.resolve("nowhere").toString(), "--verbose");
+        CommandOutcome missing = CommandOutcome.of("export", temp.resolve("nowhere").toString(), "--verbose");
         assertEquals(ExitCode.USER_ERROR, missing.code());
         assertTrue(missing.err().contains("at dev.changeling."), missing.err());
     }
@@ -91,12 +79,12 @@ class CommandsAlikeTest {
         assertEquals(List.of(project.resolve("checks")), layout.testRoots());
         assertEquals(project.resolve("out/changeling/results.json"), layout.resultsFile());
 
-        Outcome listed = execute("mutants", project.toString(), "--plain");
+        CommandOutcome listed = CommandOutcome.of("mutants", project.toString(), "--plain");
         assertEquals(ExitCode.OK, listed.code(), listed.err());
         assertTrue(listed.out().contains("code/dev/forge/Draught.java"), listed.out());
         assertTrue(!listed.out().contains("Stray"), "the default source folder is not the pom's: " + listed.out());
 
-        Outcome exported = execute("export", project.toString());
+        CommandOutcome exported = CommandOutcome.of("export", project.toString());
         assertEquals(ExitCode.USER_ERROR, exported.code());
         assertTrue(exported.err().contains(project.resolve("out/changeling/results.json").toString()), exported.err());
     }

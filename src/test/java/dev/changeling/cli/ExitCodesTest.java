@@ -10,11 +10,8 @@ import dev.changeling.results.ResultsFile;
 import dev.changeling.results.ResultsForTests;
 import dev.changeling.results.Verdict;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.io.TempDir;
@@ -81,19 +78,16 @@ class ExitCodesTest {
     @ParameterizedTest(name = "{2} → {0}")
     @MethodSource("rows")
     void eachMistakeHasItsCode_andOneLineSayingWhy(int code, String firstLine, List<String> args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
+        CommandOutcome outcome = CommandOutcome.of(args.toArray(String[]::new));
 
-        int exit = Main.execute(new PrintWriter(out, true), new PrintWriter(err, true), args.toArray(String[]::new));
-
-        assertEquals(code, exit, () -> "stdout: " + out + "\nstderr: " + err);
-        List<String> lines = new ArrayList<>(err.toString().lines().toList());
+        assertEquals(code, outcome.code(), outcome::toString);
+        List<String> lines = outcome.err().lines().toList();
         if (code == ExitCode.OK) {
             return;
         }
-        assertTrue(!lines.isEmpty() && lines.get(0).startsWith(firstLine), err::toString);
+        assertTrue(!lines.isEmpty() && lines.get(0).startsWith(firstLine), outcome::toString);
         if (code != ExitCode.USAGE || firstLine.startsWith("changeling:")) {
-            assertEquals(1, lines.stream().filter(line -> line.startsWith("changeling:")).count(), err::toString);
+            assertEquals(1, lines.stream().filter(line -> line.startsWith("changeling:")).count(), outcome::toString);
         }
     }
 }

@@ -8,8 +8,6 @@ import dev.changeling.ExitCode;
 import dev.changeling.support.Git;
 import dev.changeling.support.SampleCopy;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,16 +20,6 @@ class MutantsCommandTest {
 
     @TempDir
     Path temp;
-
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome execute(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = Main.execute(new PrintWriter(out, true), new PrintWriter(err, true), args);
-        return new Outcome(code, out.toString(), err.toString());
-    }
 
     /** The printed diffs: the unified-diff lines that follow each "# mutant" header. */
     private static List<String> diffs(String output) {
@@ -56,7 +44,7 @@ class MutantsCommandTest {
     void everyPrintedDiffOfTheSampleAppliesWithGitOnACleanCheckout() throws IOException {
         Path sample = SampleCopy.of("greenhouse", temp);
         Git git = Git.initCommitted(sample);
-        Outcome listed = execute("mutants", sample.toString(), "--diffs", "--plain");
+        CommandOutcome listed = CommandOutcome.of("mutants", sample.toString(), "--diffs", "--plain");
         assertEquals(ExitCode.OK, listed.code(), listed.err());
         List<String> diffs = diffs(listed.out());
         assertTrue(diffs.size() > 50, "only " + diffs.size() + " diffs in:\n" + listed.out());
@@ -71,7 +59,7 @@ class MutantsCommandTest {
 
     @Test
     void countsPerOperatorAndFileAndTheTotal() {
-        Outcome listed = execute("mutants", SampleCopy.original("greenhouse").toString(), "--plain");
+        CommandOutcome listed = CommandOutcome.of("mutants", SampleCopy.original("greenhouse").toString(), "--plain");
         assertEquals(ExitCode.OK, listed.code(), listed.err());
         assertTrue(listed.out().contains("by operator:\n"), listed.out());
         assertTrue(listed.out().contains("by file:\n"), listed.out());
@@ -86,7 +74,7 @@ class MutantsCommandTest {
         Files.writeString(project.resolve("pom.xml"), "<project/>");
         Files.writeString(project.resolve("src/main/java/p/Good.java"), "package p;\nclass Good { boolean f(int a) { return a < 3; } }\n");
         Files.writeString(project.resolve("src/main/java/p/Bad.java"), "package p;\nclass Bad {\n  void f( {\n}\n");
-        Outcome listed = execute("mutants", project.toString(), "--plain");
+        CommandOutcome listed = CommandOutcome.of("mutants", project.toString(), "--plain");
         assertEquals(ExitCode.OK, listed.code());
         assertTrue(listed.err().contains("skipped src/main/java/p/Bad.java:3: "), listed.err());
         assertTrue(listed.out().contains("in 1 files, 1 files skipped"), listed.out());
@@ -94,7 +82,7 @@ class MutantsCommandTest {
 
     @Test
     void anUnknownOperatorIsOneLineWithTheKnownOnes() {
-        Outcome listed = execute("mutants", SampleCopy.original("greenhouse").toString(), "--operators", "no-such-thing");
+        CommandOutcome listed = CommandOutcome.of("mutants", SampleCopy.original("greenhouse").toString(), "--operators", "no-such-thing");
         assertEquals(ExitCode.USAGE, listed.code());
         assertTrue(listed.err().startsWith("changeling: unknown operator 'no-such-thing'; known operators: relational-subset"), listed.err());
         assertEquals(1, listed.err().strip().lines().count(), listed.err());
@@ -107,8 +95,8 @@ class MutantsCommandTest {
         Path tariff = sample.resolve("src/main/java/dev/changeling/samples/greenhouse/WaterTariff.java");
         Files.writeString(tariff, Files.readString(tariff).replace("if (hour >= 17 && hour < 21) {", "if (hour >= 18 && hour < 21) {"));
 
-        Outcome all = execute("mutants", sample.toString(), "--plain", "--operators", "relational-subset");
-        Outcome changed = execute("mutants", sample.toString(), "--plain", "--operators", "relational-subset", "--uncommitted");
+        CommandOutcome all = CommandOutcome.of("mutants", sample.toString(), "--plain", "--operators", "relational-subset");
+        CommandOutcome changed = CommandOutcome.of("mutants", sample.toString(), "--plain", "--operators", "relational-subset", "--uncommitted");
 
         assertEquals(ExitCode.OK, changed.code(), changed.err());
         assertTrue(changed.out().contains(" mutants (uncommitted changes)"), changed.out());
