@@ -36,8 +36,13 @@ final class MutantOptions {
             description = "Pick as many mutants as give a score within ±E at 95%% (Cochran), e.g. 0.05.")
     Double margin;
 
+    @Option(names = "--mutate-diagnostics",
+            description = "Also mutate code whose only effect is diagnostics: calls on a logger, assert statements, bodies of"
+                    + " toString(). Left alone by default, and counted as not made.")
+    boolean mutateDiagnostics;
+
     /** What was typed; the core checks it and makes the selection ({@link SelectionInput#resolve()}). */
     SelectionInput input() {
-        return new SelectionInput(operators, orders, combineWithin, seed, fileGlobs, sample, margin);
+        return new SelectionInput(operators, orders, combineWithin, seed, fileGlobs, sample, margin, mutateDiagnostics);
     }
 }

@@ -4,6 +4,7 @@ import dev.changeling.ExitCode;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.MutantDiff;
 import dev.changeling.mutant.Selection;
+import dev.changeling.review.export.Summary;
 import dev.changeling.scope.ChangeScope;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.source.ParseProblem;
@@ -58,6 +59,9 @@ final class MutantsCommand extends ProjectCommand {
         }
         printCounts(out, "operator", chosen, mutant -> mutant.first().operator());
         printCounts(out, "file", chosen, Mutant::file);
+        if (!chosen.generated().notMade().isEmpty()) {
+            out.println(Summary.notMade(chosen.generated().notMade()) + "; --mutate-diagnostics makes them");
+        }
         out.println(chosen.mutants().size() + " mutants"
                 + scope.map(changed -> " (" + changed.description() + ")").orElse("")
                 + (chosen.sampled() ? " (a sample of " + chosen.population() + ")" : "")

@@ -12,15 +12,18 @@ import java.util.Map;
 public final class Generation {
 
     /** The mutants of a set of files, the files they were made from, and the files that were skipped. */
+    /**
+     * @param notMade points not made because the code only serves diagnostics, by reason
+     */
     public record Generated(List<Mutant> mutants, Map<String, SourceFile> files, List<ParseProblem> problems,
-                            long lines) {
+                            long lines, Map<String, Integer> notMade) {
     }
 
     private Generation() {
     }
 
     public static Generated generate(List<SourceFile> sources, MutantRequest request) {
-        PointFinder finder = new PointFinder(request.operators());
+        PointFinder finder = new PointFinder(request.operators(), request.mutateDiagnostics());
         List<Point> points = new ArrayList<>();
         Map<String, SourceFile> files = new LinkedHashMap<>();
         List<ParseProblem> problems = new ArrayList<>();
@@ -43,6 +46,6 @@ public final class Generation {
                 mutants.addAll(HigherOrder.combine(points, order, request.scope(), request.seed()));
             }
         }
-        return new Generated(mutants, files, problems, lines);
+        return new Generated(mutants, files, problems, lines, finder.notMade());
     }
 }

@@ -12,13 +12,15 @@ import java.util.function.Predicate;
  * @param scope       where the points of one k-order mutant come from
  * @param seed        the seed of k-order combination
  * @param pointFilter which points are in scope (files, operators, changed lines)
+ * @param mutateDiagnostics whether code whose only effect is diagnostics is mutated too (by default it is not)
  */
 public record MutantRequest(
         List<MutationOperator> operators,
         List<Integer> orders,
         HigherOrder.Scope scope,
         long seed,
-        Predicate<Point> pointFilter) {
+        Predicate<Point> pointFilter,
+        boolean mutateDiagnostics) {
 
     public MutantRequest {
         operators = List.copyOf(operators);
@@ -28,6 +30,12 @@ public record MutantRequest(
                 throw new IllegalArgumentException("an order must be from 1 to " + HigherOrder.MAX_ORDER + ", not " + order);
             }
         }
+    }
+
+    /** A request that leaves diagnostics-only code alone, as runs do by default. */
+    public MutantRequest(List<MutationOperator> operators, List<Integer> orders, HigherOrder.Scope scope, long seed,
+                         Predicate<Point> pointFilter) {
+        this(operators, orders, scope, seed, pointFilter, false);
     }
 
     public static MutantRequest firstOrder(List<MutationOperator> operators) {

@@ -10,17 +10,37 @@ import dev.changeling.operator.Proposals;
 import dev.changeling.source.JavaSources;
 import dev.changeling.source.SourceFile;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
 
 /** Finds every mutation point of a parsed file: each operator visits each node that may be mutated. */
 public final class PointFinder {
 
     private final List<MutationOperator> operators;
+    private final boolean mutateDiagnostics;
+    private final Map<String, Integer> notMade = new TreeMap<>();
 
+    /** Finds every point the operators make, diagnostics-only code included. */
     public PointFinder(List<MutationOperator> operators) {
+        this(operators, true);
+    }
+
+    /**
+     * @param mutateDiagnostics whether to make points in code whose only effect is diagnostics (calls on a logger,
+     *                          {@code assert}, {@code toString()}); those not made are counted ({@link #notMade()})
+     */
+    public PointFinder(List<MutationOperator> operators, boolean mutateDiagnostics) {
         this.operators = List.copyOf(operators);
+        this.mutateDiagnostics = mutateDiagnostics;
+    }
+
+    /** How many points were not made so far, by reason ("logging call", "assert statement", "body of toString()"). */
+    public Map<String, Integer> notMade() {
+        return Collections.unmodifiableMap(new TreeMap<>(notMade));
     }
 
     /**
@@ -42,7 +62,8 @@ public final class PointFinder {
         return toPoints(file, proposals.collected());
     }
 
-    private static List<Point> toPoints(SourceFile file, List<Proposal> proposals) {
+    /** Fingerprints are made over every proposal, so they are the same whether diagnostics are mutated or not. */
+    private List<Point> toPoints(SourceFile file, List<Proposal> proposals) {
         Map<String, Integer> ordinals = new HashMap<>();
         List<Point> points = new ArrayList<>(proposals.size());
         for (Proposal proposal : proposals) {
@@ -53,6 +74,11 @@ public final class PointFinder {
             String replacement = Snippets.normalise(proposal.replacement());
             String key = Fingerprint.tupleKey(file.path(), type, member, proposal.operator(), snippet, replacement);
             int ordinal = ordinals.merge(key, 1, Integer::sum) - 1;
+            Optional<String> diagnostic = mutateDiagnostics ? Optional.empty() : Diagnostics.only(host);
+            if (diagnostic.isPresent()) {
+                notMade.merge(diagnostic.get(), 1, Integer::sum);
+                continue;
+            }
             points.add(new Point(file.path(), type, member, proposal.operator(), kindOf(host),
                     file.spanOf(host), proposal.edit(), proposal.replacement(), snippet, proposal.description(),
                     file.lines().line(proposal.edit().begin()), Eligibility.oncePerJvm(host),

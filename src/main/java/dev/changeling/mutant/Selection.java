@@ -28,7 +28,7 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
     /** The same selection, keeping only the points {@code filter} also keeps (e.g. those on changed lines). */
     public Selection narrowedTo(java.util.function.Predicate<Point> filter) {
         MutantRequest narrowed = new MutantRequest(request.operators(), request.orders(), request.scope(), request.seed(),
-                request.pointFilter().and(filter));
+                request.pointFilter().and(filter), request.mutateDiagnostics());
         return new Selection(narrowed, sampleSize, margin, sampleSeed);
     }
 

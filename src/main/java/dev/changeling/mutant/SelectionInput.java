@@ -22,9 +22,10 @@ import java.util.function.Predicate;
  * @param fileGlobs     project-relative path globs; empty for every file
  * @param sample        a sample size, or null
  * @param margin        a margin for a sample sized by Cochran's formula, or null
+ * @param mutateDiagnostics whether code whose only effect is diagnostics is mutated too
  */
 public record SelectionInput(List<String> operators, List<Integer> orders, String combineWithin, long seed,
-                             List<String> fileGlobs, Integer sample, Double margin) {
+                             List<String> fileGlobs, Integer sample, Double margin, boolean mutateDiagnostics) {
 
     public SelectionInput {
         operators = List.copyOf(operators);
@@ -55,7 +56,7 @@ public record SelectionInput(List<String> operators, List<Integer> orders, Strin
         }
         MutantRequest request;
         try {
-            request = new MutantRequest(chosen, orders, scope, seed, filesFilter());
+            request = new MutantRequest(chosen, orders, scope, seed, filesFilter(), mutateDiagnostics);
         } catch (IllegalArgumentException e) {
             throw usage("--orders: " + e.getMessage());
         }

@@ -1,6 +1,8 @@
 package dev.changeling.results;
 
+import java.util.Collections;
 import java.util.List;
+import java.util.TreeMap;
 import java.util.Map;
 
 /**
@@ -15,6 +17,7 @@ import java.util.Map;
  * @param mutants   every mutant in scope, with its verdict
  * @param problems  files skipped and other warnings, one line each
  * @param sourceHashes SHA-256 of each mutated file's text when the run began, by path
+ * @param notMade   points not made because their code only serves diagnostics, by reason; empty when none
  */
 public record RunResults(
         int format,
@@ -24,9 +27,25 @@ public record RunResults(
         Map<String, Double> timings,
         List<MutantResult> mutants,
         List<String> problems,
-        Map<String, String> sourceHashes) {
+        Map<String, String> sourceHashes,
+        Map<String, Integer> notMade) {
 
     public static final int FORMAT = 2;
+
+    public RunResults {
+        notMade = notMade == null ? Map.of() : Collections.unmodifiableMap(new TreeMap<>(notMade));
+    }
+
+    /** Results with every point made. */
+    public RunResults(int format, boolean complete, RunSettings settings, List<TestRecord> tests, Map<String, Double> timings,
+                      List<MutantResult> mutants, List<String> problems, Map<String, String> sourceHashes) {
+        this(format, complete, settings, tests, timings, mutants, problems, sourceHashes, Map.of());
+    }
+
+    /** How many points were not made because their code only serves diagnostics. */
+    public int notMadeCount() {
+        return notMade.values().stream().mapToInt(Integer::intValue).sum();
+    }
 
     /** Only the mutants in the files and folders named (absolute paths), or all when none are named. */
     public RunResults limitedTo(java.nio.file.Path projectRoot, List<java.nio.file.Path> limits) {
@@ -36,6 +55,6 @@ public record RunResults(
         List<MutantResult> inside = mutants.stream()
                 .filter(mutant -> limits.stream().anyMatch(limit -> projectRoot.resolve(mutant.file()).normalize().startsWith(limit)))
                 .toList();
-        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes);
+        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes, notMade);
     }
 }

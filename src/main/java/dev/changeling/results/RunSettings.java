@@ -25,6 +25,7 @@ import java.util.List;
  * @param mavenExecutable the mvn given, or null for the one found on MAVEN_HOME or PATH
  * @param explicitProject the folders and classpath given by hand, or null when Maven found them
  * @param mutantsPerWorker mutants a worker runs before it is replaced (0 in files written before it was kept)
+ * @param mutateDiagnostics whether code whose only effect is diagnostics was mutated too
  */
 public record RunSettings(
         String project,
@@ -44,7 +45,8 @@ public record RunSettings(
         String workerHeap,
         String mavenExecutable,
         ExplicitProject explicitProject,
-        int mutantsPerWorker) {
+        int mutantsPerWorker,
+        boolean mutateDiagnostics) {
 
     public RunSettings {
         skipTests = skipTests == null ? List.of() : List.copyOf(skipTests);

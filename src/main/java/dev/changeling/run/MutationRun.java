@@ -209,7 +209,7 @@ public final class MutationRun {
                 .toList();
         return new RunResults(RunResults.FORMAT, complete, request.settings(chosen, change.map(ChangeScope::description)),
                 tests, clock.withTotal(), ordered, chosen.generated().problems().stream().map(Object::toString).toList(),
-                hashes(chosen.generated().files(), ordered));
+                hashes(chosen.generated().files(), ordered), chosen.generated().notMade());
     }
 
     private static Map<String, String> hashes(Map<String, SourceFile> files, List<MutantResult> results) {

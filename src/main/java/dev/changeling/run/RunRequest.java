@@ -66,7 +66,7 @@ public record RunRequest(
                 selection.sampleSeed(), chosen.sampled(), chosen.population(), changeDescription.orElse(null),
                 workers, deadlines.factor(), deadlines.constantMillis(), skipTests, skipTags, discovery.mavenArguments(),
                 workerHeap.orElse(null), discovery.mavenExecutable().map(Path::toString).orElse(null),
-                discovery.explicitProject().orElse(null), mutantsPerWorker);
+                discovery.explicitProject().orElse(null), mutantsPerWorker, mutants.mutateDiagnostics());
     }
 
     /**
@@ -79,7 +79,8 @@ public record RunRequest(
         MutantRequest request;
         try {
             request = new MutantRequest(Operators.named(recorded.operators()), List.of(order),
-                    HigherOrder.Scope.valueOf(recorded.scope().toUpperCase(Locale.ROOT)), recorded.seed(), only);
+                    HigherOrder.Scope.valueOf(recorded.scope().toUpperCase(Locale.ROOT)), recorded.seed(), only,
+                    recorded.mutateDiagnostics());
         } catch (IllegalArgumentException e) {
             throw new UserError("cannot run the mutant again: " + e.getMessage());
         }

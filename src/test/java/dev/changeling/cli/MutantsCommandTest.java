@@ -109,4 +109,16 @@ class MutantsCommandTest {
         return listing.lines().filter(line -> line.matches("\\d+ mutants.*"))
                 .mapToInt(line -> Integer.parseInt(line.substring(0, line.indexOf(' ')))).findFirst().orElse(-1);
     }
+
+    @Test
+    void aLoggingCallOfTheSample_isNotMadeByDefault_andSaidSo_andMadeWhenAsked() {
+        String sample = SampleCopy.original("greenhouse").toString();
+        CommandOutcome byDefault = CommandOutcome.of("mutants", sample, "--plain");
+        CommandOutcome asked = CommandOutcome.of("mutants", sample, "--plain", "--mutate-diagnostics");
+
+        assertTrue(byDefault.out().contains("\n1 not made where code only serves diagnostics (1 in logging call);"
+                + " --mutate-diagnostics makes them\n"), byDefault.out());
+        assertFalse(asked.out().contains("not made"), asked.out());
+        assertEquals(count(byDefault.out()) + 1, count(asked.out()));
+    }
 }

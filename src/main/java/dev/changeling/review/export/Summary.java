@@ -9,6 +9,8 @@ import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
 
 /**
  * The one-line summary of a run in plain text: score, interval for a sample, counts. Figures are
@@ -45,10 +47,25 @@ public final class Summary {
         if (!standing.unreadFiles().isEmpty()) {
             line.append(DOT).append(standing.unreadSummary());
         }
+        if (results.notMadeCount() > 0) {
+            line.append(DOT).append(notMade(results.notMade()));
+        }
         if (!results.complete()) {
             line.append(DOT).append("partial run: it was interrupted");
         }
         return line.toString();
+    }
+
+    /** "5 not made where code only serves diagnostics (3 logging calls, 2 assert statements)". */
+    public static String notMade(Map<String, Integer> byReason) {
+        int total = byReason.values().stream().mapToInt(Integer::intValue).sum();
+        return total + " not made where code only serves diagnostics (" + byReason.entrySet().stream()
+                .map(reason -> reason.getValue() + " in " + (reason.getValue() == 1 ? reason.getKey() : plural(reason.getKey())))
+                .collect(Collectors.joining(", ")) + ")";
+    }
+
+    private static String plural(String reason) {
+        return reason.startsWith("body of") ? reason.replace("body of", "bodies of") : reason + "s";
     }
 
     static boolean sampled(RunResults results) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
 import java.util.Map;
+import java.util.logging.Logger;
 
 /**
  * Decides, once per round, which zones get water: it holds every valve shut when frost threatens, waters
@@ -29,6 +30,8 @@ public final class IrrigationController {
             return waterings.stream().anyMatch(watering -> watering.zone().equals(zone));
         }
     }
+
+    private static final Logger DIAGNOSTICS = Logger.getLogger(IrrigationController.class.getName());
 
     private final List<Zone> zones;
     private final WaterTariff tariff;
@@ -76,6 +79,7 @@ public final class IrrigationController {
             waterings.add(new Watering(zone.name(), seconds, cost));
             spent += cost;
         }
+        DIAGNOSTICS.fine("round at " + hour + ":00 spent " + spent + " of " + budgetCents + " cents");
         return new Round(List.copyOf(waterings), spent, false);
     }
 
