@@ -48,6 +48,10 @@ final class ExportCommand extends ProjectCommand {
             description = "Write a review comment in Markdown: the summary line, then each unresolved survivor with its diff.")
     Path markdown;
 
+    @Option(names = "--markdown-limit", paramLabel = "N",
+            description = "List at most N survivors in the Markdown comment, worst first, and count the rest (default: ${DEFAULT-VALUE}; 0 lists all).")
+    int markdownLimit = 40;
+
     @Option(names = "--sarif", paramLabel = "FILE",
             description = "Write the unresolved survivors as a SARIF 2.1.0 log, one result each.")
     Path sarif;
@@ -70,6 +74,9 @@ final class ExportCommand extends ProjectCommand {
     @Override
     public Integer call() {
         Gate gate = new Gate(failOnSurvivors, minScore);
+        if (markdownLimit < 0) {
+            throw new UserError("--markdown-limit takes a number of survivors, or 0 for all, not " + markdownLimit, ExitCode.USAGE);
+        }
         ProjectLayout layout = project.layout();
         Path resultsFile = layout.resultsFile();
         RunResults results = ResultsFile.read(resultsFile).limitedTo(layout.root(), project.limits(layout));
@@ -84,7 +91,7 @@ final class ExportCommand extends ProjectCommand {
         PrintWriter err = err();
         out.println(Summary.line(standing));
         if (markdown != null) {
-            write(markdown, MarkdownReport.render(standing));
+            write(markdown, MarkdownReport.render(standing, markdownLimit));
             out.println("wrote " + markdown);
         }
         if (sarif != null) {

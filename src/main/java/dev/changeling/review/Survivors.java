@@ -15,6 +15,14 @@ public final class Survivors {
             .thenComparingInt(MutantResult::order)
             .thenComparing(MutantResult::id);
 
+    /**
+     * The clearest findings first: a survivor that more tests run and still miss says most plainly that
+     * the code is run but not checked. Ties keep file order.
+     */
+    public static final Comparator<MutantResult> WORST_FIRST = Comparator
+            .comparingInt((MutantResult mutant) -> mutant.reachedBy() == null ? 0 : mutant.reachedBy().size()).reversed()
+            .thenComparing(IN_FILE_ORDER);
+
     private Survivors() {
     }
 

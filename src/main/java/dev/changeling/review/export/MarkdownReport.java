@@ -3,6 +3,7 @@ package dev.changeling.review.export;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.review.Standing;
+import dev.changeling.review.Survivors;
 import java.util.List;
 import java.util.stream.Collectors;
 
@@ -17,7 +18,19 @@ public final class MarkdownReport {
 
     /** The comment for a run as it stands: summary, the files not read, then every survivor to look at. */
     public static String render(Standing standing) {
-        List<MutantResult> survivors = standing.toLookAt();
+        return render(standing, ALL);
+    }
+
+    /** Every survivor, however many. */
+    public static final int ALL = 0;
+
+    /**
+     * The comment, listing at most {@code limit} survivors (all for {@link #ALL}), worst first: those the most tests
+     * run and still miss; a count of the rest ends the list.
+     */
+    public static String render(Standing standing, int limit) {
+        List<MutantResult> survivors = standing.toLookAt().stream().sorted(Survivors.WORST_FIRST).toList();
+        int shown = limit == ALL ? survivors.size() : Math.min(limit, survivors.size());
         StringBuilder out = new StringBuilder();
         out.append("**Changeling:** ")
                 .append(MarkdownText.text(Summary.line(standing)))
@@ -33,14 +46,20 @@ public final class MarkdownReport {
         }
         out.append("#### ").append(survivors.size()).append(survivors.size() == 1 ? " survivor" : " survivors")
                 .append(" to look at\n\n");
-        out.append("The tests still pass with each of these changes; a test that fails for one would show the code is checked.\n");
-        for (MutantResult survivor : survivors) {
+        out.append("The tests still pass with each of these changes; a test that fails for one would show the code is checked."
+                + " Those that the most tests run and still miss come first.\n");
+        for (MutantResult survivor : survivors.subList(0, shown)) {
             out.append('\n').append(heading(survivor)).append("\n\n");
             if (survivor.diff() == null || survivor.diff().isEmpty()) {
                 out.append("(no diff stored for this mutant)\n");
             } else {
                 out.append(MarkdownText.fenced("diff", survivor.diff()));
             }
+        }
+        if (shown < survivors.size()) {
+            int rest = survivors.size() - shown;
+            out.append('\n').append("…and ").append(rest).append(rest == 1 ? " more survivor" : " more survivors")
+                    .append(", fewer tests reaching each; the SARIF log and the patches list them all.\n");
         }
         return out.toString();
     }

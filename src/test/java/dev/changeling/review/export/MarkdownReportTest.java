@@ -275,4 +275,28 @@ class MarkdownReportTest {
         assertTrue(markdown.contains("**1 file could not be read — not in the score:**\n\n- src/main/java/shop/Ledger.java:4: Parse error\n"),
                 markdown);
     }
+
+    /** A survivor in {@code file} that {@code reaching} tests run and miss. */
+    private static MutantResult reachedBy(String id, String file, int reaching) {
+        MutantResult made = result(id, file, "relational-subset", 1, Verdict.SURVIVED);
+        List<String> tests = new ArrayList<>();
+        for (int i = 0; i < reaching; i++) {
+            tests.add("[engine:junit-jupiter]/[class:shop.TillTest]/[method:case" + i + "()]");
+        }
+        return new MutantResult(made.id(), made.file(), made.order(), made.points(), made.verdict(), null, null,
+                tests, tests, 1.0, made.diff());
+    }
+
+    @Test
+    void survivorsThatTheMostTestsRunAndMiss_comeFirst_andTheLimitCountsTheRest() {
+        List<MutantResult> mutants = List.of(reachedBy("aaaa0001", "A.java", 1), reachedBy("bbbb0002", "B.java", 7),
+                reachedBy("cccc0003", "C.java", 3));
+        String markdown = MarkdownReport.render(Standings.of(run(mutants, false, 3), mutant -> false), 2);
+
+        assertTrue(markdown.indexOf("bbbb0002") < markdown.indexOf("cccc0003"), markdown);
+        assertFalse(markdown.contains("aaaa0001"), markdown);
+        assertTrue(markdown.contains("\n…and 1 more survivor, fewer tests reaching each;"), markdown);
+        assertTrue(MarkdownReport.render(Standings.of(run(mutants, false, 3), mutant -> false), MarkdownReport.ALL)
+                .contains("aaaa0001"));
+    }
 }
