@@ -4,6 +4,7 @@ import dev.changeling.ExitCode;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.MutantDiff;
 import dev.changeling.mutant.Selection;
+import dev.changeling.mutant.Suppressions;
 import dev.changeling.review.export.Summary;
 import dev.changeling.scope.ChangeScope;
 import dev.changeling.project.ProjectLayout;
@@ -38,7 +39,7 @@ final class MutantsCommand extends ProjectCommand {
     public Integer call() {
         ProjectLayout layout = project.layout();
         Optional<ChangeScope> scope = change.spec().map(spec -> spec.resolve(layout.root()));
-        Selection selection = mutants.input().resolve();
+        Selection selection = mutants.input().resolve().withSuppressions(Suppressions.load(layout.root()));
         Selection.Chosen chosen = scope.map(changed -> selection.narrowedTo(changed.filter())).orElse(selection)
                 .choose(layout, project.limits(layout));
         PrintWriter out = out();
@@ -60,7 +61,8 @@ final class MutantsCommand extends ProjectCommand {
         printCounts(out, "operator", chosen, mutant -> mutant.first().operator());
         printCounts(out, "file", chosen, Mutant::file);
         if (!chosen.generated().notMade().isEmpty()) {
-            out.println(Summary.notMade(chosen.generated().notMade()) + "; --mutate-diagnostics makes them");
+            out.println(Summary.notMade(chosen.generated().notMade()) + "; --mutate-diagnostics and "
+                    + Suppressions.RELATIVE_PATH + " decide which");
         }
         out.println(chosen.mutants().size() + " mutants"
                 + scope.map(changed -> " (" + changed.description() + ")").orElse("")

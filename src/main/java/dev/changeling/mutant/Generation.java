@@ -7,13 +7,15 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
 
 /** Parses files and makes the mutants a request asks for; files that do not parse are reported and skipped. */
 public final class Generation {
 
     /** The mutants of a set of files, the files they were made from, and the files that were skipped. */
     /**
-     * @param notMade points not made because the code only serves diagnostics, by reason
+     * @param notMade points in scope not made, by reason: code that only serves diagnostics, or a suppression rule
      */
     public record Generated(List<Mutant> mutants, Map<String, SourceFile> files, List<ParseProblem> problems,
                             long lines, Map<String, Integer> notMade) {
@@ -23,10 +25,11 @@ public final class Generation {
     }
 
     public static Generated generate(List<SourceFile> sources, MutantRequest request) {
-        PointFinder finder = new PointFinder(request.operators(), request.mutateDiagnostics());
+        PointFinder finder = new PointFinder(request.operators(), request.mutateDiagnostics(), request.pointFilter());
         List<Point> points = new ArrayList<>();
         Map<String, SourceFile> files = new LinkedHashMap<>();
         List<ParseProblem> problems = new ArrayList<>();
+        Map<String, Integer> notMade = new TreeMap<>();
         long lines = 0;
         for (SourceFile source : sources) {
             lines += source.lines().lineCount();
@@ -36,7 +39,17 @@ public final class Generation {
                 continue;
             }
             files.put(source.path(), source);
-            finder.find(parsed).stream().filter(request.pointFilter()).forEach(points::add);
+            for (Point point : finder.find(parsed)) {
+                if (!request.pointFilter().test(point)) {
+                    continue;
+                }
+                Optional<String> suppressed = request.suppressions().reason(point);
+                if (suppressed.isPresent()) {
+                    notMade.merge(suppressed.get(), 1, Integer::sum);
+                } else {
+                    points.add(point);
+                }
+            }
         }
         List<Mutant> mutants = new ArrayList<>();
         for (int order : request.orders()) {
@@ -46,6 +59,7 @@ public final class Generation {
                 mutants.addAll(HigherOrder.combine(points, order, request.scope(), request.seed()));
             }
         }
-        return new Generated(mutants, files, problems, lines, finder.notMade());
+        finder.notMade().forEach((reason, count) -> notMade.merge(reason, count, Integer::sum));
+        return new Generated(mutants, files, problems, lines, notMade);
     }
 }

@@ -13,6 +13,7 @@ import java.util.function.Predicate;
  * @param seed        the seed of k-order combination
  * @param pointFilter which points are in scope (files, operators, changed lines)
  * @param mutateDiagnostics whether code whose only effect is diagnostics is mutated too (by default it is not)
+ * @param suppressions      the project's rules for points not to make
  */
 public record MutantRequest(
         List<MutationOperator> operators,
@@ -20,7 +21,8 @@ public record MutantRequest(
         HigherOrder.Scope scope,
         long seed,
         Predicate<Point> pointFilter,
-        boolean mutateDiagnostics) {
+        boolean mutateDiagnostics,
+        Suppressions suppressions) {
 
     public MutantRequest {
         operators = List.copyOf(operators);
@@ -35,7 +37,18 @@ public record MutantRequest(
     /** A request that leaves diagnostics-only code alone, as runs do by default. */
     public MutantRequest(List<MutationOperator> operators, List<Integer> orders, HigherOrder.Scope scope, long seed,
                          Predicate<Point> pointFilter) {
-        this(operators, orders, scope, seed, pointFilter, false);
+        this(operators, orders, scope, seed, pointFilter, false, Suppressions.none());
+    }
+
+    /** A request without suppression rules. */
+    public MutantRequest(List<MutationOperator> operators, List<Integer> orders, HigherOrder.Scope scope, long seed,
+                         Predicate<Point> pointFilter, boolean mutateDiagnostics) {
+        this(operators, orders, scope, seed, pointFilter, mutateDiagnostics, Suppressions.none());
+    }
+
+    /** The same request with the project's suppression rules. */
+    public MutantRequest withSuppressions(Suppressions rules) {
+        return new MutantRequest(operators, orders, scope, seed, pointFilter, mutateDiagnostics, rules);
     }
 
     public static MutantRequest firstOrder(List<MutationOperator> operators) {

@@ -16,26 +16,30 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import java.util.function.Predicate;
 
 /** Finds every mutation point of a parsed file: each operator visits each node that may be mutated. */
 public final class PointFinder {
 
     private final List<MutationOperator> operators;
     private final boolean mutateDiagnostics;
+    private final Predicate<Point> inScope;
     private final Map<String, Integer> notMade = new TreeMap<>();
 
     /** Finds every point the operators make, diagnostics-only code included. */
     public PointFinder(List<MutationOperator> operators) {
-        this(operators, true);
+        this(operators, true, point -> true);
     }
 
     /**
      * @param mutateDiagnostics whether to make points in code whose only effect is diagnostics (calls on a logger,
      *                          {@code assert}, {@code toString()}); those not made are counted ({@link #notMade()})
+     * @param inScope           which points count as not made when left out (those the run would otherwise make)
      */
-    public PointFinder(List<MutationOperator> operators, boolean mutateDiagnostics) {
+    public PointFinder(List<MutationOperator> operators, boolean mutateDiagnostics, Predicate<Point> inScope) {
         this.operators = List.copyOf(operators);
         this.mutateDiagnostics = mutateDiagnostics;
+        this.inScope = inScope;
     }
 
     /** How many points were not made so far, by reason ("logging call", "assert statement", "body of toString()"). */
@@ -74,15 +78,16 @@ public final class PointFinder {
             String replacement = Snippets.normalise(proposal.replacement());
             String key = Fingerprint.tupleKey(file.path(), type, member, proposal.operator(), snippet, replacement);
             int ordinal = ordinals.merge(key, 1, Integer::sum) - 1;
-            Optional<String> diagnostic = mutateDiagnostics ? Optional.empty() : Diagnostics.only(host);
-            if (diagnostic.isPresent()) {
-                notMade.merge(diagnostic.get(), 1, Integer::sum);
-                continue;
-            }
-            points.add(new Point(file.path(), type, member, proposal.operator(), kindOf(host),
+            Point point = new Point(file.path(), type, member, proposal.operator(), kindOf(host),
                     file.spanOf(host), proposal.edit(), proposal.replacement(), snippet, proposal.description(),
                     file.lines().line(proposal.edit().begin()), Eligibility.oncePerJvm(host),
-                    Fingerprint.of(file.path(), type, member, proposal.operator(), snippet, replacement, ordinal)));
+                    Fingerprint.of(file.path(), type, member, proposal.operator(), snippet, replacement, ordinal));
+            Optional<String> diagnostic = mutateDiagnostics ? Optional.empty() : Diagnostics.only(host);
+            if (diagnostic.isEmpty()) {
+                points.add(point);
+            } else if (inScope.test(point)) {
+                notMade.merge(diagnostic.get(), 1, Integer::sum);
+            }
         }
         return points;
     }

@@ -25,10 +25,16 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
     public record Chosen(List<Mutant> mutants, int population, boolean sampled, Generation.Generated generated) {
     }
 
+    /** The same selection, leaving out the points the project's suppression rules name. */
+    public Selection withSuppressions(Suppressions rules) {
+        return new Selection(request.withSuppressions(rules), sampleSize, margin, sampleSeed);
+    }
+
     /** The same selection, keeping only the points {@code filter} also keeps (e.g. those on changed lines). */
     public Selection narrowedTo(java.util.function.Predicate<Point> filter) {
         MutantRequest narrowed = new MutantRequest(request.operators(), request.orders(), request.scope(), request.seed(),
-                request.pointFilter().and(filter), request.mutateDiagnostics());
+                request.pointFilter().and(filter), request.mutateDiagnostics(),
+                request.suppressions());
         return new Selection(narrowed, sampleSize, margin, sampleSeed);
     }
 

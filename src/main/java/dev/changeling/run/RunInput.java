@@ -4,6 +4,7 @@ import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.mutant.SelectionInput;
+import dev.changeling.mutant.Suppressions;
 import dev.changeling.project.DiscoveryOptions;
 import dev.changeling.project.ExplicitProject;
 import dev.changeling.project.ProjectLayout;
@@ -74,7 +75,7 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         if (explicit.isPresent()) {
             discovery = discovery.withExplicitProject(explicit.get());
         }
-        return new RunRequest(layout, limits, selection.resolve(), change, discovery, workerCount, deadlines,
+        return new RunRequest(layout, limits, selection.resolve().withSuppressions(Suppressions.load(layout.root())), change, discovery, workerCount, deadlines,
                 Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
     }
 

@@ -7,6 +7,7 @@ import dev.changeling.mutant.HigherOrder;
 import dev.changeling.mutant.MutantRequest;
 import dev.changeling.mutant.Point;
 import dev.changeling.mutant.Selection;
+import dev.changeling.mutant.Suppressions;
 import dev.changeling.operator.MutationOperator;
 import dev.changeling.operator.Operators;
 import dev.changeling.project.DiscoveryOptions;
@@ -80,7 +81,7 @@ public record RunRequest(
         try {
             request = new MutantRequest(Operators.named(recorded.operators()), List.of(order),
                     HigherOrder.Scope.valueOf(recorded.scope().toUpperCase(Locale.ROOT)), recorded.seed(), only,
-                    recorded.mutateDiagnostics());
+                    recorded.mutateDiagnostics()).withSuppressions(Suppressions.load(projectRoot));
         } catch (IllegalArgumentException e) {
             throw new UserError("cannot run the mutant again: " + e.getMessage());
         }

@@ -116,9 +116,25 @@ class MutantsCommandTest {
         CommandOutcome byDefault = CommandOutcome.of("mutants", sample, "--plain");
         CommandOutcome asked = CommandOutcome.of("mutants", sample, "--plain", "--mutate-diagnostics");
 
-        assertTrue(byDefault.out().contains("\n1 not made where code only serves diagnostics (1 in logging call);"
-                + " --mutate-diagnostics makes them\n"), byDefault.out());
+        assertTrue(byDefault.out().contains("\n1 not made (1 in logging call); --mutate-diagnostics and"
+                + " .changeling/suppressions.txt decide which\n"), byDefault.out());
         assertFalse(asked.out().contains("not made"), asked.out());
         assertEquals(count(byDefault.out()) + 1, count(asked.out()));
+    }
+
+    @Test
+    void aSuppressionRuleOfTheProject_leavesOutAnotherKind_andSaysHowMany() throws IOException {
+        Path sample = SampleCopy.of("greenhouse", temp);
+        CommandOutcome before = CommandOutcome.of("mutants", sample.toString(), "--plain", "--operators", "statement-removal");
+        Files.createDirectories(sample.resolve(".changeling"));
+        Files.writeString(sample.resolve(".changeling/suppressions.txt"),
+                "# rules for mutants not worth a reviewer's minute\n"
+                + "statement-removal text log.skipped(* -- the skip notes are checked by ValveLogTest\n");
+
+        CommandOutcome after = CommandOutcome.of("mutants", sample.toString(), "--plain", "--operators", "statement-removal");
+
+        assertEquals(ExitCode.OK, after.code(), after.err());
+        assertTrue(after.out().contains("3 by rule at line 2: the skip notes are checked by ValveLogTest"), after.out());
+        assertEquals(count(before.out()) - 3, count(after.out()));
     }
 }

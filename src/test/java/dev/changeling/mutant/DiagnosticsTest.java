@@ -54,7 +54,7 @@ class DiagnosticsTest {
 
     @Test
     void loggerCalls_asserts_andToString_areNotMade_andCountedByReason() {
-        PointFinder finder = new PointFinder(Operators.all(), false);
+        PointFinder finder = new PointFinder(Operators.all(), false, point -> true);
         List<Point> made = points(finder);
 
         assertEquals(List.of(), on(made, "LOG.info(\"heat {}\", heat + 1);"), "a call on a field declared as a Logger");
@@ -68,7 +68,7 @@ class DiagnosticsTest {
 
     @Test
     void aFieldNamedLog_ofAnotherType_isMutatedAsAnyCode() {
-        List<Point> made = points(new PointFinder(Operators.all(), false));
+        List<Point> made = points(new PointFinder(Operators.all(), false, point -> true));
 
         assertFalse(on(made, "log.add(\"fired at \" + (heat - 1));").isEmpty(), "a List named log is no logger");
         assertFalse(on(made, "heat = heat - 1;").isEmpty());
@@ -76,9 +76,9 @@ class DiagnosticsTest {
 
     @Test
     void askedFor_everyPointIsMade_withTheSameFingerprints() {
-        PointFinder asked = new PointFinder(Operators.all(), true);
+        PointFinder asked = new PointFinder(Operators.all(), true, point -> true);
         List<Point> all = points(asked);
-        List<Point> byDefault = points(new PointFinder(Operators.all(), false));
+        List<Point> byDefault = points(new PointFinder(Operators.all(), false, point -> true));
 
         assertTrue(asked.notMade().isEmpty());
         assertFalse(on(all, "LOG.info(\"heat {}\", heat + 1);").isEmpty());

@@ -56,12 +56,19 @@ public final class Summary {
         return line.toString();
     }
 
-    /** "5 not made where code only serves diagnostics (3 logging calls, 2 assert statements)". */
+    /** "5 not made (3 in logging calls, 2 by rule at line 4: counters only feed dashboards)". */
     public static String notMade(Map<String, Integer> byReason) {
         int total = byReason.values().stream().mapToInt(Integer::intValue).sum();
-        return total + " not made where code only serves diagnostics (" + byReason.entrySet().stream()
-                .map(reason -> reason.getValue() + " in " + (reason.getValue() == 1 ? reason.getKey() : plural(reason.getKey())))
+        return total + " not made (" + byReason.entrySet().stream()
+                .map(reason -> reason.getValue() + " " + notMadeBecause(reason.getKey(), reason.getValue()))
                 .collect(Collectors.joining(", ")) + ")";
+    }
+
+    private static String notMadeBecause(String reason, int count) {
+        if (reason.startsWith("rule ")) {
+            return "by " + reason;
+        }
+        return "in " + (count == 1 ? reason : plural(reason));
     }
 
     private static String plural(String reason) {
