@@ -20,7 +20,6 @@ import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.List;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Writes the attachments for a review from the results file, and can serve as a CI gate. */

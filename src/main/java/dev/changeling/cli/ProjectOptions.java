@@ -24,15 +24,12 @@ final class ProjectOptions {
 
     /** The project's layout as every command works it out ({@link ProjectLayout#locate}). */
     ProjectLayout layout() {
-        return ProjectLayout.locate(paths.isEmpty() ? Path.of("") : paths.get(0), Optional.empty());
+        return ProjectLayout.locate(paths, Optional.empty());
     }
 
     /** The paths that limit the work, or none when the whole project is meant. */
     List<Path> limits(ProjectLayout layout) {
-        return paths.stream()
-                .map(path -> path.toAbsolutePath().normalize())
-                .filter(path -> !path.equals(layout.root()))
-                .toList();
+        return layout.limits(paths);
     }
 
     Style style() {

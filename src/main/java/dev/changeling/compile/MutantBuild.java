@@ -2,7 +2,6 @@ package dev.changeling.compile;
 
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
-import dev.changeling.source.SourceFile;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;

@@ -52,7 +52,7 @@ public record WorkerSettings(Path workingDirectory, List<Path> classpath, Path w
         if (mutantsPerWorker < 1) {
             throw new IllegalArgumentException("a worker must run at least one mutant before it is replaced, not " + mutantsPerWorker);
         }
-        if (!maxHeap.matches("[0-9]+[kKmMgGtT]?")) {
+        if (!isHeapSize(maxHeap)) {
             throw new IllegalArgumentException("the worker heap must be a size such as 512m or 2g, not '" + maxHeap + "'");
         }
         workingDirectory = workingDirectory.toAbsolutePath().normalize();
@@ -87,6 +87,11 @@ public record WorkerSettings(Path workingDirectory, List<Path> classpath, Path w
         builder.startTimeout = startTimeout;
         builder.baselineTimeout = baselineTimeout;
         return builder;
+    }
+
+    /** Whether a text is a heap size as {@code -Xmx} takes it: digits, then k, m, g or t (either case) or nothing. */
+    public static boolean isHeapSize(String text) {
+        return text.matches("[0-9]+[kKmMgGtT]?");
     }
 
     public static Path currentJava() {

@@ -54,6 +54,19 @@ public record ProjectLayout(Path root, List<Path> sourceRoots, List<Path> testRo
         return new ProjectLayout(root, List.of(folders.sources()), List.of(folders.testSources()), folders.directory());
     }
 
+    /** The layout of the project the first of the paths a user typed belongs to (the current folder for none). */
+    public static ProjectLayout locate(List<Path> paths, Optional<ExplicitProject> explicit) {
+        return locate(paths.isEmpty() ? Path.of("") : paths.get(0), explicit);
+    }
+
+    /** The paths a user typed that limit the work to files and folders inside the project; none for all of it. */
+    public List<Path> limits(List<Path> paths) {
+        return paths.stream()
+                .map(path -> path.toAbsolutePath().normalize())
+                .filter(path -> !path.equals(root))
+                .toList();
+    }
+
     /** The layout of the project in a folder, with no folders given by hand. */
     public static ProjectLayout of(Path folder) {
         return locate(folder, Optional.empty());

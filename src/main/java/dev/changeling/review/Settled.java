@@ -32,7 +32,12 @@ public record Settled(Set<String> equivalent, Map<String, TriageMarks.Mark> fixe
         Map<String, TriageMarks.Mark> fixed = TriageMarks.open(projectRoot).all().entrySet().stream()
                 .filter(entry -> entry.getValue().kind() == TriageMarks.Kind.FIXED)
                 .collect(Collectors.toMap(Map.Entry::getKey, Map.Entry::getValue));
-        return new Settled(equivalent, fixed, ResultsFile.writtenAt(ProjectLayout.of(projectRoot).resultsFile()));
+        return new Settled(equivalent, fixed, resultsWritten(projectRoot));
+    }
+
+    /** When the project's results file was written: what a fixed mark is held against. */
+    public static Instant resultsWritten(Path projectRoot) {
+        return ResultsFile.writtenAt(ProjectLayout.of(projectRoot).resultsFile());
     }
 
     /** Listed as equivalent, or marked fixed by a mark that still stands: no longer a survivor to look at. */

@@ -3,6 +3,7 @@ package dev.changeling.run;
 import dev.changeling.ExitCode;
 import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
+import dev.changeling.execution.WorkerSettings;
 import dev.changeling.mutant.SelectionInput;
 import dev.changeling.mutant.Suppressions;
 import dev.changeling.project.DiscoveryOptions;
@@ -56,7 +57,7 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         } catch (IllegalArgumentException e) {
             throw usage("--time-factor/--time-extra: " + e.getMessage());
         }
-        if (workerHeap != null && !workerHeap.matches("[0-9]+[kKmMgGtT]?")) {
+        if (workerHeap != null && !WorkerSettings.isHeapSize(workerHeap)) {
             throw usage("--worker-heap takes a size such as 512m or 2g, not '" + workerHeap + "'");
         }
         int workerCount = workers == null ? Runtime.getRuntime().availableProcessors() : workers;
@@ -66,16 +67,9 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         if (mutantsPerWorker < 1) {
             throw usage("--mutants-per-worker takes a positive number, not " + mutantsPerWorker);
         }
-        ProjectLayout layout = ProjectLayout.locate(paths.isEmpty() ? Path.of("") : paths.get(0), explicit);
-        List<Path> limits = paths.stream()
-                .map(path -> path.toAbsolutePath().normalize())
-                .filter(path -> !path.equals(layout.root()))
-                .toList();
-        DiscoveryOptions discovery = DiscoveryOptions.defaults().withMavenArguments(mavenArguments);
-        if (explicit.isPresent()) {
-            discovery = discovery.withExplicitProject(explicit.get());
-        }
-        return new RunRequest(layout, limits, selection.resolve().withSuppressions(Suppressions.load(layout.root())), change, discovery, workerCount, deadlines,
+        ProjectLayout layout = ProjectLayout.locate(paths, explicit);
+        DiscoveryOptions discovery = new DiscoveryOptions(Optional.empty(), mavenArguments, explicit);
+        return new RunRequest(layout, layout.limits(paths), selection.resolve().withSuppressions(Suppressions.load(layout.root())), change, discovery, workerCount, deadlines,
                 Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
     }
 

@@ -85,13 +85,8 @@ public record RunRequest(
         } catch (IllegalArgumentException e) {
             throw new UserError("cannot run the mutant again: " + e.getMessage());
         }
-        DiscoveryOptions discovery = DiscoveryOptions.defaults().withMavenArguments(recorded.mavenArguments());
-        if (recorded.mavenExecutable() != null) {
-            discovery = discovery.withMavenExecutable(Path.of(recorded.mavenExecutable()));
-        }
-        if (recorded.explicitProject() != null) {
-            discovery = discovery.withExplicitProject(recorded.explicitProject());
-        }
+        DiscoveryOptions discovery = new DiscoveryOptions(Optional.ofNullable(recorded.mavenExecutable()).map(Path::of),
+                recorded.mavenArguments(), Optional.ofNullable(recorded.explicitProject()));
         return new RunRequest(ProjectLayout.locate(projectRoot, discovery.explicitProject()), List.of(),
                 new Selection(request, null, null, recorded.seed()), Optional.empty(), discovery, 1,
                 new Deadlines(recorded.timeFactor(), recorded.timeExtraMillis()), Optional.ofNullable(recorded.workerHeap()),

@@ -8,7 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.changeling.ExitCode;
 import dev.changeling.results.MutantResult;
-import dev.changeling.results.ResultsFile;
 import dev.changeling.results.Verdict;
 import java.nio.file.Files;
 import java.nio.file.Path;

@@ -1,10 +1,9 @@
 package dev.changeling.review.triage;
 
-import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
-import dev.changeling.results.ResultsFile;
 import dev.changeling.review.EquivalentEntry;
 import dev.changeling.review.EquivalentsList;
+import dev.changeling.review.Settled;
 import dev.changeling.review.TriageMarks;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -31,7 +30,7 @@ final class Decisions {
 
     /** The decisions, held against the project's results file as it is now (a fixed mark a later run contradicts lapses). */
     static Decisions load(Path projectRoot) {
-        return new Decisions(projectRoot, ResultsFile.writtenAt(ProjectLayout.of(projectRoot).resultsFile()),
+        return new Decisions(projectRoot, Settled.resultsWritten(projectRoot),
                 EquivalentsList.load(projectRoot), TriageMarks.open(projectRoot));
     }
 

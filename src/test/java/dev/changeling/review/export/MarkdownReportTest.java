@@ -9,7 +9,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.changeling.analysis.Score;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.results.RunResults;
@@ -17,7 +16,6 @@ import dev.changeling.results.Verdict;
 import dev.changeling.source.SourceFile;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Set;
 import java.util.function.Predicate;
 import org.commonmark.node.AbstractVisitor;
 import org.commonmark.node.Code;

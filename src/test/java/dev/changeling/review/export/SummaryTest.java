@@ -1,14 +1,12 @@
 package dev.changeling.review.export;
 
 import dev.changeling.results.RunResults;
-import dev.changeling.review.Survivors;
 import static dev.changeling.results.ResultsForTests.result;
 import static dev.changeling.results.ResultsForTests.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.changeling.analysis.Score;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
 import java.util.ArrayList;
