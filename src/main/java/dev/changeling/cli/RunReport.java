@@ -5,6 +5,7 @@ import dev.changeling.analysis.Tally;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
 import dev.changeling.review.export.Summary;
 import dev.changeling.terminal.Style;
@@ -48,10 +49,11 @@ final class RunReport {
                 e -> e.getValue(), (a, b) -> a, java.util.TreeMap::new)));
         if (!survivors.isEmpty()) {
             out.println(style.yellow("survived (" + survivors.size() + "):"));
+            SameClasses sameClasses = SameClasses.of(results);
             survivors.stream().limit(SURVIVORS_LISTED).forEach(mutant -> out.println("  " + style.bold(mutant.shortId())
                     + "  " + mutant.file() + ":" + mutant.first().line() + "  " + mutant.first().operator()
                     + (mutant.order() > 1 ? " (order " + mutant.order() + ")" : "")
-                    + "  " + mutant.first().description()));
+                    + "  " + mutant.first().description() + sameClasses.note(mutant)));
             if (survivors.size() > SURVIVORS_LISTED) {
                 out.println("  … and " + (survivors.size() - SURVIVORS_LISTED) + " more (changeling export --markdown FILE lists all)");
             }

@@ -9,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Function;
 import javax.tools.Diagnostic;
 import javax.tools.JavaFileObject;
 
@@ -39,7 +40,7 @@ final class AloneCompiler {
         Map<String, Placement> placements = new LinkedHashMap<>();
         List<Job> pending = new ArrayList<>(jobs);
         while (!pending.isEmpty()) {
-            List<Job> batch = oneMutantPerFile(pending);
+            List<Job> batch = onePerFile(pending, job -> job.file().path());
             pending.removeAll(batch);
             Map<String, Diagnostic<? extends JavaFileObject>> firstErrors = analyze(batch);
             List<Job> compiled = new ArrayList<>();
@@ -99,12 +100,13 @@ final class AloneCompiler {
         return firstErrors;
     }
 
-    private static List<Job> oneMutantPerFile(List<Job> pending) {
-        List<Job> batch = new ArrayList<>();
+    /** At most {@link #BATCH} of the pending items, no two of one file, so that they can share a javac task. */
+    static <T> List<T> onePerFile(List<T> pending, Function<T, String> fileOf) {
+        List<T> batch = new ArrayList<>();
         Set<String> files = new HashSet<>();
-        for (Job job : pending) {
-            if (batch.size() < BATCH && files.add(job.file().path())) {
-                batch.add(job);
+        for (T item : pending) {
+            if (batch.size() < BATCH && files.add(fileOf.apply(item))) {
+                batch.add(item);
             }
         }
         return batch;

@@ -4,6 +4,7 @@ import dev.changeling.Text;
 import com.sun.source.tree.CompilationUnitTree;
 import com.sun.source.util.JavacTask;
 import com.sun.source.util.Trees;
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
@@ -19,6 +20,7 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.stream.Stream;
 import javax.tools.Diagnostic;
 import javax.tools.DiagnosticCollector;
 import javax.tools.FileObject;
@@ -40,14 +42,28 @@ final class Javac implements AutoCloseable {
     static final String PROBE_CLASS = "dev.changeling.probe.Probe";
 
     /** Keep checking every class after the first error, so one round finds the errors of all files. */
-    private static final List<String> OPTIONS = List.of(
-            "-proc:none", "-encoding", "UTF-8", "-g", "-parameters", "-nowarn", "-Xlint:none", "-implicit:none",
+    private static final List<String> COMMON = List.of(
+            "-proc:none", "-encoding", "UTF-8", "-nowarn", "-Xlint:none", "-implicit:none",
             "-Xmaxerrs", "100000", "-XDshould-stop.ifError=FLOW");
+
+    /** Line numbers and names for the stack traces and reflection of the tests that run the classes. */
+    private static final List<String> WITH_DEBUG_INFO = List.of("-g", "-parameters");
 
     private final JavaCompiler compiler;
     private final StandardJavaFileManager files;
+    private final List<String> options;
 
     Javac(List<Path> classpath) {
+        this(classpath, WITH_DEBUG_INFO);
+    }
+
+    /** A compiler whose classes carry nothing but code: two sources that mean the same compile to the same bytes. */
+    static Javac withoutDebugInfo(List<Path> classpath) {
+        return new Javac(classpath, List.of("-g:none"));
+    }
+
+    private Javac(List<Path> classpath, List<String> debugOptions) {
+        options = Stream.concat(COMMON.stream(), debugOptions.stream()).toList();
         compiler = ToolProvider.getSystemJavaCompiler();
         if (compiler == null) {
             throw new IllegalStateException("no Java compiler in this runtime; run the tool on a JDK, not a JRE");
@@ -183,6 +199,16 @@ final class Javac implements AutoCloseable {
         });
     }
 
+    /** Receives the bytes of each class compiled from one of the sources. */
+    interface ClassSink {
+        void accept(String path, String className, byte[] bytes);
+    }
+
+    /** A task over sources of distinct files that hands each class's bytes to {@code sink} instead of writing them. */
+    Task taskInMemory(List<Source> sources, ClassSink sink) {
+        return task(sources, (Output) (path, className, standard) -> new ClassInMemory(path, className, sink));
+    }
+
     /** Where the class {@code className}, compiled from {@code path}, is written. */
     private interface Output {
         JavaFileObject fileFor(String path, String className, StandardOutput standard) throws IOException;
@@ -208,7 +234,7 @@ final class Javac implements AutoCloseable {
             }
         };
         DiagnosticCollector<JavaFileObject> diagnostics = new DiagnosticCollector<>();
-        JavacTask task = (JavacTask) compiler.getTask(null, recording, diagnostics, OPTIONS, null, sources);
+        JavacTask task = (JavacTask) compiler.getTask(null, recording, diagnostics, options, null, sources);
         return new Task(task, diagnostics, written);
     }
 
@@ -226,6 +252,31 @@ final class Javac implements AutoCloseable {
         public OutputStream openOutputStream() throws IOException {
             Files.createDirectories(path.getParent());
             return Files.newOutputStream(path);
+        }
+    }
+
+    /** A class file handed to a sink when javac closes it. */
+    private static final class ClassInMemory extends SimpleJavaFileObject {
+
+        private final String path;
+        private final String className;
+        private final ClassSink sink;
+
+        ClassInMemory(String path, String className, ClassSink sink) {
+            super(URI.create("memory:///" + className.replace('.', '/') + ".class"), Kind.CLASS);
+            this.path = path;
+            this.className = className;
+            this.sink = sink;
+        }
+
+        @Override
+        public OutputStream openOutputStream() {
+            return new ByteArrayOutputStream() {
+                @Override
+                public void close() {
+                    sink.accept(path, className, toByteArray());
+                }
+            };
         }
     }
 

@@ -18,6 +18,7 @@ import java.util.Map;
  * @param problems  files skipped and other warnings, one line each
  * @param sourceHashes SHA-256 of each mutated file's text when the run began, by path
  * @param notMade   points not made because their code only serves diagnostics, by reason; empty when none
+ * @param compiledAlike what compiling each survivor on its own found: proposed equivalents and duplicates
  */
 public record RunResults(
         int format,
@@ -28,12 +29,21 @@ public record RunResults(
         List<MutantResult> mutants,
         List<String> problems,
         Map<String, String> sourceHashes,
-        Map<String, Integer> notMade) {
+        Map<String, Integer> notMade,
+        CompiledAlike compiledAlike) {
 
     public static final int FORMAT = 2;
 
     public RunResults {
         notMade = notMade == null ? Map.of() : Collections.unmodifiableMap(new TreeMap<>(notMade));
+        compiledAlike = compiledAlike == null ? CompiledAlike.NONE : compiledAlike;
+    }
+
+    /** Results of a run that compared no survivor's classes. */
+    public RunResults(int format, boolean complete, RunSettings settings, List<TestRecord> tests, Map<String, Double> timings,
+                      List<MutantResult> mutants, List<String> problems, Map<String, String> sourceHashes,
+                      Map<String, Integer> notMade) {
+        this(format, complete, settings, tests, timings, mutants, problems, sourceHashes, notMade, CompiledAlike.NONE);
     }
 
     /** Results with every point made. */
@@ -55,6 +65,6 @@ public record RunResults(
         List<MutantResult> inside = mutants.stream()
                 .filter(mutant -> limits.stream().anyMatch(limit -> projectRoot.resolve(mutant.file()).normalize().startsWith(limit)))
                 .toList();
-        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes, notMade);
+        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes, notMade, compiledAlike);
     }
 }

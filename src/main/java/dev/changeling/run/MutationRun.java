@@ -17,6 +17,7 @@ import dev.changeling.mutant.Selection;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.ProjectDiscovery;
 import dev.changeling.project.ProjectLayout;
+import dev.changeling.results.CompiledAlike;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
 import dev.changeling.results.TestRecord;
@@ -107,7 +108,8 @@ public final class MutationRun {
         checkNotStopped();
 
         Path work = project.layout().changelingDirectory();
-        SchemaStage schema = clock.time(PhaseClock.COMPILE, () -> compileSchema(project, chosen, work));
+        List<Path> compileClasspath = compileClasspath(project, work);
+        SchemaStage schema = clock.time(PhaseClock.COMPILE, () -> compileSchema(chosen, compileClasspath, work));
         checkNotStopped();
 
         Map<String, SourceFile> files = chosen.generated().files();
@@ -148,7 +150,12 @@ public final class MutationRun {
                 TimeoutRecheck.run(workers, plan.jobs(), finished, request.deadlines(), plan::label, listener);
             }
         }
-        return record(chosen, change, results, tests, complete, clock);
+        CompiledAlike alike = stopped ? CompiledAlike.NONE
+                : clock.time(PhaseClock.COMPARE, () -> SurvivorComparison.compare(chosen, results, compileClasspath));
+        if (alike.compared() > 0) {
+            listener.phase(SurvivorComparison.describe(alike));
+        }
+        return record(chosen, change, results, tests, complete, clock, alike);
     }
 
     /**
@@ -186,9 +193,14 @@ public final class MutationRun {
         return chosen;
     }
 
-    private static SchemaStage compileSchema(DiscoveredProject project, Selection.Chosen chosen, Path work) {
+    /** The project's compile classpath and the probe: what every mutant compiles against. */
+    private static List<Path> compileClasspath(DiscoveredProject project, Path work) {
         List<Path> compileClasspath = new ArrayList<>(project.compileClasspath());
         compileClasspath.add(WorkerClasses.extract(work.resolve("worker-classes")));
+        return compileClasspath;
+    }
+
+    private static SchemaStage compileSchema(Selection.Chosen chosen, List<Path> compileClasspath, Path work) {
         return MutantBuild.compileSchema(new BuildRequest(chosen.mutants(), chosen.generated().files(), compileClasspath,
                 work.resolve("build")));
     }
@@ -201,7 +213,7 @@ public final class MutationRun {
     }
 
     private RunResults record(Selection.Chosen chosen, Optional<ChangeScope> change, Map<String, MutantResult> results,
-                              List<TestRecord> tests, boolean complete, PhaseClock clock) {
+                              List<TestRecord> tests, boolean complete, PhaseClock clock, CompiledAlike alike) {
         List<MutantResult> ordered = chosen.mutants().stream()
                 .map(mutant -> results.get(mutant.fingerprint()))
                 .filter(Objects::nonNull)
@@ -209,7 +221,7 @@ public final class MutationRun {
                 .toList();
         return new RunResults(RunResults.FORMAT, complete, request.settings(chosen, change.map(ChangeScope::description)),
                 tests, clock.withTotal(), ordered, chosen.generated().problems().stream().map(Object::toString).toList(),
-                hashes(chosen.generated().files(), ordered), chosen.generated().notMade());
+                hashes(chosen.generated().files(), ordered), chosen.generated().notMade(), alike);
     }
 
     private static Map<String, String> hashes(Map<String, SourceFile> files, List<MutantResult> results) {

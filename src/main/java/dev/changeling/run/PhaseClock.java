@@ -17,6 +17,7 @@ final class PhaseClock {
     static final String BASELINE = "baseline";
     static final String COMPILE_ALONE = "compile alone";
     static final String EXECUTE = "execute";
+    static final String COMPARE = "compare survivors";
 
     private final long started = System.nanoTime();
     private final Map<String, Double> millis = new LinkedHashMap<>();

@@ -2,6 +2,7 @@ package dev.changeling.review.export;
 
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
+import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
 import dev.changeling.review.Survivors;
 import java.util.List;
@@ -29,7 +30,9 @@ public final class MarkdownReport {
      * run and still miss; a count of the rest ends the list.
      */
     public static String render(Standing standing, int limit) {
-        List<MutantResult> survivors = standing.toLookAt().stream().sorted(Survivors.WORST_FIRST).toList();
+        SameClasses sameClasses = SameClasses.of(standing.results());
+        List<MutantResult> survivors = standing.toLookAt().stream().filter(survivor -> !sameClasses.isDuplicate(survivor))
+                .sorted(Survivors.WORST_FIRST).toList();
         int shown = limit == ALL ? survivors.size() : Math.min(limit, survivors.size());
         StringBuilder out = new StringBuilder();
         out.append("**Changeling:** ")
@@ -50,6 +53,7 @@ public final class MarkdownReport {
                 + " Those that the most tests run and still miss come first.\n");
         for (MutantResult survivor : survivors.subList(0, shown)) {
             out.append('\n').append(heading(survivor)).append("\n\n");
+            out.append(alike(survivor, sameClasses));
             if (survivor.diff() == null || survivor.diff().isEmpty()) {
                 out.append("(no diff stored for this mutant)\n");
             } else {
@@ -62,6 +66,21 @@ public final class MarkdownReport {
                     .append(", fewer tests reaching each; the SARIF log and the patches list them all.\n");
         }
         return out.toString();
+    }
+
+    /** What compiling it on its own found, as lines before its diff; empty when nothing. */
+    private static String alike(MutantResult survivor, SameClasses sameClasses) {
+        StringBuilder lines = new StringBuilder();
+        sameClasses.proposedReason(survivor).ifPresent(reason ->
+                lines.append("Proposed equivalent: it ").append(MarkdownText.text(reason)).append(".\n\n"));
+        List<MutantResult> duplicates = sameClasses.duplicatesOf(survivor);
+        if (!duplicates.isEmpty()) {
+            lines.append("Also stands for ").append(duplicates.size()).append(duplicates.size() == 1 ? " survivor" : " survivors")
+                    .append(" with the very same classes: ")
+                    .append(duplicates.stream().map(duplicate -> MarkdownText.code(duplicate.shortId())).collect(Collectors.joining(", ")))
+                    .append(".\n\n");
+        }
+        return lines.toString();
     }
 
     /** One line: file:line, operator, short id, and what each point changed where. */

@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
 import java.net.URI;
 import java.net.URISyntaxException;
@@ -69,8 +70,11 @@ public final class SarifReport {
         projectUri(results).ifPresent(uri -> run.putObject("originalUriBaseIds").putObject(SOURCE_ROOT).put("uri", uri));
         run.put("columnKind", "utf16CodeUnits");
         ArrayNode resultArray = run.putArray("results");
+        SameClasses sameClasses = SameClasses.of(results);
         for (MutantResult survivor : survivors) {
-            addResult(resultArray.addObject(), survivor, rules);
+            ObjectNode result = resultArray.addObject();
+            addResult(result, survivor, rules);
+            addAlike(result, survivor, sameClasses);
         }
         try {
             return JSON.writeValueAsString(log) + "\n";
@@ -89,6 +93,19 @@ public final class SarifReport {
                 + " it and passed)";
         return "Mutant " + survivor.shortId() + (survivor.order() > 1 ? " of order " + survivor.order() : "")
                 + " survived: " + changes + reached;
+    }
+
+    /**
+     * What compiling it on its own found, in the result's property bag (SARIF 2.1.0 §3.8): the reason it is proposed as
+     * equivalent, or the id of the survivor with its very classes that stands for it.
+     */
+    private static void addAlike(ObjectNode result, MutantResult survivor, SameClasses sameClasses) {
+        ObjectNode properties = JSON.createObjectNode();
+        sameClasses.proposedReason(survivor).ifPresent(reason -> properties.put("proposedEquivalent", reason));
+        sameClasses.standingFor(survivor).ifPresent(first -> properties.put("sameClassesAs", first));
+        if (!properties.isEmpty()) {
+            result.set("properties", properties);
+        }
     }
 
     private static void addResult(ObjectNode result, MutantResult survivor, List<String> rules) {

@@ -3,6 +3,7 @@ package dev.changeling.review.export;
 import dev.changeling.analysis.Interval;
 import dev.changeling.analysis.Tally;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
 import dev.changeling.results.Verdict;
 import java.math.BigDecimal;
@@ -44,6 +45,7 @@ public final class Summary {
         }
         line.append(DOT).append(String.join(DOT, counts(overall)));
         line.append(DOT).append(unresolved).append(unresolved == 1 ? " survivor" : " survivors").append(" to look at");
+        SameClasses.of(results).clause(standing.toLookAt()).ifPresent(clause -> line.append(" (").append(clause).append(')'));
         if (!standing.unreadFiles().isEmpty()) {
             line.append(DOT).append(standing.unreadSummary());
         }

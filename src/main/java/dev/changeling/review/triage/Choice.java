@@ -11,7 +11,8 @@ import java.util.stream.Collectors;
 enum Choice {
     EQUIVALENT('e', "equivalent",
             "No test could tell it from the original. Asks why (required); or give the reason after the letter:"
-                    + " e <reason>. Goes into the committed list .changeling/equivalent-mutants.txt."),
+                    + " e <reason>. On a proposed equivalent (it compiled to the original's classes), e alone lists it with that"
+                    + " reason. Goes into the committed list .changeling/equivalent-mutants.txt."),
     NEEDS_TEST('t', "needs a test",
             "A test should notice it; one is still to be written. An optional note may follow: t <note>."
                     + " Kept on this machine in .changeling/local/triage.json."),

@@ -6,6 +6,7 @@ import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
 import dev.changeling.review.EquivalentsList;
 import dev.changeling.review.IdPrefix;
+import dev.changeling.review.SameClasses;
 import dev.changeling.review.TriageMarks;
 import dev.changeling.review.Survivors;
 import dev.changeling.terminal.Style;
@@ -31,6 +32,7 @@ final class Session {
     private final SurvivorView view;
     private final FixCheck fixCheck;
     private final SourceEditor editor;
+    private final SameClasses sameClasses;
     private final Set<String> skipped = new HashSet<>();
     private Walk walk;
     private int contextLines;
@@ -40,17 +42,19 @@ final class Session {
         this.answers = answers;
         this.out = out;
         this.style = setup.style();
-        this.decisions = Decisions.load(setup.projectRoot());
+        this.sameClasses = SameClasses.of(setup.results());
+        this.decisions = Decisions.load(setup.projectRoot(), sameClasses::duplicatesOf);
         this.sources = new CurrentSources(setup.projectRoot(), setup.results().sourceHashes());
         this.names = new TestNames(setup.results().tests());
-        this.view = new SurvivorView(out, style, names);
+        this.view = new SurvivorView(out, style, names, sameClasses);
         this.fixCheck = new FixCheck(rerun, decisions, names, out, style);
         this.editor = new SourceEditor(setup.environment(), setup.projectRoot(), out, style);
     }
 
     Triage.Ending run() {
         List<MutantResult> mutants = setup.results().mutants() == null ? List.of() : setup.results().mutants();
-        List<MutantResult> survivors = Survivors.unresolved(mutants, decisions::resolved);
+        List<MutantResult> survivors = Survivors.unresolved(mutants, decisions::resolved).stream()
+                .filter(survivor -> !sameClasses.isDuplicate(survivor)).toList();
         walk = Walk.start(survivors, decisions::decided, setup.revisit());
         if (!setup.results().complete()) {
             out.println(style.yellow("the last run was interrupted: only the mutants it finished are here"));
@@ -138,7 +142,8 @@ final class Session {
     }
 
     private Step equivalent(MutantResult mutant, String given) {
-        String reason = given.isEmpty() ? answers.ask("why can no test tell it from the original? (one line, required) > ") : given;
+        String reason = !given.isEmpty() ? given : sameClasses.proposedReason(mutant)
+                .orElseGet(() -> answers.ask("why can no test tell it from the original? (one line, required) > "));
         if (reason == null) {
             out.println("end of input: not marked");
             return Step.QUIT;

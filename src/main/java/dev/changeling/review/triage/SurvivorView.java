@@ -2,6 +2,7 @@ package dev.changeling.review.triage;
 
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
+import dev.changeling.review.SameClasses;
 import dev.changeling.terminal.DiffPrinter;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
@@ -15,11 +16,13 @@ final class SurvivorView {
     private final PrintWriter out;
     private final Style style;
     private final TestNames names;
+    private final SameClasses sameClasses;
 
-    SurvivorView(PrintWriter out, Style style, TestNames names) {
+    SurvivorView(PrintWriter out, Style style, TestNames names, SameClasses sameClasses) {
         this.out = out;
         this.style = style;
         this.names = names;
+        this.sameClasses = sameClasses;
     }
 
     void show(MutantResult mutant, int position, int size, CurrentSources.State fileState, Optional<Decision> decision) {
@@ -39,6 +42,14 @@ final class SurvivorView {
         }
         out.print(DiffPrinter.render(mutant.diff() == null ? "" : mutant.diff(), style));
         showTests(mutant.reachedBy());
+        sameClasses.proposedReason(mutant).ifPresent(reason -> out.println(style.cyan("proposed equivalent: it " + reason
+                + "; e alone lists it with that reason")));
+        List<MutantResult> duplicates = sameClasses.duplicatesOf(mutant);
+        if (!duplicates.isEmpty()) {
+            out.println(style.cyan("stands for " + duplicates.size() + " more with the very same classes ("
+                    + duplicates.stream().map(MutantResult::shortId).collect(Collectors.joining(", "))
+                    + "): a decision here is theirs too"));
+        }
         decision.ifPresent(made -> out.println(style.cyan("decided so far: " + made.shown())));
     }
 

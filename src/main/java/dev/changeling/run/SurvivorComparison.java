@@ -1,0 +1,41 @@
+package dev.changeling.run;
+
+import dev.changeling.compile.CompilerEquivalence;
+import dev.changeling.mutant.Mutant;
+import dev.changeling.mutant.Selection;
+import dev.changeling.results.CompiledAlike;
+import dev.changeling.results.MutantResult;
+import dev.changeling.results.Verdict;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * The run's last phase: every survivor's file compiled on its own and compared with the original's and the other
+ * survivors' (trivial compiler equivalence), so that triage can propose equivalents and show duplicates once.
+ */
+final class SurvivorComparison {
+
+    private SurvivorComparison() {
+    }
+
+    static CompiledAlike compare(Selection.Chosen chosen, Map<String, MutantResult> results, List<Path> classpath) {
+        List<Mutant> survivors = chosen.mutants().stream()
+                .filter(mutant -> results.containsKey(mutant.fingerprint()))
+                .filter(mutant -> results.get(mutant.fingerprint()).verdict() == Verdict.SURVIVED)
+                .toList();
+        CompilerEquivalence.Findings findings = CompilerEquivalence.compare(survivors, chosen.generated().files(), classpath);
+        Map<String, String> asOriginal = new TreeMap<>();
+        findings.asOriginal().forEach((id, match) -> asOriginal.put(id, match.name().toLowerCase(Locale.ROOT)));
+        return new CompiledAlike(asOriginal, findings.duplicates(), findings.compared());
+    }
+
+    /** One line for the run's progress. */
+    static String describe(CompiledAlike alike) {
+        return "compared: " + alike.compared() + (alike.compared() == 1 ? " survivor" : " survivors")
+                + " compiled on their own; " + alike.asOriginal().size() + " compile to the original's classes (proposed equivalent), "
+                + alike.duplicateCount() + " repeat another survivor's";
+    }
+}
