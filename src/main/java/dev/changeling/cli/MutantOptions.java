@@ -1,5 +1,6 @@
 package dev.changeling.cli;
 
+import dev.changeling.mutant.LineBudget;
 import dev.changeling.mutant.SelectionInput;
 import java.util.ArrayList;
 import java.util.List;
@@ -41,8 +42,14 @@ final class MutantOptions {
                     + " toString(). Left alone by default, and counted as not made.")
     boolean mutateDiagnostics;
 
+    @Option(names = "--per-line", paramLabel = "N",
+            description = "With --changed-since, --uncommitted or --diff-file: at most N mutants on each changed line (default: "
+                    + LineBudget.DEFAULT_PER_LINE + "), those of the operators the last full run saw detected most often;"
+                    + " " + SelectionInput.EVERY_ONE + " (or 0) makes every one.")
+    String perLine;
+
     /** What was typed; the core checks it and makes the selection ({@link SelectionInput#resolve()}). */
     SelectionInput input() {
-        return new SelectionInput(operators, orders, combineWithin, seed, fileGlobs, sample, margin, mutateDiagnostics);
+        return new SelectionInput(operators, orders, combineWithin, seed, fileGlobs, sample, margin, mutateDiagnostics, perLine);
     }
 }

@@ -6,6 +6,7 @@ import dev.changeling.mutant.MutantDiff;
 import dev.changeling.mutant.Selection;
 import dev.changeling.mutant.Suppressions;
 import dev.changeling.review.export.Summary;
+import dev.changeling.run.ProjectSelection;
 import dev.changeling.scope.ChangeScope;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.source.ParseProblem;
@@ -39,7 +40,7 @@ final class MutantsCommand extends ProjectCommand {
     public Integer call() {
         ProjectLayout layout = project.layout();
         Optional<ChangeScope> scope = change.spec().map(spec -> spec.resolve(layout.root()));
-        Selection selection = mutants.input().resolve().withSuppressions(Suppressions.load(layout.root()));
+        Selection selection = ProjectSelection.of(mutants.input(), scope.isPresent(), layout);
         Selection.Chosen chosen = scope.map(changed -> selection.narrowedTo(changed.filter())).orElse(selection)
                 .choose(layout, project.limits(layout));
         PrintWriter out = out();
@@ -61,9 +62,10 @@ final class MutantsCommand extends ProjectCommand {
         printCounts(out, "operator", chosen, mutant -> mutant.first().operator());
         printCounts(out, "file", chosen, Mutant::file);
         if (!chosen.generated().notMade().isEmpty()) {
-            out.println(Summary.notMade(chosen.generated().notMade()) + "; --mutate-diagnostics and "
+            out.println(Summary.notMade(chosen.generated().notMade()) + "; --mutate-diagnostics, --per-line and "
                     + Suppressions.RELATIVE_PATH + " decide which");
         }
+        selection.budgetNote(chosen).ifPresent(out::println);
         out.println(chosen.mutants().size() + " mutants"
                 + scope.map(changed -> " (" + changed.description() + ")").orElse("")
                 + (chosen.sampled() ? " (a sample of " + chosen.population() + ")" : "")

@@ -6,6 +6,7 @@ import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.execution.WorkerSettings;
 import dev.changeling.project.ProjectLayout;
+import dev.changeling.results.KillHistory;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.ResultsFile;
 import dev.changeling.results.RunResults;
@@ -144,6 +145,7 @@ final class RunCommand implements Callable<Integer> {
         }
         Path resultsFile = layout.resultsFile();
         write(resultsFile, results);
+        KillHistory.of(results).ifPresent(history -> write(layout.killHistoryFile(), history));
         listener.close();
         if (interruption.happened() && !results.complete()) {
             err.println("changeling: stopped; the verdicts so far are in " + resultsFile);
@@ -167,6 +169,15 @@ final class RunCommand implements Callable<Integer> {
             ResultsFile.write(file, results);
         } catch (IOException e) {
             throw new UserError(file + ": cannot write the results (" + e.getMessage() + "); check the build folder is writable");
+        }
+    }
+
+    private static void write(Path file, KillHistory history) {
+        try {
+            history.write(file);
+        } catch (IOException e) {
+            throw new UserError(file + ": cannot write the operators' kill history (" + e.getMessage()
+                    + "); check the build folder is writable");
         }
     }
 

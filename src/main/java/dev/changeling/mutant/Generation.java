@@ -15,7 +15,8 @@ public final class Generation {
 
     /** The mutants of a set of files, the files they were made from, and the files that were skipped. */
     /**
-     * @param notMade points in scope not made, by reason: code that only serves diagnostics, or a suppression rule
+     * @param notMade points in scope not made, by reason: code that only serves diagnostics, a suppression rule, or
+     *                a line's budget
      */
     public record Generated(List<Mutant> mutants, Map<String, SourceFile> files, List<ParseProblem> problems,
                             long lines, Map<String, Integer> notMade) {
@@ -51,6 +52,7 @@ public final class Generation {
                 }
             }
         }
+        points = request.budget().keep(points, notMade);
         List<Mutant> mutants = new ArrayList<>();
         for (int order : request.orders()) {
             if (order == 1) {

@@ -14,6 +14,7 @@ import java.util.function.Predicate;
  * @param pointFilter which points are in scope (files, operators, changed lines)
  * @param mutateDiagnostics whether code whose only effect is diagnostics is mutated too (by default it is not)
  * @param suppressions      the project's rules for points not to make
+ * @param budget            how many points each changed line keeps (a review of a change); {@link LineBudget#NONE} elsewhere
  */
 public record MutantRequest(
         List<MutationOperator> operators,
@@ -22,7 +23,8 @@ public record MutantRequest(
         long seed,
         Predicate<Point> pointFilter,
         boolean mutateDiagnostics,
-        Suppressions suppressions) {
+        Suppressions suppressions,
+        LineBudget budget) {
 
     public MutantRequest {
         operators = List.copyOf(operators);
@@ -37,18 +39,29 @@ public record MutantRequest(
     /** A request that leaves diagnostics-only code alone, as runs do by default. */
     public MutantRequest(List<MutationOperator> operators, List<Integer> orders, HigherOrder.Scope scope, long seed,
                          Predicate<Point> pointFilter) {
-        this(operators, orders, scope, seed, pointFilter, false, Suppressions.none());
+        this(operators, orders, scope, seed, pointFilter, false, Suppressions.none(), LineBudget.NONE);
     }
 
     /** A request without suppression rules. */
     public MutantRequest(List<MutationOperator> operators, List<Integer> orders, HigherOrder.Scope scope, long seed,
                          Predicate<Point> pointFilter, boolean mutateDiagnostics) {
-        this(operators, orders, scope, seed, pointFilter, mutateDiagnostics, Suppressions.none());
+        this(operators, orders, scope, seed, pointFilter, mutateDiagnostics, Suppressions.none(), LineBudget.NONE);
     }
 
     /** The same request with the project's suppression rules. */
     public MutantRequest withSuppressions(Suppressions rules) {
-        return new MutantRequest(operators, orders, scope, seed, pointFilter, mutateDiagnostics, rules);
+        return new MutantRequest(operators, orders, scope, seed, pointFilter, mutateDiagnostics, rules, budget);
+    }
+
+    /** The same request with a per-line budget. */
+    public MutantRequest withBudget(LineBudget lineBudget) {
+        return new MutantRequest(operators, orders, scope, seed, pointFilter, mutateDiagnostics, suppressions, lineBudget);
+    }
+
+    /** The same request, keeping only the points {@code filter} also keeps. */
+    public MutantRequest narrowedTo(Predicate<Point> filter) {
+        return new MutantRequest(operators, orders, scope, seed, pointFilter.and(filter), mutateDiagnostics, suppressions,
+                budget);
     }
 
     public static MutantRequest firstOrder(List<MutationOperator> operators) {

@@ -9,6 +9,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 
 /**
  * The mutants a command works on: those of the project's main sources (or of the paths named), as
@@ -30,12 +32,14 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
         return new Selection(request.withSuppressions(rules), sampleSize, margin, sampleSeed);
     }
 
+    /** The same selection, its per-line budget ranking operators by these kill ratios (operator id to ratio). */
+    public Selection rankedBy(Map<String, Double> killRatios) {
+        return new Selection(request.withBudget(request.budget().rankedBy(killRatios)), sampleSize, margin, sampleSeed);
+    }
+
     /** The same selection, keeping only the points {@code filter} also keeps (e.g. those on changed lines). */
     public Selection narrowedTo(java.util.function.Predicate<Point> filter) {
-        MutantRequest narrowed = new MutantRequest(request.operators(), request.orders(), request.scope(), request.seed(),
-                request.pointFilter().and(filter), request.mutateDiagnostics(),
-                request.suppressions());
-        return new Selection(narrowed, sampleSize, margin, sampleSeed);
+        return new Selection(request.narrowedTo(filter), sampleSize, margin, sampleSeed);
     }
 
     public Chosen choose(ProjectLayout layout, List<Path> only) {
@@ -49,6 +53,14 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
             return new Chosen(all, all.size(), false, generated);
         }
         return new Chosen(Sampling.pick(all, size, sampleSeed), all.size(), true, generated);
+    }
+
+    /** One line on what the per-line budget left out of {@code chosen} and what ranked the points; none without a budget. */
+    public Optional<String> budgetNote(Chosen chosen) {
+        LineBudget budget = request.budget();
+        return budget.limits()
+                ? Optional.of(budget.describe(chosen.generated().notMade().getOrDefault(LineBudget.REASON, 0)))
+                : Optional.empty();
     }
 
     private static List<SourceFile> read(ProjectLayout layout, List<Path> only) {

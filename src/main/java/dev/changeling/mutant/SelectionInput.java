@@ -9,11 +9,13 @@ import java.nio.file.Path;
 import java.nio.file.PathMatcher;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.function.Predicate;
 
 /**
  * Which mutants to make, as the user typed it: operator ids, orders, where k-order mutants combine, the seed,
- * file globs and a sample size or margin. {@link #resolve()} checks it and makes the {@link Selection}.
+ * file globs, a sample size or margin, and a change's per-line budget. {@link #resolve(boolean)} checks it and makes
+ * the {@link Selection}.
  *
  * @param operators     operator ids; empty for the default set
  * @param orders        mutant orders, 1 for first-order
@@ -23,9 +25,14 @@ import java.util.function.Predicate;
  * @param sample        a sample size, or null
  * @param margin        a margin for a sample sized by Cochran's formula, or null
  * @param mutateDiagnostics whether code whose only effect is diagnostics is mutated too
+ * @param perLine       mutants to keep on each changed line as typed (a number, or {@code all}), or null when not given
  */
 public record SelectionInput(List<String> operators, List<Integer> orders, String combineWithin, long seed,
-                             List<String> fileGlobs, Integer sample, Double margin, boolean mutateDiagnostics) {
+                             List<String> fileGlobs, Integer sample, Double margin, boolean mutateDiagnostics,
+                             String perLine) {
+
+    /** What {@code --per-line} takes for every mutant of each changed line. */
+    public static final String EVERY_ONE = "all";
 
     public SelectionInput {
         operators = List.copyOf(operators);
@@ -36,9 +43,11 @@ public record SelectionInput(List<String> operators, List<Integer> orders, Strin
     /**
      * The selection the input names.
      *
+     * @param scoped whether the command is limited to a change, where each changed line keeps
+     *               {@link LineBudget#DEFAULT_PER_LINE} mutants unless {@code --per-line} says otherwise
      * @throws UserError (exit code 2) naming the option whose value cannot be used
      */
-    public Selection resolve() {
+    public Selection resolve(boolean scoped) {
         if (sample != null && margin != null) {
             throw usage("--sample and --sample-for-margin both choose the sample size; give one of them");
         }
@@ -66,7 +75,30 @@ public record SelectionInput(List<String> operators, List<Integer> orders, Strin
         if (sample != null && sample < 1) {
             throw usage("--sample takes a positive number of mutants, not " + sample);
         }
-        return new Selection(request, sample, margin, seed);
+        return new Selection(request.withBudget(budget(scoped)), sample, margin, seed);
+    }
+
+    private LineBudget budget(boolean scoped) {
+        if (perLine == null) {
+            return scoped ? new LineBudget(LineBudget.DEFAULT_PER_LINE, Map.of()) : LineBudget.NONE;
+        }
+        if (!scoped) {
+            throw usage("--per-line limits the mutants on each line of a change; name the change with --changed-since REV,"
+                    + " --uncommitted or --diff-file FILE, or leave --per-line out");
+        }
+        if (perLine.equalsIgnoreCase(EVERY_ONE)) {
+            return LineBudget.NONE;
+        }
+        try {
+            int count = Integer.parseInt(perLine.strip());
+            if (count >= 0) {
+                return new LineBudget(count, Map.of());
+            }
+        } catch (NumberFormatException notANumber) {
+            // said below, as for a negative number
+        }
+        throw usage("--per-line takes a number of mutants per changed line, or " + EVERY_ONE + " (also 0) for every one, not '"
+                + perLine + "'");
     }
 
     private Predicate<Point> filesFilter() {

@@ -77,6 +77,11 @@ public record ProjectLayout(Path root, List<Path> sourceRoots, List<Path> testRo
         return changelingDirectory().resolve("results.json");
     }
 
+    /** How often each operator's mutants were detected in the last full run, beside the results (docs/results-format.md). */
+    public Path killHistoryFile() {
+        return changelingDirectory().resolve("kill-history.json");
+    }
+
     public Path changelingDirectory() {
         return buildDirectory.resolve("changeling");
     }

@@ -26,6 +26,7 @@ import java.util.List;
  * @param explicitProject the folders and classpath given by hand, or null when Maven found them
  * @param mutantsPerWorker mutants a worker runs before it is replaced (0 in files written before it was kept)
  * @param mutateDiagnostics whether code whose only effect is diagnostics was mutated too
+ * @param perLine     mutants kept on each changed line of a run scoped to a change; 0 when every one was made
  */
 public record RunSettings(
         String project,
@@ -46,7 +47,8 @@ public record RunSettings(
         String mavenExecutable,
         ExplicitProject explicitProject,
         int mutantsPerWorker,
-        boolean mutateDiagnostics) {
+        boolean mutateDiagnostics,
+        int perLine) {
 
     public RunSettings {
         skipTests = skipTests == null ? List.of() : List.copyOf(skipTests);

@@ -189,6 +189,7 @@ public final class MutationRun {
                 + (chosen.sampled() ? " sampled from " + chosen.population() : "")
                 + " " + inFiles(chosen.mutants().stream().map(Mutant::file).toList())
                 + change.map(scope -> " (" + scope.description() + ")").orElse(""));
+        selection.budgetNote(chosen).ifPresent(listener::phase);
         chosen.generated().problems().forEach(problem -> listener.phase("skipped " + problem));
         return chosen;
     }

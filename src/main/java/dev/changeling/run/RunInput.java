@@ -5,7 +5,6 @@ import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.execution.WorkerSettings;
 import dev.changeling.mutant.SelectionInput;
-import dev.changeling.mutant.Suppressions;
 import dev.changeling.project.DiscoveryOptions;
 import dev.changeling.project.ExplicitProject;
 import dev.changeling.project.ProjectLayout;
@@ -69,7 +68,7 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         }
         ProjectLayout layout = ProjectLayout.locate(paths, explicit);
         DiscoveryOptions discovery = new DiscoveryOptions(Optional.empty(), mavenArguments, explicit);
-        return new RunRequest(layout, layout.limits(paths), selection.resolve().withSuppressions(Suppressions.load(layout.root())), change, discovery, workerCount, deadlines,
+        return new RunRequest(layout, layout.limits(paths), ProjectSelection.of(selection, change.isPresent(), layout), change, discovery, workerCount, deadlines,
                 Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
     }
 

@@ -4,6 +4,7 @@ import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.execution.WorkerSettings;
 import dev.changeling.mutant.HigherOrder;
+import dev.changeling.mutant.LineBudget;
 import dev.changeling.mutant.MutantRequest;
 import dev.changeling.mutant.Point;
 import dev.changeling.mutant.Selection;
@@ -17,6 +18,7 @@ import dev.changeling.scope.ChangeSpec;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.Predicate;
 
@@ -67,12 +69,14 @@ public record RunRequest(
                 selection.sampleSeed(), chosen.sampled(), chosen.population(), changeDescription.orElse(null),
                 workers, deadlines.factor(), deadlines.constantMillis(), skipTests, skipTags, discovery.mavenArguments(),
                 workerHeap.orElse(null), discovery.mavenExecutable().map(Path::toString).orElse(null),
-                discovery.explicitProject().orElse(null), mutantsPerWorker, mutants.mutateDiagnostics());
+                discovery.explicitProject().orElse(null), mutantsPerWorker, mutants.mutateDiagnostics(),
+                mutants.budget().perLine());
     }
 
     /**
      * The request an earlier run was made with, for the points {@code only} picks of one order, in one worker:
-     * the same project found the same way, the same operators, deadlines, heap and tests.
+     * the same project found the same way, the same operators, deadlines, heap, tests and per-line budget (the points
+     * picked were kept under it, so it keeps them all again, whatever ranks them now).
      *
      * @throws UserError when the recorded settings no longer make sense (an operator that is gone)
      */
@@ -81,7 +85,8 @@ public record RunRequest(
         try {
             request = new MutantRequest(Operators.named(recorded.operators()), List.of(order),
                     HigherOrder.Scope.valueOf(recorded.scope().toUpperCase(Locale.ROOT)), recorded.seed(), only,
-                    recorded.mutateDiagnostics()).withSuppressions(Suppressions.load(projectRoot));
+                    recorded.mutateDiagnostics()).withSuppressions(Suppressions.load(projectRoot))
+                    .withBudget(new LineBudget(recorded.perLine(), Map.of()));
         } catch (IllegalArgumentException e) {
             throw new UserError("cannot run the mutant again: " + e.getMessage());
         }

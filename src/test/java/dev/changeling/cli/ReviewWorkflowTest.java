@@ -66,9 +66,10 @@ class ReviewWorkflowTest {
         git.commit("Never charge a negative or over-long watering");
         Set<Integer> changedLines = addedLines(git.run("diff", "-U0", "HEAD~1", "HEAD", "--", TARIFF));
 
-        // 1. A run scoped to the change mutates only its lines and leaves survivors.
-        Output firstRun = binary(project, "run", "--changed-since", "HEAD~1", "--plain", project.toString());
-        report("run --changed-since HEAD~1", firstRun);
+        // 1. A run scoped to the change mutates only its lines and leaves survivors; every mutant of each line is made,
+        //    since the walk needs three of one line (the per-line budget has tests of its own: ReviewBudgetRunTest).
+        Output firstRun = binary(project, "run", "--changed-since", "HEAD~1", "--per-line", "all", "--plain", project.toString());
+        report("run --changed-since HEAD~1 --per-line all", firstRun);
         assertEquals(0, firstRun.exitCode(), firstRun.toString());
         List<MutantResult> first = ResultsFile.read(ProjectLayout.of(project).resultsFile()).mutants();
         assertFalse(first.isEmpty(), "no mutants in scope");
@@ -142,8 +143,8 @@ class ReviewWorkflowTest {
         assertEquals(TriageMarks.in(project), project.resolve(".changeling/local/triage.json"));
 
         // 3. The run again: the fixed one is killed now; the equivalent one is out of the score and counted on its own.
-        Output secondRun = binary(project, "run", "--changed-since", "HEAD~1", "--plain", project.toString());
-        report("run --changed-since HEAD~1 (again)", secondRun);
+        Output secondRun = binary(project, "run", "--changed-since", "HEAD~1", "--per-line", "all", "--plain", project.toString());
+        report("run --changed-since HEAD~1 --per-line all (again)", secondRun);
         assertEquals(0, secondRun.exitCode(), secondRun.toString());
         RunResults again = ResultsFile.read(ProjectLayout.of(project).resultsFile());
         assertEquals(first.stream().map(MutantResult::id).collect(Collectors.toSet()),

@@ -33,7 +33,7 @@ class SuppressionsTest {
 
     private static Generation.Generated generate(Suppressions rules) {
         MutantRequest request = new MutantRequest(Operators.defaults(), List.of(1), HigherOrder.Scope.METHOD, 1L,
-                point -> true, false, rules);
+                point -> true, false).withSuppressions(rules);
         return Generation.generate(List.of(SourceFile.of("Meter.java", METER)), request);
     }
 

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.changeling.execution.Deadlines;
 import dev.changeling.mutant.HigherOrder;
+import dev.changeling.mutant.LineBudget;
 import dev.changeling.mutant.MutantRequest;
 import dev.changeling.mutant.Selection;
 import dev.changeling.operator.Operators;
@@ -38,7 +39,8 @@ class RunRequestTest {
         DiscoveryOptions discovery = DiscoveryOptions.defaults().withMavenArguments(List.of("-o"))
                 .withMavenExecutable(folder.resolve("bin/mvn")).withExplicitProject(given);
         Selection selection = new Selection(new MutantRequest(Operators.named(List.of("relational-subset")), List.of(1),
-                HigherOrder.Scope.METHOD, 7, point -> true), null, null, 7);
+                HigherOrder.Scope.METHOD, 7, point -> true).withBudget(new LineBudget(2, Map.of("relational-subset", 0.5))),
+                null, null, 7);
         RunRequest first = new RunRequest(ProjectLayout.locate(folder, Optional.of(given)), List.of(), selection,
                 Optional.empty(), discovery, 2, new Deadlines(2.5, 400), Optional.of("768m"), 40, List.of("*IT"),
                 List.of("slow"), false);
@@ -58,5 +60,6 @@ class RunRequestTest {
         assertEquals(first.skipTags(), again.skipTags());
         assertEquals(List.of("relational-subset"), again.selection().request().operators().stream().map(o -> o.id()).toList());
         assertEquals(1, again.workers(), "one mutant needs one worker");
+        assertEquals(2, again.selection().request().budget().perLine(), "the per-line budget the run was made with");
     }
 }

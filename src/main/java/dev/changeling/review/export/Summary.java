@@ -2,6 +2,7 @@ package dev.changeling.review.export;
 
 import dev.changeling.analysis.Interval;
 import dev.changeling.analysis.Tally;
+import dev.changeling.mutant.LineBudget;
 import dev.changeling.results.RunResults;
 import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
@@ -58,7 +59,7 @@ public final class Summary {
         return line.toString();
     }
 
-    /** "5 not made (3 in logging calls, 2 by rule at line 4: counters only feed dashboards)". */
+    /** "9 not made (3 in logging calls, 4 over the per-line budget, 2 by rule at line 4: counters only feed dashboards)". */
     public static String notMade(Map<String, Integer> byReason) {
         int total = byReason.values().stream().mapToInt(Integer::intValue).sum();
         return total + " not made (" + byReason.entrySet().stream()
@@ -69,6 +70,9 @@ public final class Summary {
     private static String notMadeBecause(String reason, int count) {
         if (reason.startsWith("rule ")) {
             return "by " + reason;
+        }
+        if (reason.equals(LineBudget.REASON)) {
+            return reason;
         }
         return "in " + (count == 1 ? reason : plural(reason));
     }
