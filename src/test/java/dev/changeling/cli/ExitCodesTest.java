@@ -62,6 +62,7 @@ class ExitCodesTest {
                 row(ExitCode.USAGE, "changeling: --mutants-per-worker takes a positive number", "run", p, "--mutants-per-worker", "0"),
                 row(ExitCode.USAGE, "changeling: --time-factor/--time-extra:", "run", p, "--time-factor", "0.5"),
                 row(ExitCode.USAGE, "changeling: unknown operator 'no-such-op'", "mutants", p, "--operators", "no-such-op"),
+                row(ExitCode.USAGE, "changeling: --per-line limits the mutants on each line of a change", "run", p, "--per-line", "2"),
                 row(ExitCode.USAGE, "Unknown option: '--no-such-option'", "export", p, "--no-such-option"),
                 row(ExitCode.USAGE, "Invalid value for option '--workers'", "run", p, "--workers", "many"),
                 row(ExitCode.SCORE_TOO_LOW, "changeling: 1 of 2 mutants detected is a score under --min-score 0.75", "export", p,
