@@ -21,7 +21,7 @@ public final class AlikeFigures {
         }
         int notMade = 0;
         StringBuilder reasons = new StringBuilder();
-        for (var reason : (Iterable<java.util.Map.Entry<String, JsonNode>>) () -> results.path("notMade").fields()) {
+        for (var reason : results.path("notMade").properties()) {
             notMade += reason.getValue().asInt();
             reasons.append(reasons.length() == 0 ? "" : ", ").append(reason.getValue().asInt()).append(' ').append(reason.getKey());
         }

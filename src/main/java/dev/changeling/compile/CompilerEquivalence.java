@@ -4,6 +4,7 @@ import dev.changeling.mutant.Mutant;
 import dev.changeling.source.SourceFile;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -11,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Trivial compiler equivalence: each mutant's file is compiled on its own without debug information and its classes
@@ -43,15 +45,40 @@ public final class CompilerEquivalence {
     private CompilerEquivalence() {
     }
 
-    /** Compares every mutant given; {@code classpath} must compile each file on its own. */
+    /**
+     * Compares every mutant given; {@code classpath} must compile each file on its own. The files are shared out
+     * over the cores, each share compiled by its own compiler.
+     */
     public static Findings compare(List<Mutant> mutants, Map<String, SourceFile> files, List<Path> classpath) {
         if (mutants.isEmpty()) {
             return Findings.NONE;
         }
+        Map<String, Map<String, byte[]>> originals = new ConcurrentHashMap<>();
+        Map<String, Map<String, byte[]>> compiled = new ConcurrentHashMap<>();
+        shares(mutants, Runtime.getRuntime().availableProcessors()).parallelStream()
+                .forEach(share -> compileShare(share, files, classpath, originals, compiled));
+        return findings(mutants, originals, compiled);
+    }
+
+    /** The mutants in at most {@code count} shares of whole files, the files with the most mutants dealt first. */
+    private static List<List<Mutant>> shares(List<Mutant> mutants, int count) {
+        Map<String, List<Mutant>> byFile = new LinkedHashMap<>();
+        mutants.forEach(mutant -> byFile.computeIfAbsent(mutant.file(), file -> new ArrayList<>()).add(mutant));
+        List<List<Mutant>> shares = new ArrayList<>();
+        for (int index = 0; index < Math.min(count, byFile.size()); index++) {
+            shares.add(new ArrayList<>());
+        }
+        byFile.values().stream().sorted(Comparator.comparingInt((List<Mutant> file) -> file.size()).reversed())
+                .forEach(file -> shares.stream().min(Comparator.comparingInt(List::size)).orElseThrow().addAll(file));
+        return shares;
+    }
+
+    private static void compileShare(List<Mutant> share, Map<String, SourceFile> files, List<Path> classpath,
+                                     Map<String, Map<String, byte[]>> originals, Map<String, Map<String, byte[]>> compiled) {
         try (Javac javac = Javac.withoutDebugInfo(classpath)) {
-            Map<String, Map<String, byte[]>> originals = compileEach(javac, originalsOf(mutants, files));
-            Map<String, Map<String, byte[]>> compiled = new HashMap<>();
-            List<Mutant> pending = mutants.stream().filter(mutant -> originals.containsKey(mutant.file())).toList();
+            Map<String, Map<String, byte[]>> ownOriginals = compileEach(javac, originalsOf(share, files));
+            originals.putAll(ownOriginals);
+            List<Mutant> pending = share.stream().filter(mutant -> ownOriginals.containsKey(mutant.file())).toList();
             while (!pending.isEmpty()) {
                 List<Mutant> batch = AloneCompiler.onePerFile(pending, Mutant::file);
                 Map<String, String> sources = new LinkedHashMap<>();
@@ -62,7 +89,6 @@ public final class CompilerEquivalence {
                 Set<Mutant> done = new HashSet<>(batch);
                 pending = pending.stream().filter(mutant -> !done.contains(mutant)).toList();
             }
-            return findings(mutants, originals, compiled);
         }
     }
 
