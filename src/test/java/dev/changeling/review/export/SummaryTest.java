@@ -7,11 +7,14 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.changeling.mutant.LineBudget;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 
@@ -84,5 +87,11 @@ class SummaryTest {
         assertTrue(line.startsWith("mutation score 0.75 (3 of 4 detected)"), line);
         assertTrue(line.contains(" · 2 files could not be read — not in the score"), line);
         assertFalse(Summary.line(Standings.of(read, m -> false)).contains("could not be read"));
+    }
+
+    @Test
+    void pointsLeftOutByTheBudget_areCountedAsNotMade_inWordsOfTheirOwn() {
+        assertEquals("9 not made (2 in logging calls, 6 over the per-line budget, 1 by rule at line 4: dashboards only)",
+                Summary.notMade(new TreeMap<>(Map.of("logging call", 2, LineBudget.REASON, 6, "rule at line 4: dashboards only", 1))));
     }
 }
