@@ -13,8 +13,9 @@ import java.util.TreeMap;
 /** Parses files and makes the mutants a request asks for; files that do not parse are reported and skipped. */
 public final class Generation {
 
-    /** The mutants of a set of files, the files they were made from, and the files that were skipped. */
     /**
+     * The mutants of a set of files, the files they were made from, and the files that were skipped.
+     *
      * @param notMade points in scope not made, by reason: code that only serves diagnostics, a suppression rule, or
      *                a line's budget
      */

@@ -17,7 +17,8 @@ import java.util.Map;
  * @param mutants   every mutant in scope, with its verdict
  * @param problems  files skipped and other warnings, one line each
  * @param sourceHashes SHA-256 of each mutated file's text when the run began, by path
- * @param notMade   points not made because their code only serves diagnostics, by reason; empty when none
+ * @param notMade   points in scope not made, by reason (code that only serves diagnostics, a suppression rule, the
+ *                  per-line budget); empty when none
  * @param compiledAlike what compiling each survivor on its own found: proposed equivalents and duplicates
  */
 public record RunResults(
@@ -52,7 +53,7 @@ public record RunResults(
         this(format, complete, settings, tests, timings, mutants, problems, sourceHashes, Map.of());
     }
 
-    /** How many points were not made because their code only serves diagnostics. */
+    /** How many points in scope were not made, whatever the reason. */
     public int notMadeCount() {
         return notMade.values().stream().mapToInt(Integer::intValue).sum();
     }
