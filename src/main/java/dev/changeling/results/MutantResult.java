@@ -18,6 +18,8 @@ import java.util.List;
  * @param reachedBy every test that reaches its points in the baseline (stored the same way)
  * @param millis    the time spent running its tests
  * @param diff      the unified diff of exactly what was run
+ * @param killers   every reaching test that fails with it, when the run ran them all (the full kill matrix); null
+ *                  when the run stopped at the first failure (stored the same way as {@code testsRun})
  */
 public record MutantResult(
         String id,
@@ -30,7 +32,14 @@ public record MutantResult(
         @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> testsRun,
         @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> reachedBy,
         double millis,
-        String diff) {
+        String diff,
+        @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> killers) {
+
+    /** A mutant of a run that stopped at the first failure: no kill matrix. */
+    public MutantResult(String id, String file, int order, List<PointRecord> points, Verdict verdict, String killedBy,
+                        String detail, List<String> testsRun, List<String> reachedBy, double millis, String diff) {
+        this(id, file, order, points, verdict, killedBy, detail, testsRun, reachedBy, millis, diff, null);
+    }
 
     public String shortId() {
         return id.substring(0, Math.min(8, id.length()));
@@ -43,6 +52,6 @@ public record MutantResult(
     public MutantResult withVerdict(Verdict newVerdict, String newKilledBy, String newDetail,
                                     List<String> newTestsRun, double newMillis) {
         return new MutantResult(id, file, order, points, newVerdict, newKilledBy, newDetail, newTestsRun,
-                reachedBy, newMillis, diff);
+                reachedBy, newMillis, diff, killers);
     }
 }
