@@ -28,9 +28,9 @@ public final class Suppressions {
     /** One rule. {@code line} is its line in the file, to name it in counts. */
     record Rule(int line, String operator, boolean onText, Pattern glob, String written, String reason) {
 
-        boolean matches(Point point) {
-            return (operator.equals("*") || operator.equals(point.operator()))
-                    && glob.matcher(onText ? point.snippet() : point.member()).matches();
+        boolean matches(String pointOperator, String hostText, String member) {
+            return (operator.equals("*") || operator.equals(pointOperator))
+                    && glob.matcher(onText ? hostText : member).matches();
         }
 
         String label() {
@@ -65,7 +65,12 @@ public final class Suppressions {
         }
     }
 
-    static Suppressions parse(List<String> lines, String fileName) {
+    /**
+     * The rules of these lines, as they would be read from the file.
+     *
+     * @throws UserError naming the file and line of a rule that cannot be read, and what a rule looks like
+     */
+    public static Suppressions parse(List<String> lines, String fileName) {
         List<Rule> rules = new ArrayList<>();
         for (int i = 0; i < lines.size(); i++) {
             String line = lines.get(i).strip();
@@ -85,7 +90,18 @@ public final class Suppressions {
 
     /** Why no mutant is made of the point: the first rule that matches it, if any. */
     Optional<String> reason(Point point) {
-        return rules.stream().filter(rule -> rule.matches(point)).findFirst().map(Rule::label);
+        return rules.stream().filter(rule -> rule.matches(point.operator(), point.snippet(), point.member()))
+                .findFirst().map(Rule::label);
+    }
+
+    /** Whether a rule leaves out a point of this operator, host text (whitespace-normalised) and enclosing member. */
+    public boolean leavesOut(String operator, String hostText, String member) {
+        return rules.stream().anyMatch(rule -> rule.matches(operator, hostText, member));
+    }
+
+    /** How many rules there are. */
+    public int size() {
+        return rules.size();
     }
 
     public boolean isEmpty() {

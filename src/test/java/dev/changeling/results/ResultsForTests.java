@@ -47,9 +47,14 @@ public final class ResultsForTests {
                 List.of(), List.of(), 0.0, MutantDiff.unified(mutant, file.text()));
     }
 
-    /** Every mutant the real generator makes of these files at these orders (default operators), all as survivors. */
+    /** Every mutant the real generator makes of these files at these orders (relational-subset), all as survivors. */
     public static List<MutantResult> survivorsOf(List<SourceFile> files, List<Integer> orders) {
-        MutantRequest request = new MutantRequest(Operators.named(List.of("relational-subset")), orders, HigherOrder.Scope.METHOD, 7L, point -> true);
+        return survivorsOf(files, orders, List.of("relational-subset"));
+    }
+
+    /** Every mutant the real generator makes of these files at these orders with these operators, all as survivors. */
+    public static List<MutantResult> survivorsOf(List<SourceFile> files, List<Integer> orders, List<String> operators) {
+        MutantRequest request = new MutantRequest(Operators.named(operators), orders, HigherOrder.Scope.METHOD, 7L, point -> true);
         Generation.Generated generated = Generation.generate(files, request);
         if (!generated.problems().isEmpty()) {
             throw new IllegalArgumentException("sample does not parse: " + generated.problems());

@@ -1,6 +1,8 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.mutant.Suppressions;
 import dev.changeling.review.IdPrefix;
+import dev.changeling.review.SuppressionProposal;
 import dev.changeling.terminal.Style;
 import java.util.Arrays;
 import java.util.Locale;
@@ -86,6 +88,11 @@ enum Choice {
             screen.append("  ").append(style.bold(String.valueOf(choice.key))).append("  ")
                     .append(choice.label).append(": ").append(choice.help).append('\n');
         }
+        screen.append("When a listing makes it ").append(SuppressionProposal.MARKS_NEEDED)
+                .append(" equivalents of one operator on calls of one method, triage shows the suppression rule that would")
+                .append(" stop making them and asks once: ").append(style.bold(String.valueOf(RuleOffer.ADD)))
+                .append(" adds it to ").append(Suppressions.RELATIVE_PATH).append(" (from the next run on), ")
+                .append(style.bold(String.valueOf(RuleOffer.NOT_NOW))).append(" leaves it out for this session.\n");
         return screen.append("Only survived mutants that are not listed as equivalent or marked fixed are shown.")
                 .append(" Every decision is written the moment it is made, so quitting or Ctrl-C loses none.\n")
                 .toString();

@@ -33,6 +33,7 @@ final class Session {
     private final FixCheck fixCheck;
     private final SourceEditor editor;
     private final SameClasses sameClasses;
+    private final RuleOffer ruleOffer;
     private final Set<String> skipped = new HashSet<>();
     private Walk walk;
     private int contextLines;
@@ -49,6 +50,7 @@ final class Session {
         this.view = new SurvivorView(out, style, names, sameClasses);
         this.fixCheck = new FixCheck(rerun, decisions, names, out, style);
         this.editor = new SourceEditor(setup.environment(), setup.projectRoot(), out, style);
+        this.ruleOffer = new RuleOffer(setup.projectRoot(), answers, out, style);
     }
 
     Triage.Ending run() {
@@ -154,7 +156,7 @@ final class Session {
         }
         decisions.equivalent(mutant, reason.strip());
         out.println(style.green("listed " + mutant.shortId() + " as equivalent in " + shown(EquivalentsList.in(setup.projectRoot()))));
-        return forward();
+        return ruleOffer.afterEquivalent(mutant) ? forward() : Step.QUIT;
     }
 
     private Step needsTest(MutantResult mutant, String note) {

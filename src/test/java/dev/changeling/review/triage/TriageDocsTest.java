@@ -28,6 +28,14 @@ class TriageDocsTest {
     }
 
     @Test
+    void suppressionsPageShowsTheProposalPromptAsTriageShowsIt() throws IOException {
+        String page = Files.readString(Path.of("docs/suppressions-format.md"));
+
+        assertTrue(page.contains("\n" + RuleOffer.prompt().stripTrailing() + "\n"), RuleOffer.prompt());
+        assertTrue(doc().contains("**`" + RuleOffer.ADD + "`** adds") && doc().contains("**`" + RuleOffer.NOT_NOW + "`** leaves"));
+    }
+
+    @Test
     void examplePromptIsTheOneTheLoopShows() throws IOException {
         assertTrue(doc().contains("\n" + Choice.menu() + " >\n"), Choice.menu());
     }

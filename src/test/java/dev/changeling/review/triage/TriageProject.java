@@ -52,6 +52,34 @@ public final class TriageProject {
             }
             """;
 
+    public static final String ROUNDS = "src/main/java/org/lanternworks/Rounds.java";
+    public static final String ROUNDS_TEXT = """
+            package org.lanternworks;
+
+            /** The keeper's rounds, each one counted on the harbour's tally board. */
+            final class Rounds {
+
+                private final Tally tally = new Tally();
+
+                void dusk() {
+                    tally.count("dusk");
+                }
+
+                void midnight() {
+                    tally.count("midnight");
+                }
+
+                void dawn() {
+                    tally.count("dawn");
+                }
+
+                void storm() {
+                    tally.count("storm");
+                    tally.reset();
+                }
+            }
+            """;
+
     public static final TestRecord LIT_AT_DUSK = new TestRecord(
             "[engine:junit-jupiter]/[class:org.lanternworks.BeaconTest]/[method:litAtDusk()]", "BeaconTest > lit at dusk", 4.0);
     public static final TestRecord FLASHES_IN_FOG = new TestRecord(
@@ -80,13 +108,22 @@ public final class TriageProject {
         return write(root, SQUALL, SQUALL_TEXT, 2);
     }
 
+    /** Writes a project whose rounds each count on a tally, with its statement removals as results. */
+    public static TriageProject roundsIn(Path root) throws IOException {
+        return write(root, ROUNDS, ROUNDS_TEXT, 1, "statement-removal");
+    }
+
     private static TriageProject write(Path root, String path, String text, int order) throws IOException {
+        return write(root, path, text, order, "relational-subset");
+    }
+
+    private static TriageProject write(Path root, String path, String text, int order, String operator) throws IOException {
         Files.createDirectories(root);
         Files.writeString(root.resolve("pom.xml"), "<project/>\n");
         Path file = root.resolve(path);
         Files.createDirectories(file.getParent());
         Files.writeString(file, text);
-        List<MutantResult> mutants = ResultsForTests.survivorsOf(List.of(SourceFile.of(path, text)), List.of(order))
+        List<MutantResult> mutants = ResultsForTests.survivorsOf(List.of(SourceFile.of(path, text)), List.of(order), List.of(operator))
                 .stream().map(TriageProject::reached).toList();
         RunResults plain = ResultsForTests.run(mutants, false, mutants.size());
         RunResults results = new RunResults(plain.format(), true, plain.settings(), List.of(LIT_AT_DUSK, FLASHES_IN_FOG),
