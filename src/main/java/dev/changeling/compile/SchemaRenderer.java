@@ -118,6 +118,7 @@ final class SchemaRenderer {
             case EXPRESSION -> {
                 out.append('(');
                 chain(host, mutated);
+                watch(host, mutated);
                 originalBranch = originalExpression(host);
                 out.append(')');
             }
@@ -144,6 +145,29 @@ final class SchemaRenderer {
             mutated.add(new Branch(point, begin, out.length()));
             out.append(" : ");
         }
+    }
+
+    /**
+     * For the points {@link InfectionWatch} can watch, a link before the original that, while the baseline records,
+     * evaluates each mutated expression beside the original and notes the ones that differ; it always goes on to the
+     * original. Each mutated copy is one more branch of its point, so a compile error there is that point's.
+     */
+    private void watch(Host host, List<Branch> mutated) {
+        List<Point> watched = host.points().stream().filter(point -> InfectionWatch.watchable(point, original)).toList();
+        if (watched.isEmpty()) {
+            return;
+        }
+        String plainOriginal = "(" + oneLine(original.substring(host.span().begin(), host.span().end())) + ")";
+        out.append(PROBE).append(".watching() && (");
+        for (int i = 0; i < watched.size(); i++) {
+            Point point = watched.get(i);
+            out.append(i == 0 ? "" : " | ").append(PROBE).append(".differs(").append(ids.get(point)).append(", ");
+            int begin = out.length();
+            out.append('(').append(oneLine(point.mutatedHost(original))).append(')');
+            mutated.add(new Branch(point, begin, out.length()));
+            out.append(" != ").append(plainOriginal).append(')');
+        }
+        out.append(") ? ").append(plainOriginal).append(" : ");
     }
 
     private Branch originalExpression(Host host) {

@@ -40,7 +40,8 @@ public final class Probe {
     public static void prepare(int points) {
         synchronized (LOCK) {
             active = new boolean[points];
-            seen = new boolean[points];
+            // a point's infection is recorded as the reach of id points + point
+            seen = new boolean[2 * points];
             reachedCount = 0;
         }
     }
@@ -68,6 +69,23 @@ public final class Probe {
     /** Whether the running step was told to stop. */
     public static boolean stopped() {
         return stopAt == step;
+    }
+
+    /** Whether reach is being recorded: the baseline, where a watched switch also compares its mutated values. */
+    public static boolean watching() {
+        return recording;
+    }
+
+    /**
+     * Notes, while recording, that point {@code id}'s mutated expression gave another value than the original for
+     * the running test (recorded as the reach of id {@code points + id}); always false, so the switch goes on to the
+     * original.
+     */
+    public static boolean differs(int id, boolean differs) {
+        if (differs && recording) {
+            reach(active.length + id);
+        }
+        return false;
     }
 
     public static void record(boolean on) {

@@ -20,6 +20,8 @@ import java.util.List;
  * @param diff      the unified diff of exactly what was run
  * @param killers   every reaching test that fails with it, when the run ran them all (the full kill matrix); null
  *                  when the run stopped at the first failure (stored the same way as {@code testsRun})
+ * @param infectedBy the reaching tests for which the mutated expression gave another value than the original in the
+ *                   baseline (stored the same way); empty when it never did; null when that could not be watched
  */
 public record MutantResult(
         String id,
@@ -33,12 +35,20 @@ public record MutantResult(
         @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> reachedBy,
         double millis,
         String diff,
-        @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> killers) {
+        @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> killers,
+        @JsonSerialize(using = TestRefs.Writer.class) @JsonDeserialize(using = TestRefs.Reader.class) List<String> infectedBy) {
 
-    /** A mutant of a run that stopped at the first failure: no kill matrix. */
+    /** A mutant of a run that stopped at the first failure: no kill matrix, infection not watched. */
     public MutantResult(String id, String file, int order, List<PointRecord> points, Verdict verdict, String killedBy,
                         String detail, List<String> testsRun, List<String> reachedBy, double millis, String diff) {
-        this(id, file, order, points, verdict, killedBy, detail, testsRun, reachedBy, millis, diff, null);
+        this(id, file, order, points, verdict, killedBy, detail, testsRun, reachedBy, millis, diff, null, null);
+    }
+
+    /** A mutant whose infection was not watched. */
+    public MutantResult(String id, String file, int order, List<PointRecord> points, Verdict verdict, String killedBy,
+                        String detail, List<String> testsRun, List<String> reachedBy, double millis, String diff,
+                        List<String> killers) {
+        this(id, file, order, points, verdict, killedBy, detail, testsRun, reachedBy, millis, diff, killers, null);
     }
 
     public String shortId() {
@@ -52,6 +62,6 @@ public record MutantResult(
     public MutantResult withVerdict(Verdict newVerdict, String newKilledBy, String newDetail,
                                     List<String> newTestsRun, double newMillis) {
         return new MutantResult(id, file, order, points, newVerdict, newKilledBy, newDetail, newTestsRun,
-                reachedBy, newMillis, diff, killers);
+                reachedBy, newMillis, diff, killers, infectedBy);
     }
 }

@@ -1,6 +1,7 @@
 package dev.changeling.run;
 
 import dev.changeling.compile.BuildResult;
+import dev.changeling.compile.InfectionWatch;
 import dev.changeling.compile.Placement;
 import dev.changeling.execution.Baseline;
 import dev.changeling.execution.Deadlines;
@@ -31,17 +32,19 @@ import java.util.Set;
  *
  * @param jobs      one per reached mutant
  * @param mutants   each job's mutant, by fingerprint
- * @param reachedBy each job's reaching tests, by fingerprint
- * @param unreached verdicts of the mutants no test reaches, by fingerprint
+ * @param reachedBy  each job's reaching tests, by fingerprint
+ * @param infectedBy each watched job's tests that saw its mutated expression differ in the baseline, by fingerprint
+ * @param unreached  verdicts of the mutants no test reaches, by fingerprint
  */
 record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, List<String>> reachedBy,
-               Map<String, MutantResult> unreached) {
+               Map<String, List<String>> infectedBy, Map<String, MutantResult> unreached) {
 
     static JobPlan of(List<Mutant> runnable, BuildResult build, Baseline baseline, Deadlines deadlines,
                       Map<String, SourceFile> files) {
         List<MutantJob> jobs = new ArrayList<>();
         Map<String, Mutant> mutants = new HashMap<>();
         Map<String, List<String>> reachedBy = new HashMap<>();
+        Map<String, List<String>> infectedBy = new HashMap<>();
         Map<String, MutantResult> unreached = new LinkedHashMap<>();
         for (Mutant mutant : runnable) {
             Placement placement = build.placementOf(mutant);
@@ -54,11 +57,15 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
             }
             mutants.put(mutant.fingerprint(), mutant);
             reachedBy.put(mutant.fingerprint(), tests);
+            if (inSchema && mutant.order() == 1 && InfectionWatch.watchable(mutant.first(), files.get(mutant.file()).text())) {
+                // a point's infection is recorded as the reach of id pointCount + point (Probe.differs)
+                infectedBy.put(mutant.fingerprint(), baseline.testsFor(build.pointCount() + placement.activation()[0]));
+            }
             jobs.add(inSchema
                     ? MutantJob.schema(mutant.fingerprint(), placement.activation(), tests, deadlines, baseline)
                     : MutantJob.alone(mutant.fingerprint(), placement.classes(), tests, deadlines, baseline));
         }
-        return new JobPlan(jobs, mutants, reachedBy, unreached);
+        return new JobPlan(jobs, mutants, reachedBy, infectedBy, unreached);
     }
 
     /** The verdict of a job the workers finished, as the results file records it. */
@@ -77,7 +84,7 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
         }
         return new MutantResult(base.id(), base.file(), base.order(), base.points(), verdict,
                 verdict == Verdict.SURVIVED ? null : job.testId(), job.message(), ran, reachedBy.get(job.key()),
-                job.nanos() / 1e6, base.diff());
+                job.nanos() / 1e6, base.diff(), null, infectedBy.get(job.key()));
     }
 
     /** A short name of a job's mutant for progress lines: its id and file. */

@@ -9,6 +9,7 @@ import com.github.javaparser.Position;
 import com.github.javaparser.Problem;
 import com.github.javaparser.Range;
 import com.github.javaparser.ast.CompilationUnit;
+import com.github.javaparser.ast.expr.Expression;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -139,6 +140,12 @@ public final class JavaSources {
         String line = Text.firstLine(message);
         int list = line.indexOf(", expected one of");
         return list < 0 ? line : line.substring(0, list);
+    }
+
+    /** One expression's text as a tree, or empty when it is not an expression on its own. */
+    public static Optional<Expression> parseExpression(String text) {
+        ParseResult<Expression> parsed = new JavaParser(configuration()).parseExpression(text);
+        return parsed.isSuccessful() ? parsed.getResult() : Optional.empty();
     }
 
     private static ParserConfiguration configuration() {

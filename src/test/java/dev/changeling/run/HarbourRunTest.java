@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.changeling.ExitCode;
+import dev.changeling.analysis.WhySurvived;
 import dev.changeling.results.CompiledAlike;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
@@ -143,6 +144,23 @@ class HarbourRunTest {
         assertEquals(5, judged.size(), figure);
         assertEquals(List.of(), judged.stream().filter(one -> !one.agrees()).map(MavenAgreement.Judged::describe)
                 .collect(Collectors.toList()), figure);
+    }
+
+    @Test
+    void eachSurvivorSaysWhichOfReachInfectionAndPropagationFailed() {
+        MutantResult constantComparison = survivor(13, "relational-subset", "replaced > with >=");
+        MutantResult sumForDifference = survivor(19, "arithmetic-swap", "replaced - with +");
+        MutantResult unreached = run.withVerdict(Verdict.UNREACHED).get(0);
+
+        assertEquals(WhySurvived.Kind.NOT_INFECTED, WhySurvived.of(constantComparison).orElseThrow().kind());
+        WhySurvived sum = WhySurvived.of(sumForDifference).orElseThrow();
+        assertEquals(WhySurvived.Kind.NOT_PROPAGATED, sum.kind());
+        assertEquals(Set.of("aWideGapIsHandled()", "noKeeperForASmallGap()"),
+                sum.tests().stream().map(id -> id.replaceAll(".*\\[method:([^\\]]+)\\]$", "$1")).collect(Collectors.toSet()));
+        assertEquals(WhySurvived.Kind.NOT_REACHED, WhySurvived.of(unreached).orElseThrow().kind());
+        String markdown = MarkdownReport.render(Standing.of(run.results(), Settled.load(run.project())));
+        assertTrue(markdown.lines().anyMatch(line -> line.startsWith("Why it survived: infected, not propagated: ")
+                && line.contains("LockGateTest > aWideGapIsHandled()")), markdown);
     }
 
     private static int count(String text, String part) {

@@ -246,7 +246,9 @@ class InterruptedRunTest {
             filesBefore = SampleProjects.fingerprint(project);
             command.addAll(javaCommand("run", "--plain", "--time-extra", "600000", project.toString()));
             try (ToolProcess tool = ToolProcess.start(command, Map.of(), ProcessBuilder.Redirect.DISCARD)) {
-                tool.awaitLine(line -> line.startsWith("  baseline: "));
+                // the last line before the mutants start: after the baseline come the lone compiles, which take a
+                // while on a loaded machine, and a stop before any mutant ran writes nothing
+                tool.awaitLine(line -> line.startsWith("  compiled: "));
                 workersWhileRunning = Workers.aliveFor(project);
                 signal(tool.pid());
                 exitCode = tool.awaitEnd();

@@ -1,9 +1,11 @@
 package dev.changeling.review.export;
 
+import dev.changeling.analysis.WhySurvived;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
+import dev.changeling.review.TestNames;
 import dev.changeling.review.Survivors;
 import java.util.List;
 import java.util.stream.Collectors;
@@ -31,6 +33,7 @@ public final class MarkdownReport {
      */
     public static String render(Standing standing, int limit) {
         SameClasses sameClasses = SameClasses.of(standing.results());
+        TestNames names = new TestNames(standing.results().tests());
         List<MutantResult> survivors = standing.toLookAt().stream().filter(survivor -> !sameClasses.isDuplicate(survivor))
                 .sorted(Survivors.WORST_FIRST).toList();
         int shown = limit == ALL ? survivors.size() : Math.min(limit, survivors.size());
@@ -54,6 +57,8 @@ public final class MarkdownReport {
         for (MutantResult survivor : survivors.subList(0, shown)) {
             out.append('\n').append(heading(survivor)).append("\n\n");
             out.append(alike(survivor, sameClasses));
+            WhySurvived.of(survivor).ifPresent(why -> out.append("Why it survived: ")
+                    .append(MarkdownText.text(why.sentence(names::of))).append(".\n\n"));
             if (survivor.diff() == null || survivor.diff().isEmpty()) {
                 out.append("(no diff stored for this mutant)\n");
             } else {

@@ -5,11 +5,13 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.changeling.analysis.WhySurvived;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.results.RunResults;
 import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
+import dev.changeling.review.TestNames;
 import java.net.URI;
 import java.net.URISyntaxException;
 import java.nio.file.Path;
@@ -71,10 +73,11 @@ public final class SarifReport {
         run.put("columnKind", "utf16CodeUnits");
         ArrayNode resultArray = run.putArray("results");
         SameClasses sameClasses = SameClasses.of(results);
+        TestNames names = new TestNames(results.tests());
         for (MutantResult survivor : survivors) {
             ObjectNode result = resultArray.addObject();
             addResult(result, survivor, rules);
-            addAlike(result, survivor, sameClasses);
+            addProperties(result, survivor, sameClasses, names);
         }
         try {
             return JSON.writeValueAsString(log) + "\n";
@@ -96,11 +99,13 @@ public final class SarifReport {
     }
 
     /**
-     * What compiling it on its own found, in the result's property bag (SARIF 2.1.0 §3.8): the reason it is proposed as
-     * equivalent, or the id of the survivor with its very classes that stands for it.
+     * What is known beyond the verdict, in the result's property bag (SARIF 2.1.0 §3.8): why it survived, the reason it
+     * is proposed as equivalent, or the id of the survivor with its very classes that stands for it.
      */
-    private static void addAlike(ObjectNode result, MutantResult survivor, SameClasses sameClasses) {
+    private static void addProperties(ObjectNode result, MutantResult survivor, SameClasses sameClasses, TestNames names) {
         ObjectNode properties = JSON.createObjectNode();
+        WhySurvived.of(survivor).ifPresent(why -> properties.put("whySurvived", why.kind().words())
+                .put("whySurvivedInWords", why.sentence(names::of)));
         sameClasses.proposedReason(survivor).ifPresent(reason -> properties.put("proposedEquivalent", reason));
         sameClasses.standingFor(survivor).ifPresent(first -> properties.put("sameClassesAs", first));
         if (!properties.isEmpty()) {

@@ -1,5 +1,6 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.review.TestNames;
 import dev.changeling.UserError;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;

@@ -1,5 +1,7 @@
 package dev.changeling.review.triage;
 
+import dev.changeling.review.TestNames;
+import dev.changeling.analysis.WhySurvived;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.review.SameClasses;
@@ -42,6 +44,7 @@ final class SurvivorView {
         }
         out.print(DiffPrinter.render(mutant.diff() == null ? "" : mutant.diff(), style));
         showTests(mutant.reachedBy());
+        WhySurvived.of(mutant).ifPresent(why -> out.println("why it survived: " + why.sentence(names::of)));
         sameClasses.proposedReason(mutant).ifPresent(reason -> out.println(style.cyan("proposed equivalent: it " + reason
                 + "; e alone lists it with that reason")));
         List<MutantResult> duplicates = sameClasses.duplicatesOf(mutant);

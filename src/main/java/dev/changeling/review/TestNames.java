@@ -1,4 +1,4 @@
-package dev.changeling.review.triage;
+package dev.changeling.review;
 
 import dev.changeling.results.TestRecord;
 import java.util.ArrayList;
@@ -9,26 +9,26 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /** Readable names for the JUnit unique ids a run records: the baseline's name, else one made from the id. */
-final class TestNames {
+public final class TestNames {
 
     private static final Pattern SEGMENT = Pattern.compile("\\[([^:\\]]+):([^\\]]*)\\]");
 
     private final Map<String, String> byId = new HashMap<>();
 
-    TestNames(List<TestRecord> tests) {
+    public TestNames(List<TestRecord> tests) {
         if (tests != null) {
             tests.stream().filter(test -> test.name() != null && !test.name().isBlank())
                     .forEach(test -> byId.put(test.id(), test.name()));
         }
     }
 
-    String of(String id) {
+    public String of(String id) {
         String known = byId.get(id);
         return known != null ? known : fromId(id);
     }
 
     /** {@code [engine:x]/[class:a.b.C]/[method:m()]} becomes {@code C > m()}; anything else stays as it is. */
-    static String fromId(String id) {
+    public static String fromId(String id) {
         List<String> parts = new ArrayList<>();
         Matcher segment = SEGMENT.matcher(id);
         while (segment.find()) {
