@@ -30,10 +30,12 @@ public final class Score {
     private final SortedMap<String, Tally> byFile;
     private final SortedMap<OperatorOrder, Tally> byOperator;
     private final SortedMap<Integer, Tally> byOrder;
+    private final Set<String> equivalent;
 
     private Score(Tally overall, SortedMap<String, Tally> byFile, SortedMap<OperatorOrder, Tally> byOperator,
-                  SortedMap<Integer, Tally> byOrder) {
+                  SortedMap<Integer, Tally> byOrder, Set<String> equivalent) {
         this.overall = overall;
+        this.equivalent = Set.copyOf(equivalent);
         this.byFile = Collections.unmodifiableSortedMap(byFile);
         this.byOperator = Collections.unmodifiableSortedMap(byOperator);
         this.byOrder = Collections.unmodifiableSortedMap(byOrder);
@@ -55,13 +57,18 @@ public final class Score {
             add(byOperator, new OperatorOrder(mutant.first().operator(), mutant.order()), mutant, isEquivalent);
             add(byOrder, mutant.order(), mutant, isEquivalent);
         }
-        return new Score(overall, byFile, byOperator, byOrder);
+        return new Score(overall, byFile, byOperator, byOrder, equivalent);
     }
 
     /** Whether this mutant is left out of the score as equivalent. */
     public static boolean isEquivalent(MutantResult mutant, Set<String> equivalent) {
         Verdict verdict = mutant.verdict();
         return (verdict == Verdict.SURVIVED || verdict == Verdict.UNREACHED) && equivalent.contains(mutant.id());
+    }
+
+    /** The fingerprints of the mutants known to be equivalent that this score was given. */
+    public Set<String> equivalent() {
+        return equivalent;
     }
 
     public Tally overall() {

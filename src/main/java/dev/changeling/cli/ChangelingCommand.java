@@ -10,6 +10,7 @@ import picocli.CommandLine.HelpCommand;
         description = "Mutation analysis for code review: would your tests notice if this code were subtly wrong?",
         subcommands = {
             MutantsCommand.class,
+            InsightsCommand.class,
             ExportCommand.class,
             EquivalentsCommand.class,
             TriageCommand.class,

@@ -1,5 +1,6 @@
 package dev.changeling.cli;
 
+import dev.changeling.analysis.LineCoverage;
 import dev.changeling.analysis.Score;
 import dev.changeling.analysis.Tally;
 import dev.changeling.project.ProjectLayout;
@@ -16,7 +17,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.stream.Collectors;
 
-/** The terminal report of a run: the summary line, figures per file and operator, and the survivors' ids. */
+/** The terminal report of a run: the summary and line coverage, figures per file and operator, and the survivors' ids. */
 final class RunReport {
 
     private static final int SURVIVORS_LISTED = 40;
@@ -34,14 +35,14 @@ final class RunReport {
         List<MutantResult> survivors = standing.toLookAt();
         out.println();
         out.println(style.bold(Summary.line(standing)));
+        out.println(Summary.coverage(standing));
         if (!standing.unreadFiles().isEmpty()) {
             out.println(style.yellow(standing.unreadSummary() + ":"));
             standing.unreadFiles().forEach(problem -> out.println("  " + problem));
         }
         if (score.byFile().size() > 1) {
             out.println("by file:");
-            table(out, score.byFile().entrySet().stream().collect(Collectors.toMap(e -> e.getKey(), e -> e.getValue(),
-                    (a, b) -> a, java.util.TreeMap::new)));
+            fileTable(out, score, LineCoverage.byFile(results.mutants(), score.equivalent()));
         }
         out.println("by operator:");
         table(out, score.byOperator().entrySet().stream().collect(Collectors.toMap(
@@ -76,6 +77,18 @@ final class RunReport {
         Path here = Path.of("").toAbsolutePath();
         Path relative = here.relativize(layout.root());
         return relative.toString().isEmpty() ? "." : relative.toString();
+    }
+
+    /** Each file's mutants and score, with the share of its mutated lines the tests run beside the score. */
+    static void fileTable(PrintWriter out, Score score, Map<String, LineCoverage> coverage) {
+        int width = score.byFile().keySet().stream().mapToInt(String::length).max().orElse(0);
+        score.byFile().forEach((file, tally) -> {
+            LineCoverage lines = coverage.getOrDefault(file, new LineCoverage(0, 0, 0));
+            out.printf(Locale.ROOT, "  %-" + width + "s  %5d mutants  %s  %s%n", file, tally.all(),
+                    tally.score().isPresent() ? "score " + Summary.down(tally.score().getAsDouble()) : "score —   ",
+                    lines.share().isPresent() ? "lines run " + Summary.down(lines.share().getAsDouble())
+                            + (lines.unnoticed() > 0 ? " · " + lines.unnoticed() + " unnoticed on them" : "") : "lines run —");
+        });
     }
 
     private static void table(PrintWriter out, Map<String, Tally> rows) {

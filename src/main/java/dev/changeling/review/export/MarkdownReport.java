@@ -11,7 +11,7 @@ import java.util.List;
 import java.util.stream.Collectors;
 
 /**
- * A review comment in CommonMark: the one-line summary, then every unresolved survivor with its
+ * A review comment in CommonMark: the one-line summary and the line coverage under it, then every unresolved survivor with its
  * place, operator, short id, what changed, and its diff in a fenced block.
  */
 public final class MarkdownReport {
@@ -19,7 +19,7 @@ public final class MarkdownReport {
     private MarkdownReport() {
     }
 
-    /** The comment for a run as it stands: summary, the files not read, then every survivor to look at. */
+    /** The comment for a run as it stands: summary, line coverage, the files not read, then every survivor to look at. */
     public static String render(Standing standing) {
         return render(standing, ALL);
     }
@@ -40,6 +40,8 @@ public final class MarkdownReport {
         StringBuilder out = new StringBuilder();
         out.append("**Changeling:** ")
                 .append(MarkdownText.text(Summary.line(standing)))
+                .append("\n\n")
+                .append(MarkdownText.text(Summary.coverage(standing)))
                 .append("\n\n");
         if (!standing.unreadFiles().isEmpty()) {
             out.append("**").append(MarkdownText.text(standing.unreadSummary())).append(":**\n\n");

@@ -1,6 +1,7 @@
 package dev.changeling.review.export;
 
 import dev.changeling.analysis.Interval;
+import dev.changeling.analysis.LineCoverage;
 import dev.changeling.analysis.Tally;
 import dev.changeling.mutant.LineBudget;
 import dev.changeling.results.RunResults;
@@ -59,6 +60,32 @@ public final class Summary {
         return line.toString();
     }
 
+    /**
+     * The line under the summary: the share of mutated lines some test runs, and the mutants on those lines that no test
+     * detects; "of the change" when the run was scoped to one (it then mutated the changed lines only).
+     */
+    public static String coverage(Standing standing) {
+        RunResults results = standing.results();
+        LineCoverage coverage = LineCoverage.of(results.mutants(), standing.score().equivalent());
+        StringBuilder line = new StringBuilder("line coverage");
+        if (results.settings() != null && results.settings().changeScope() != null) {
+            line.append(" of the change");
+        }
+        if (coverage.share().isEmpty()) {
+            return line.append(" n/a (no mutated line counts)").toString();
+        }
+        line.append(' ').append(down(coverage.share().getAsDouble())).append(" (").append(coverage.runLines()).append(" of ")
+                .append(coverage.mutatedLines()).append(coverage.mutatedLines() == 1 ? " mutated line" : " mutated lines")
+                .append(" run by a test)");
+        line.append(DOT).append(unnoticed(coverage.unnoticed()));
+        return line.toString();
+    }
+
+    /** "3 mutants on lines the tests run go unnoticed". */
+    public static String unnoticed(int count) {
+        return count + (count == 1 ? " mutant on lines the tests run goes" : " mutants on lines the tests run go") + " unnoticed";
+    }
+
     /** "9 not made (3 in logging calls, 4 over the per-line budget, 2 by rule at line 4: counters only feed dashboards)". */
     public static String notMade(Map<String, Integer> byReason) {
         int total = byReason.values().stream().mapToInt(Integer::intValue).sum();
@@ -100,7 +127,8 @@ public final class Summary {
         return counts;
     }
 
-    private static String down(double value) {
+    /** A share to two places, rounded down so it never flatters: 0.999 reads 0.99. */
+    public static String down(double value) {
         return BigDecimal.valueOf(value).setScale(2, RoundingMode.FLOOR).toPlainString();
     }
 

@@ -171,7 +171,7 @@ class MarkdownReportTest {
         void placeOperatorIdAndDescription_readBackAsPlainText() {
             Node document = parse(render(List.of(tricky()), mutant -> false));
 
-            Paragraph line = all(document, Paragraph.class).get(2);
+            Paragraph line = all(document, Paragraph.class).get(3);
 
             assertEquals("src/my_file`s.java:42 · relational_subset · 01234567 · "
                     + "replaced *a* with <b>x</b> & `y` | $z$ ~~w~~ [l](u) !\\ in <init>(int)", plain(line));
@@ -244,6 +244,18 @@ class MarkdownReportTest {
 
             assertEquals("Changeling: mutation score 0.50 (1 of 2 detected) · 2 mutants · killed 1 · survived 1"
                     + " · 1 survivor to look at", plain(first));
+        }
+
+        @Test
+        void secondParagraph_isTheLineCoverage() {
+            List<MutantResult> mutants = List.of(
+                    result("aaaaaaaa01", "A.java", "op", 1, Verdict.SURVIVED),
+                    result("cccccccc03", "C.java", "op", 1, Verdict.KILLED));
+
+            Paragraph second = all(parse(render(mutants, mutant -> false)), Paragraph.class).get(1);
+
+            assertEquals("line coverage 1.00 (2 of 2 mutated lines run by a test) · 1 mutant on lines the tests run goes unnoticed",
+                    plain(second));
         }
 
         @Test

@@ -9,6 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.changeling.mutant.LineBudget;
 import dev.changeling.results.MutantResult;
+import dev.changeling.results.PointRecord;
+import dev.changeling.review.RunFixtures;
 import dev.changeling.results.Verdict;
 import java.util.ArrayList;
 import java.util.List;
@@ -93,5 +95,41 @@ class SummaryTest {
     void pointsLeftOutByTheBudget_areCountedAsNotMade_inWordsOfTheirOwn() {
         assertEquals("9 not made (2 in logging calls, 6 over the per-line budget, 1 by rule at line 4: dashboards only)",
                 Summary.notMade(new TreeMap<>(Map.of("logging call", 2, LineBudget.REASON, 6, "rule at line 4: dashboards only", 1))));
+    }
+
+    @Nested
+    class Coverage {
+
+        /** On line 10 a killed mutant and a survivor (reached), on line 11 one unreached: 1 of 2 lines run. */
+        private List<MutantResult> mutants() {
+            MutantResult unreached = result("u", "A.java", "op", 1, Verdict.UNREACHED);
+            return List.of(result("k", "A.java", "op", 1, Verdict.KILLED), result("s", "A.java", "op", 1, Verdict.SURVIVED),
+                    new MutantResult(unreached.id(), unreached.file(), 1, List.of(new PointRecord("u",
+                            "op", "shop.Till", "total(int)", 11, 1, 11, 1, "<", "<=", "a < b", "replaced < with <=")),
+                            Verdict.UNREACHED, null, null, List.of(), List.of(), 0.0, unreached.diff()));
+        }
+
+        @Test
+        void theShareOfMutatedLinesRun_andTheMutantsOnThemNoTestDetects() {
+            assertEquals("line coverage 0.50 (1 of 2 mutated lines run by a test) · 1 mutant on lines the tests run goes unnoticed",
+                    Summary.coverage(Standings.of(run(mutants(), false, 3), m -> false)));
+        }
+
+        @Test
+        void aRunScopedToAChange_saysSo() {
+            RunResults whole = run(mutants(), false, 3);
+            RunResults scoped = new RunResults(whole.format(), true, RunFixtures.settings(false,
+                    "changes since main"), whole.tests(), whole.timings(), whole.mutants(), whole.problems(), whole.sourceHashes());
+
+            assertTrue(Summary.coverage(Standings.of(scoped, m -> false)).startsWith("line coverage of the change 0.50 "));
+        }
+
+        @Test
+        void equivalentsAreLeftOut_andNothingCountedReadsNotApplicable() {
+            assertTrue(Summary.coverage(Standings.of(run(mutants(), false, 3), Set.of("s"), m -> false))
+                    .endsWith(" · 0 mutants on lines the tests run go unnoticed"));
+            assertEquals("line coverage n/a (no mutated line counts)",
+                    Summary.coverage(Standings.of(run(List.of(), false, 0), m -> false)));
+        }
     }
 }
