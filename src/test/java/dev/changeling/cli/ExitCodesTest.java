@@ -51,6 +51,9 @@ class ExitCodesTest {
         return Stream.of(
                 row(ExitCode.OK, "", "operators"),
                 row(ExitCode.OK, "", "export", p),
+                row(ExitCode.OK, "", "insights", p),
+                row(ExitCode.USER_ERROR, "changeling: " + empty, "insights", empty),
+                row(ExitCode.USAGE, "changeling: --top takes a number of entries", "insights", p, "--top", "-1"),
                 row(ExitCode.USER_ERROR, "changeling: " + empty, "export", empty),
                 row(ExitCode.USER_ERROR, "changeling: " + folder.resolve("nowhere"), "mutants", folder.resolve("nowhere").toString()),
                 row(ExitCode.USAGE, "changeling: --sample takes a positive number", "run", p, "--sample", "-5"),
