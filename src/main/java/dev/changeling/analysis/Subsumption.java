@@ -46,11 +46,7 @@ public record Subsumption(int killed, int groups, List<List<Integer>> subsuming,
             // Only a set with fewer killers can be a strict subset; the list is sorted by size.
             for (int other = 0; other < candidate && !subsumed; other++) {
                 BitSet smaller = sets.get(other);
-                if (smaller.cardinality() < own.cardinality()) {
-                    BitSet outside = (BitSet) smaller.clone();
-                    outside.andNot(own);
-                    subsumed = outside.isEmpty();
-                }
+                subsumed = smaller.cardinality() < own.cardinality() && inside(smaller, own);
             }
             if (!subsumed) {
                 subsuming.add(byKillers.get(own));
@@ -59,6 +55,15 @@ public record Subsumption(int killed, int groups, List<List<Integer>> subsuming,
         subsuming.sort(Comparator.comparingInt(group -> group.get(0)));
         int killed = byKillers.values().stream().mapToInt(List::size).sum();
         return new Subsumption(killed, byKillers.size(), subsuming, undetected);
+    }
+
+    private static boolean inside(BitSet smaller, BitSet own) {
+        for (int bit = smaller.nextSetBit(0); bit >= 0; bit = smaller.nextSetBit(bit + 1)) {
+            if (!own.get(bit)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Subsuming mutants: the subsuming groups of killed mutants, and every undetected mutant. */

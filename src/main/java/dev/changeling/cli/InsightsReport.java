@@ -14,6 +14,7 @@ import dev.changeling.results.RunResults;
 import dev.changeling.review.export.Summary;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
+import java.util.BitSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -91,10 +92,14 @@ final class InsightsReport {
         out.println("  redundant, every kill also made by another test (one at a time: two may share a kill): "
                 + kills.redundant().size());
         list(out, kills.redundant(), row -> "    " + matrix.name(row.test()));
-        long reachNothing = kills.killingNothing().stream().filter(row -> reachesNothing(matrix, row.test())).count();
+        BitSet reached = new BitSet();
+        for (int mutant = 0; mutant < matrix.mutants().size(); mutant++) {
+            reached.or(matrix.reachOf(mutant));
+        }
+        long reachNothing = kills.killingNothing().stream().filter(row -> !reached.get(row.test())).count();
         out.println("  kill nothing: " + kills.killingNothing().size() + " (" + reachNothing + " of them reach no mutant)");
         list(out, kills.killingNothing(), row -> "    " + matrix.name(row.test())
-                + (reachesNothing(matrix, row.test()) ? "  (reaches no mutant)" : ""));
+                + (reached.get(row.test()) ? "" : "  (reaches no mutant)"));
     }
 
     private void subset(PrintWriter out, KillMatrix matrix) {
@@ -155,15 +160,6 @@ final class InsightsReport {
     private void heading(PrintWriter out, String text) {
         out.println();
         out.println(style.bold(text));
-    }
-
-    private static boolean reachesNothing(KillMatrix matrix, int test) {
-        for (int mutant = 0; mutant < matrix.mutants().size(); mutant++) {
-            if (matrix.reachOf(mutant).get(test)) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private static String names(KillMatrix matrix, List<Integer> tests) {

@@ -76,5 +76,8 @@ class KillMatrixTest {
 
         assertEquals(1_000, matrix.killed().cardinality());
         assertEquals(5, matrix.killsOf(500).cardinality());
+        assertEquals(1_000, GreedyCover.of(matrix).picks().stream().mapToInt(GreedyCover.Pick::added).sum());
+        // Mutant i is killed by tests i to i + 4: no set is inside another, so every mutant subsumes.
+        assertEquals(1_000, Subsumption.of(matrix).subsumingMutants());
     }
 }
