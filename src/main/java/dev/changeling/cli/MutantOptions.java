@@ -1,6 +1,7 @@
 package dev.changeling.cli;
 
 import dev.changeling.mutant.LineBudget;
+import dev.changeling.mutant.MixedSample;
 import dev.changeling.mutant.SelectionInput;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,6 +38,12 @@ final class MutantOptions {
             description = "Pick as many mutants as give a score within ±E at 95%% (Cochran), e.g. 0.05.")
     Double margin;
 
+    @Option(names = "--mix", paramLabel = MixedSample.FORM,
+            description = "Pick FIRST first-order mutants and HIGHER mutants of order ORDER (2 to 5) at random (seeded), and"
+                    + " add every first-order part of each of the latter, so a combined fault can be compared with its parts;"
+                    + " the parts come on top of FIRST. Instead of --orders and --sample.")
+    String mix;
+
     @Option(names = "--mutate-diagnostics",
             description = "Also mutate code whose only effect is diagnostics: calls on a logger, assert statements, bodies of"
                     + " toString(). Left alone by default, and counted as not made.")
@@ -50,6 +57,6 @@ final class MutantOptions {
 
     /** What was typed; the core checks it and makes the selection ({@link SelectionInput#resolve()}). */
     SelectionInput input() {
-        return new SelectionInput(operators, orders, combineWithin, seed, fileGlobs, sample, margin, mutateDiagnostics, perLine);
+        return new SelectionInput(operators, orders, combineWithin, seed, fileGlobs, sample, margin, mutateDiagnostics, perLine, mix);
     }
 }

@@ -66,6 +66,7 @@ final class MutantsCommand extends ProjectCommand {
                     + Suppressions.RELATIVE_PATH + " decide which");
         }
         selection.budgetNote(chosen).ifPresent(out::println);
+        selection.mixNote(chosen).ifPresent(out::println);
         out.println(chosen.mutants().size() + " mutants"
                 + scope.map(changed -> " (" + changed.description() + ")").orElse("")
                 + (chosen.sampled() ? " (a sample of " + chosen.population() + ")" : "")

@@ -68,6 +68,11 @@ final class RunCommand implements Callable<Integer> {
                     + " finish (a check of the deadlines; the verdicts stay as they were).")
     boolean recheckTimeouts;
 
+    @Option(names = "--every-test",
+            description = "Run every test that reaches a mutant, not stopping at the first that fails, and record each failing"
+                    + " one (the full kill matrix, in results.json); the verdicts stay the same.")
+    boolean everyTest;
+
     @Option(names = "--time-extra", paramLabel = "MS",
             description = "... plus this many milliseconds (" + Deadlines.FIRST_RUN_EXTRA_MILLIS + " more when the worker first meets a test class), before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
     long timeExtraMillis = Deadlines.DEFAULT.constantMillis();
@@ -109,8 +114,8 @@ final class RunCommand implements Callable<Integer> {
     public Integer call() {
         Gate gate = new Gate(false, minScore);
         RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
-                workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts)
-                .resolve();
+                workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts,
+                everyTest).resolve();
         ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();

@@ -7,7 +7,7 @@ import java.util.List;
  *
  * @param key      the job's key, as given
  * @param outcome  what the run came to
- * @param testId   the test that failed (killed), or that was running at the deadline (timed out) or
+ * @param testId   the first test that failed (killed), or the test that was running at the deadline (timed out) or
  *                 when the worker died (crashed); null when it survived
  * @param message  the failure's short message, or what happened to the worker; null when it survived, unless its
  *                 first worker died and the verdict comes from a second run in a fresh one ({@link CrashCheck})
@@ -19,5 +19,36 @@ public record JobResult(String key, Outcome outcome, String testId, String messa
 
     public JobResult {
         testsRun = List.copyOf(testsRun);
+    }
+
+    /**
+     * The tests that failed, in the order they ran: the one killer of a run that stopped at the first failure; with
+     * every test run, all of them, those that failed before a timeout or a crash included (a test stopped at its
+     * deadline is not among them).
+     */
+    /**
+     * With every test run, a mutant can fail a test and then time out or crash in a later one; a run that stopped at the
+     * first failure would never have reached the later test, so the failure decides: killed by it, the detail saying
+     * how the run then ended. Any other result stays as it is.
+     */
+    JobResult decidedByAnEarlierFailure() {
+        if (outcome != Outcome.TIMED_OUT && outcome != Outcome.CRASHED) {
+            return this;
+        }
+        return testsRun.stream()
+                .filter(test -> test.status() == TestStatus.FAILED)
+                .findFirst()
+                .map(first -> new JobResult(key, Outcome.KILLED, first.testId(), first.message()
+                        + "; a later test then ended the run: " + message, testsRun, nanos))
+                .orElse(this);
+    }
+
+    /** The test stopped in place at its step's deadline, or null when none was. */
+    String stoppedTest() {
+        return testsRun.stream().filter(test -> test.status() == TestStatus.STOPPED).map(TestRun::testId).findFirst().orElse(null);
+    }
+
+    public List<String> failedTests() {
+        return testsRun.stream().filter(test -> test.status() == TestStatus.FAILED).map(TestRun::testId).toList();
     }
 }

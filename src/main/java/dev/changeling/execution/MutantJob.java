@@ -6,7 +6,8 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * One mutant to run: switch on its points, run its tests in the given order, stop at the first failure.
+ * One mutant to run: switch on its points, run its tests in the given order, stop at the first failure (or, for the
+ * full kill matrix, run every one).
  * The worker runs the tests in steps (one request each); every step has its own deadline, from the
  * baseline times of the tests in it, so a mutant that loops in its first test is stopped after that
  * test's allowance, not after the allowance of every test that could have run.
@@ -18,8 +19,11 @@ import java.util.Objects;
  * @param deadlines    how a step's deadline follows from the baseline times of its tests
  * @param aloneClasses for a mutant compiled on its own: the folder of its classes, put first on the
  *                     classpath of a fresh worker used for this job only; null for schema mutants
+ * @param everyTest    whether every test runs, whatever fails before it; otherwise the run stops after the step
+ *                     (the group of tests run in one request) in which a test first fails
  */
-public record MutantJob(String key, int[] points, List<String> tests, long[] testNanos, Deadlines deadlines, Path aloneClasses) {
+public record MutantJob(String key, int[] points, List<String> tests, long[] testNanos, Deadlines deadlines, Path aloneClasses,
+                        boolean everyTest) {
 
     public MutantJob {
         Objects.requireNonNull(key, "key");
@@ -30,6 +34,11 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
         if (testNanos.length != tests.size()) {
             throw new IllegalArgumentException(key + " has " + tests.size() + " tests but " + testNanos.length + " baseline times");
         }
+    }
+
+    /** A job that stops at the first failure. */
+    public MutantJob(String key, int[] points, List<String> tests, long[] testNanos, Deadlines deadlines, Path aloneClasses) {
+        this(key, points, tests, testNanos, deadlines, aloneClasses, false);
     }
 
     /** A mutant of the schema classes: it runs in a shared worker with its points switched on. */
@@ -54,7 +63,12 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
 
     /** The same job under other deadlines. */
     public MutantJob withDeadlines(Deadlines other) {
-        return new MutantJob(key, points, tests, testNanos, other, aloneClasses);
+        return new MutantJob(key, points, tests, testNanos, other, aloneClasses, everyTest);
+    }
+
+    /** The same job running every one of its tests, not stopping at the first failure. */
+    public MutantJob runningEveryTest() {
+        return new MutantJob(key, points, tests, testNanos, deadlines, aloneClasses, true);
     }
 
     /** The deadline for the step that runs {@code count} tests from index {@code from} on. */
@@ -80,18 +94,18 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
     public boolean equals(Object other) {
         return other instanceof MutantJob job && key.equals(job.key) && Arrays.equals(points, job.points)
                 && tests.equals(job.tests) && Arrays.equals(testNanos, job.testNanos) && deadlines.equals(job.deadlines)
-                && Objects.equals(aloneClasses, job.aloneClasses);
+                && Objects.equals(aloneClasses, job.aloneClasses) && everyTest == job.everyTest;
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(key, Arrays.hashCode(points), tests, Arrays.hashCode(testNanos), deadlines, aloneClasses);
+        return Objects.hash(key, Arrays.hashCode(points), tests, Arrays.hashCode(testNanos), deadlines, aloneClasses, everyTest);
     }
 
     @Override
     public String toString() {
         return "MutantJob[" + key + ", points " + Arrays.toString(points) + ", " + tests.size() + " tests, "
-                + deadlines + (aloneClasses == null ? "" : ", alone in " + aloneClasses) + "]";
+                + deadlines + (aloneClasses == null ? "" : ", alone in " + aloneClasses) + (everyTest ? ", every test" : "") + "]";
     }
 
     private static Deadlines flat(long stepMillis) {

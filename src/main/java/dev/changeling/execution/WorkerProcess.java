@@ -263,6 +263,7 @@ final class WorkerProcess {
             out.writeByte(Wire.RUN);
             Wire.writeInts(out, job.points());
             Wire.writeStrings(out, job.tests());
+            out.writeByte(job.everyTest() ? 1 : 0);
             out.flush();
             while (true) {
                 byte code;
@@ -297,17 +298,20 @@ final class WorkerProcess {
             end();
             return new JobResult(job.key(), Outcome.TIMED_OUT, running(job, runs),
                     "no answer within " + allowed + " ms" + (stopSent ? ", nor " + STOP_GRACE_MILLIS + " ms after the stop;"
-                            + " the worker was ended" : ""), runs, System.nanoTime() - start);
+                            + " the worker was ended" : ""), runs, System.nanoTime() - start).decidedByAnEarlierFailure();
         } catch (IOException e) {
             Lost lost = died(mark);
-            return new JobResult(job.key(), Outcome.CRASHED, running(job, runs), lost.getMessage(), runs, System.nanoTime() - start);
+            return new JobResult(job.key(), Outcome.CRASHED, running(job, runs), lost.getMessage(), runs, System.nanoTime() - start)
+                    .decidedByAnEarlierFailure();
         }
         long nanos = System.nanoTime() - start;
         for (TestRun test : runs) {
             if (test.status() == TestStatus.STOPPED) {
                 return new JobResult(job.key(), Outcome.TIMED_OUT, test.testId(),
-                        "no answer within " + allowed + " ms; stopped in place", runs, nanos);
+                        "no answer within " + allowed + " ms; stopped in place", runs, nanos).decidedByAnEarlierFailure();
             }
+        }
+        for (TestRun test : runs) {
             if (test.status() == TestStatus.FAILED) {
                 return new JobResult(job.key(), Outcome.KILLED, test.testId(), test.message(), runs, nanos);
             }

@@ -76,8 +76,8 @@ final class WorkerSlot {
         JobResult result;
         try {
             result = runInWorker(job);
-            if (result.outcome() == Outcome.KILLED && !passesUnmutated(job.key(), result.testId())) {
-                // The killing test fails without the mutant too: an earlier mutant's tests left this worker's
+            if (!failuresPassUnmutated(job.key(), result)) {
+                // A killing test fails without the mutant too: an earlier mutant's tests left this worker's
                 // static state broken (a test class's shared fixture, say). Only a fresh worker gives the verdict.
                 retire();
                 pool.throwIfStopped();
@@ -94,12 +94,15 @@ final class WorkerSlot {
             throw e;
         }
         mutantsOnWorker++;
-        if (result.outcome() == Outcome.TIMED_OUT && worker != null && worker.alive()) {
-            if (!classPassesUnmutated(job.key(), result.testId())) {
+        // A kill can come from a worker that is gone: every test was run, and a later one ran past its deadline or
+        // crashed the worker.
+        boolean workerGone = worker == null || !worker.alive();
+        if (workerGone || result.outcome() == Outcome.CRASHED || exhaustedMemory(result)) {
+            retire();
+        } else if (result.stoppedTest() != null) {
+            if (!classPassesUnmutated(job.key(), result.stoppedTest())) {
                 retire();
             }
-        } else if (result.outcome() == Outcome.TIMED_OUT || result.outcome() == Outcome.CRASHED || exhaustedMemory(result)) {
-            retire();
         } else if (mutantsOnWorker >= settings.mutantsPerWorker()) {
             worker.close();
             retire();
@@ -122,16 +125,20 @@ final class WorkerSlot {
     }
 
     /**
-     * Runs the test that killed a mutant once more with no mutant switched on. Under Maven every test
-     * class starts from fresh static state; in a worker it carries whatever the tests of earlier mutants
-     * left, so a kill counts only if the same test still passes on the unmutated code. A test that does not
-     * come back leaves the worker gone, which also means "not passing".
+     * Runs the tests that failed with a mutant once more, with no mutant switched on, in one job that stops at the
+     * first of them that fails: one such test is enough to distrust the worker. Under Maven every test class starts
+     * from fresh static state; in a worker it carries whatever the tests of earlier mutants left, so a kill counts
+     * only if its tests still pass on the unmutated code. With every test run this covers each killer recorded, at
+     * the cost of one request per doubling step rather than one per killer. A worker that is gone (a later test ran
+     * past its deadline or crashed it) cannot vouch for its killers, and a test that does not come back leaves the
+     * worker gone: both mean "not passing".
      */
-    private boolean passesUnmutated(String key, String testId) {
-        if (testId == null || worker == null) {
+    private boolean failuresPassUnmutated(String key, JobResult result) {
+        List<String> failed = result.failedTests();
+        if (failed.isEmpty() || worker == null) {
             return true;
         }
-        return runUnmutated(key, testId).outcome() == Outcome.SURVIVED;
+        return worker.alive() && runUnmutated(key, failed).outcome() == Outcome.SURVIVED;
     }
 
     /**
@@ -141,12 +148,12 @@ final class WorkerSlot {
      */
     private boolean classPassesUnmutated(String key, String stoppedTest) {
         String testClass = stoppedTest == null ? null : UniqueIds.outermostContainer(stoppedTest);
-        return testClass != null && runUnmutated(key, testClass).outcome() == Outcome.SURVIVED;
+        return testClass != null && runUnmutated(key, List.of(testClass)).outcome() == Outcome.SURVIVED;
     }
 
-    /** Runs one test in the current worker with no point switched on, under the start timeout. */
-    private JobResult runUnmutated(String key, String testId) {
-        return worker.run(MutantJob.schema(key, new int[0], List.of(testId), settings.startTimeout().toMillis()));
+    /** Runs tests in the current worker with no point switched on, each step under the start timeout, up to the first failure. */
+    private JobResult runUnmutated(String key, List<String> tests) {
+        return worker.run(MutantJob.schema(key, new int[0], tests, settings.startTimeout().toMillis()));
     }
 
     /** Asks whatever this slot has running to exit now, whatever it does (Ctrl-C); {@link #awaitStop} follows. */
@@ -221,7 +228,7 @@ final class WorkerSlot {
         if (warm || job.tests().isEmpty()) {
             return;
         }
-        JobResult warming = runUnmutated(job.key(), job.tests().get(0));
+        JobResult warming = runUnmutated(job.key(), List.of(job.tests().get(0)));
         if (warming.outcome() == Outcome.TIMED_OUT || warming.outcome() == Outcome.CRASHED) {
             // The unmutated tests did not come back: the mutant runs in a fresh worker as it would have without this.
             retire();

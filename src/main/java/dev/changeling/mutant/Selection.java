@@ -20,8 +20,14 @@ import java.util.Optional;
  * @param sampleSize how many to keep, or null for all
  * @param margin     alternatively, the ±margin at 95% the sample should give (Cochran), or null
  * @param sampleSeed the seed of the sample
+ * @param mix        alternatively, a sample of first-order and k-order mutants with the parts of the latter, or null
  */
-public record Selection(MutantRequest request, Integer sampleSize, Double margin, long sampleSeed) {
+public record Selection(MutantRequest request, Integer sampleSize, Double margin, long sampleSeed, MixedSample mix) {
+
+    /** A selection of every mutant the request makes. */
+    public static Selection all(MutantRequest request, long seed) {
+        return new Selection(request, null, null, seed, null);
+    }
 
     /** The chosen mutants, the population they were drawn from, and the generation they came from. */
     public record Chosen(List<Mutant> mutants, int population, boolean sampled, Generation.Generated generated) {
@@ -29,22 +35,26 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
 
     /** The same selection, leaving out the points the project's suppression rules name. */
     public Selection withSuppressions(Suppressions rules) {
-        return new Selection(request.withSuppressions(rules), sampleSize, margin, sampleSeed);
+        return new Selection(request.withSuppressions(rules), sampleSize, margin, sampleSeed, mix);
     }
 
     /** The same selection, its per-line budget ranking operators by these kill ratios (operator id to ratio). */
     public Selection rankedBy(Map<String, Double> killRatios) {
-        return new Selection(request.withBudget(request.budget().rankedBy(killRatios)), sampleSize, margin, sampleSeed);
+        return new Selection(request.withBudget(request.budget().rankedBy(killRatios)), sampleSize, margin, sampleSeed, mix);
     }
 
     /** The same selection, keeping only the points {@code filter} also keeps (e.g. those on changed lines). */
     public Selection narrowedTo(java.util.function.Predicate<Point> filter) {
-        return new Selection(request.narrowedTo(filter), sampleSize, margin, sampleSeed);
+        return new Selection(request.narrowedTo(filter), sampleSize, margin, sampleSeed, mix);
     }
 
     public Chosen choose(ProjectLayout layout, List<Path> only) {
         Generation.Generated generated = Generation.generate(read(layout, only), request);
         List<Mutant> all = generated.mutants();
+        if (mix != null) {
+            List<Mutant> picked = mix.pick(all, sampleSeed);
+            return new Chosen(picked, all.size(), picked.size() < all.size(), generated);
+        }
         Integer size = sampleSize;
         if (size == null && margin != null) {
             size = Sampling.sizeForMargin(margin, 0.5, all.size());
@@ -61,6 +71,11 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
         return budget.limits()
                 ? Optional.of(budget.describe(chosen.generated().notMade().getOrDefault(LineBudget.REASON, 0)))
                 : Optional.empty();
+    }
+
+    /** One line on the two draws of a mixed sample and the parts added to them; none for other selections. */
+    public Optional<String> mixNote(Chosen chosen) {
+        return Optional.ofNullable(mix).map(sample -> sample.describe(chosen.mutants(), chosen.generated().mutants()));
     }
 
     private static List<SourceFile> read(ProjectLayout layout, List<Path> only) {

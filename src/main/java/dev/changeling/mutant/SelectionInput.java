@@ -14,7 +14,7 @@ import java.util.function.Predicate;
 
 /**
  * Which mutants to make, as the user typed it: operator ids, orders, where k-order mutants combine, the seed,
- * file globs, a sample size or margin, and a change's per-line budget. {@link #resolve(boolean)} checks it and makes
+ * file globs, a sample size or margin or a mixed sample, and a change's per-line budget. {@link #resolve(boolean)} checks it and makes
  * the {@link Selection}.
  *
  * @param operators     operator ids; empty for the default set
@@ -26,10 +26,11 @@ import java.util.function.Predicate;
  * @param margin        a margin for a sample sized by Cochran's formula, or null
  * @param mutateDiagnostics whether code whose only effect is diagnostics is mutated too
  * @param perLine       mutants to keep on each changed line as typed (a number, or {@code all}), or null when not given
+ * @param mix           a mixed sample as typed ({@link MixedSample#FORM}), or null when not given
  */
 public record SelectionInput(List<String> operators, List<Integer> orders, String combineWithin, long seed,
                              List<String> fileGlobs, Integer sample, Double margin, boolean mutateDiagnostics,
-                             String perLine) {
+                             String perLine, String mix) {
 
     /** What {@code --per-line} takes for every mutant of each changed line. */
     public static final String EVERY_ONE = "all";
@@ -51,6 +52,7 @@ public record SelectionInput(List<String> operators, List<Integer> orders, Strin
         if (sample != null && margin != null) {
             throw usage("--sample and --sample-for-margin both choose the sample size; give one of them");
         }
+        MixedSample mixed = mixedSample();
         List<MutationOperator> chosen;
         try {
             chosen = operators.isEmpty() ? Operators.defaults() : Operators.named(operators);
@@ -65,7 +67,7 @@ public record SelectionInput(List<String> operators, List<Integer> orders, Strin
         }
         MutantRequest request;
         try {
-            request = new MutantRequest(chosen, orders, scope, seed, filesFilter(), mutateDiagnostics);
+            request = new MutantRequest(chosen, mixed == null ? orders : mixed.orders(), scope, seed, filesFilter(), mutateDiagnostics);
         } catch (IllegalArgumentException e) {
             throw usage("--orders: " + e.getMessage());
         }
@@ -75,7 +77,25 @@ public record SelectionInput(List<String> operators, List<Integer> orders, Strin
         if (sample != null && sample < 1) {
             throw usage("--sample takes a positive number of mutants, not " + sample);
         }
-        return new Selection(request.withBudget(budget(scoped)), sample, margin, seed);
+        return new Selection(request.withBudget(budget(scoped)), sample, margin, seed, mixed);
+    }
+
+    /** The mixed sample asked for, or null; it chooses the orders and the sample itself, so it takes no other option that does. */
+    private MixedSample mixedSample() {
+        if (mix == null) {
+            return null;
+        }
+        if (sample != null || margin != null) {
+            throw usage("--mix chooses the sample itself; leave out --sample and --sample-for-margin");
+        }
+        if (!orders.equals(List.of(1))) {
+            throw usage("--mix makes first-order mutants and those of the order it names; leave out --orders");
+        }
+        try {
+            return MixedSample.parse(mix);
+        } catch (IllegalArgumentException e) {
+            throw usage("--mix: " + e.getMessage());
+        }
     }
 
     private LineBudget budget(boolean scoped) {

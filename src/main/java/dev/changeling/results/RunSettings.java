@@ -1,5 +1,6 @@
 package dev.changeling.results;
 
+import dev.changeling.mutant.MixedSample;
 import dev.changeling.project.ExplicitProject;
 import java.util.List;
 
@@ -27,6 +28,9 @@ import java.util.List;
  * @param mutantsPerWorker mutants a worker runs before it is replaced (0 in files written before it was kept)
  * @param mutateDiagnostics whether code whose only effect is diagnostics was mutated too
  * @param perLine     mutants kept on each changed line of a run scoped to a change; 0 when every one was made
+ * @param everyTest   whether every reaching test ran against every mutant (the full kill matrix, kept in each
+ *                    mutant's {@code killers}), not stopping at the first failure
+ * @param mix         the mixed sample of first-order and k-order mutants (with the latter's parts), or null
  */
 public record RunSettings(
         String project,
@@ -48,7 +52,9 @@ public record RunSettings(
         ExplicitProject explicitProject,
         int mutantsPerWorker,
         boolean mutateDiagnostics,
-        int perLine) {
+        int perLine,
+        boolean everyTest,
+        MixedSample mix) {
 
     public RunSettings {
         skipTests = skipTests == null ? List.of() : List.copyOf(skipTests);

@@ -35,12 +35,13 @@ import java.util.Set;
  * @param reachedBy  each job's reaching tests, by fingerprint
  * @param infectedBy each watched job's tests that saw its mutated expression differ in the baseline, by fingerprint
  * @param unreached  verdicts of the mutants no test reaches, by fingerprint
+ * @param everyTest  whether each job runs every reaching test, and each result keeps every killer
  */
 record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, List<String>> reachedBy,
-               Map<String, List<String>> infectedBy, Map<String, MutantResult> unreached) {
+               Map<String, List<String>> infectedBy, Map<String, MutantResult> unreached, boolean everyTest) {
 
     static JobPlan of(List<Mutant> runnable, BuildResult build, Baseline baseline, Deadlines deadlines,
-                      Map<String, SourceFile> files) {
+                      Map<String, SourceFile> files, boolean everyTest) {
         List<MutantJob> jobs = new ArrayList<>();
         Map<String, Mutant> mutants = new HashMap<>();
         Map<String, List<String>> reachedBy = new HashMap<>();
@@ -61,14 +62,18 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
                 // a point's infection is recorded as the reach of id pointCount + point (Probe.differs)
                 infectedBy.put(mutant.fingerprint(), baseline.testsFor(build.pointCount() + placement.activation()[0]));
             }
-            jobs.add(inSchema
+            MutantJob job = inSchema
                     ? MutantJob.schema(mutant.fingerprint(), placement.activation(), tests, deadlines, baseline)
-                    : MutantJob.alone(mutant.fingerprint(), placement.classes(), tests, deadlines, baseline));
+                    : MutantJob.alone(mutant.fingerprint(), placement.classes(), tests, deadlines, baseline);
+            jobs.add(everyTest ? job.runningEveryTest() : job);
         }
-        return new JobPlan(jobs, mutants, reachedBy, infectedBy, unreached);
+        return new JobPlan(jobs, mutants, reachedBy, infectedBy, unreached, everyTest);
     }
 
-    /** The verdict of a job the workers finished, as the results file records it. */
+    /**
+     * The verdict of a job the workers finished, as the results file records it; with every test run, its killers are
+     * every test that failed, those before a timeout or a crash included (none of a step stopped at its deadline).
+     */
     MutantResult resultOf(JobResult job, Map<String, SourceFile> files) {
         Mutant mutant = mutants.get(job.key());
         Verdict verdict = switch (job.outcome()) {
@@ -84,7 +89,7 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
         }
         return new MutantResult(base.id(), base.file(), base.order(), base.points(), verdict,
                 verdict == Verdict.SURVIVED ? null : job.testId(), job.message(), ran, reachedBy.get(job.key()),
-                job.nanos() / 1e6, base.diff(), null, infectedBy.get(job.key()));
+                job.nanos() / 1e6, base.diff(), everyTest ? job.failedTests() : null, infectedBy.get(job.key()));
     }
 
     /** A short name of a job's mutant for progress lines: its id and file. */

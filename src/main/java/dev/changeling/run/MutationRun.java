@@ -135,7 +135,7 @@ public final class MutationRun {
             results.putAll(placements.settled());
             checkNotStopped();
 
-            JobPlan plan = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files);
+            JobPlan plan = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files, request.everyTest());
             results.putAll(plan.unreached());
             results.values().forEach(listener::finished);
             listener.running(plan.jobs().size());
@@ -190,6 +190,7 @@ public final class MutationRun {
                 + " " + inFiles(chosen.mutants().stream().map(Mutant::file).toList())
                 + change.map(scope -> " (" + scope.description() + ")").orElse(""));
         selection.budgetNote(chosen).ifPresent(listener::phase);
+        selection.mixNote(chosen).ifPresent(listener::phase);
         chosen.generated().problems().forEach(problem -> listener.phase("skipped " + problem));
         return chosen;
     }

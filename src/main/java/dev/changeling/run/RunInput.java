@@ -30,11 +30,12 @@ import java.util.Optional;
  * @param skipTests        test class patterns to leave out
  * @param skipTags         JUnit tags to leave out
  * @param recheckTimeouts  whether timed-out mutants run again with ten times their deadline afterwards
+ * @param everyTest        whether every reaching test runs against every mutant (the full kill matrix)
  */
 public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, SelectionInput selection,
                        Optional<ChangeSpec> change, List<String> mavenArguments, Integer workers, double timeFactor,
                        long timeExtraMillis, String workerHeap, int mutantsPerWorker, List<String> skipTests,
-                       List<String> skipTags, boolean recheckTimeouts) {
+                       List<String> skipTags, boolean recheckTimeouts, boolean everyTest) {
 
     public RunInput {
         paths = List.copyOf(paths);
@@ -69,7 +70,7 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         ProjectLayout layout = ProjectLayout.locate(paths, explicit);
         DiscoveryOptions discovery = new DiscoveryOptions(Optional.empty(), mavenArguments, explicit);
         return new RunRequest(layout, layout.limits(paths), ProjectSelection.of(selection, change.isPresent(), layout), change, discovery, workerCount, deadlines,
-                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts);
+                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest);
     }
 
     private static UserError usage(String message) {

@@ -39,6 +39,8 @@ import java.util.function.Predicate;
  * @param skipTags         JUnit tags to leave out
  * @param recheckTimeouts  whether every timed-out mutant runs again afterwards with ten times its deadline, to
  *                         see whether the deadlines were long enough
+ * @param everyTest        whether every reaching test runs against every mutant, for the full kill matrix, rather than
+ *                         stopping at the first failure
  */
 public record RunRequest(
         ProjectLayout layout,
@@ -52,7 +54,8 @@ public record RunRequest(
         int mutantsPerWorker,
         List<String> skipTests,
         List<String> skipTags,
-        boolean recheckTimeouts) {
+        boolean recheckTimeouts,
+        boolean everyTest) {
 
     public RunRequest {
         limits = List.copyOf(limits);
@@ -70,13 +73,13 @@ public record RunRequest(
                 workers, deadlines.factor(), deadlines.constantMillis(), skipTests, skipTags, discovery.mavenArguments(),
                 workerHeap.orElse(null), discovery.mavenExecutable().map(Path::toString).orElse(null),
                 discovery.explicitProject().orElse(null), mutantsPerWorker, mutants.mutateDiagnostics(),
-                mutants.budget().perLine());
+                mutants.budget().perLine(), everyTest, selection.mix());
     }
 
     /**
      * The request an earlier run was made with, for the points {@code only} picks of one order, in one worker:
-     * the same project found the same way, the same operators, deadlines, heap, tests and per-line budget (the points
-     * picked were kept under it, so it keeps them all again, whatever ranks them now).
+     * the same project found the same way, the same operators, deadlines, heap, tests, per-line budget (the points
+     * picked were kept under it, so it keeps them all again, whatever ranks them now) and kill matrix or not.
      *
      * @throws UserError when the recorded settings no longer make sense (an operator that is gone)
      */
@@ -93,9 +96,9 @@ public record RunRequest(
         DiscoveryOptions discovery = new DiscoveryOptions(Optional.ofNullable(recorded.mavenExecutable()).map(Path::of),
                 recorded.mavenArguments(), Optional.ofNullable(recorded.explicitProject()));
         return new RunRequest(ProjectLayout.locate(projectRoot, discovery.explicitProject()), List.of(),
-                new Selection(request, null, null, recorded.seed()), Optional.empty(), discovery, 1,
+                Selection.all(request, recorded.seed()), Optional.empty(), discovery, 1,
                 new Deadlines(recorded.timeFactor(), recorded.timeExtraMillis()), Optional.ofNullable(recorded.workerHeap()),
                 recorded.mutantsPerWorker() > 0 ? recorded.mutantsPerWorker() : WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
-                recorded.skipTests(), recorded.skipTags(), false);
+                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest());
     }
 }

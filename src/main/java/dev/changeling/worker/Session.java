@@ -79,12 +79,14 @@ final class Session {
     private void run() throws IOException {
         int[] points = Wire.readInts(in);
         List<String> tests = Wire.readStrings(in);
+        boolean everyTest = in.readByte() != 0;
         Suite current = requireSuite();
         Probe.activate(points);
         try {
             // Tests run in chunks of doubling size, fastest first: the first alone (the likeliest to kill;
             // most mutants stop there), then 2, 4, 8, ... together in one request each. A kill stops the
-            // run after its chunk, and a survivor pays for a handful of discoveries, not one per test.
+            // run after its chunk, unless every test is to run, and a survivor pays for a handful of
+            // discoveries, not one per test.
             int at = 0;
             for (int size = 1; at < tests.size(); size *= 2) {
                 List<String> chunk = tests.subList(at, Math.min(tests.size(), at + size));
@@ -99,11 +101,7 @@ final class Session {
                     reportStopped(chunk, results);
                     break;
                 }
-                boolean passed = true;
-                for (int i = 0; i < chunk.size() && passed; i++) {
-                    passed = report(chunk.get(i), results.get(i));
-                }
-                if (!passed) {
+                if (!reportChunk(chunk, results, everyTest)) {
                     break;
                 }
                 at += chunk.size();
@@ -112,6 +110,18 @@ final class Session {
             Probe.activate();
         }
         out.writeByte(Wire.RUN_DONE);
+    }
+
+    /**
+     * Sends the outcomes of a chunk that ran to its end: all of them when every test is to run, else those up to the
+     * first failure. False when a test failed and the run stops there.
+     */
+    private boolean reportChunk(List<String> chunk, List<SingleTestRun.Result> results, boolean everyTest) throws IOException {
+        boolean passed = true;
+        for (int i = 0; i < chunk.size() && (passed || everyTest); i++) {
+            passed &= report(chunk.get(i), results.get(i));
+        }
+        return passed || everyTest;
     }
 
     /**
@@ -129,7 +139,7 @@ final class Session {
         report(chunk.get(stopped), new SingleTestRun.Result(Wire.STOPPED, result.nanos(), result.message()));
     }
 
-    /** Sends one test's outcome; false when it failed, which ends the mutant's run. */
+    /** Sends one test's outcome; false when it failed (or was stopped). */
     private boolean report(String test, SingleTestRun.Result result) throws IOException {
         out.writeByte(Wire.TEST_DONE);
         Wire.writeString(out, test);

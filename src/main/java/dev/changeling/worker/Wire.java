@@ -24,7 +24,7 @@ import java.util.List;
  *                            BASELINE_DONE n:int {id name className:str status:byte nanos aloneNanos:long message:str reached:ints}*n
  *                                          m:int {id name message:str}*m   (failed containers)
  *                                          excludedTagsThatLeftOutTests:strs
- * tool -> worker  RUN        points:ints tests:strs
+ * tool -> worker  RUN        points:ints tests:strs everyTest:byte (1: go on after a failing test; 0: stop after its step)
  *                   reply    STEP count:int (before each group of tests run in one request: the next count tests)
  *                            TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE
  *                            (status STOPPED: the step was stopped at its deadline; it is the last test reported)
@@ -37,7 +37,7 @@ import java.util.List;
  */
 public final class Wire {
 
-    public static final int VERSION = 6;
+    public static final int VERSION = 7;
     private static final int MAX_SIZE = 1 << 26;
 
     public static final byte HELLO = 1;

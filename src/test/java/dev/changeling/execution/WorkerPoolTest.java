@@ -371,6 +371,96 @@ class WorkerPoolTest {
         }
     }
 
+    /** With every test run, each failing test is recorded, and the check on unmutated code covers each of them. */
+    @Nested
+    class EveryTest {
+
+        @Test
+        void recordsEveryFailingTest_andKeepsTheFirstAsTheKiller() {
+            try (WorkerPool pool = WorkerPool.open(settings("every"), setup())) {
+                List<String> tests = List.of(method("PricesTest", "multipliesTwos"), method("PricesTest", "multiplies"),
+                        method("PricesTest", "multipliesByOne"));
+                List<JobResult> results = pool.run(List.of(job("first", 1, tests.toArray(String[]::new)),
+                        job("every", 1, tests.toArray(String[]::new)).runningEveryTest()), result -> { });
+                JobResult first = results.get(0);
+                JobResult every = results.get(1);
+                assertEquals(List.of(method("PricesTest", "multiplies")), first.failedTests());
+                assertEquals(2, first.testsRun().size(), "without it the run stops at the first failure");
+                assertEquals(Outcome.KILLED, every.outcome());
+                assertEquals(method("PricesTest", "multiplies"), every.testId());
+                assertEquals(List.of(method("PricesTest", "multiplies"), method("PricesTest", "multipliesByOne")), every.failedTests());
+                assertEquals(List.of(TestStatus.PASSED, TestStatus.FAILED, TestStatus.FAILED),
+                        every.testsRun().stream().map(TestRun::status).toList());
+            }
+        }
+
+        @Test
+        void survivesAsBefore_withEveryTestRunAndNoneFailing() {
+            try (WorkerPool pool = WorkerPool.open(settings("every-survives"), setup())) {
+                JobResult result = pool.run(List.of(job("passes", 0, method("PricesTest", "addsZero"),
+                        method("PricesTest", "multiplies")).runningEveryTest()), done -> { }).get(0);
+                assertEquals(Outcome.SURVIVED, result.outcome());
+                assertEquals(List.of(), result.failedTests());
+                assertEquals(2, result.testsRun().size());
+            }
+        }
+
+        /**
+         * The first mutant leaves the shared sheet dirty in its worker. The second fails one test by its own doing and
+         * one by the dirty sheet; the check of its first killer alone would pass, so each killer is checked, and the
+         * mutant runs again in a fresh worker, where only its own failure is left.
+         */
+        @Test
+        void aSecondKillerThatAlsoFailsUnmutated_sendsTheMutantToAFreshWorker() {
+            try (WorkerPool pool = WorkerPool.open(settings("every-leftover"), setup())) {
+                List<JobResult> results = pool.run(List.of(
+                        job("dirties", 11, method("SharedSheetTest", "writesOneMark")),
+                        job("innocent", 0, method("PricesTest", "addsTwoNumbers"),
+                                method("SharedSheetTest", "findsTheSheetClean")).runningEveryTest()), result -> { });
+                JobResult innocent = results.get(1);
+                assertEquals(Outcome.KILLED, innocent.outcome(), results::toString);
+                assertEquals(List.of(method("PricesTest", "addsTwoNumbers")), innocent.failedTests(), innocent::toString);
+                assertEquals(List.of(TestStatus.FAILED, TestStatus.PASSED), innocent.testsRun().stream().map(TestRun::status).toList());
+            }
+        }
+
+        /**
+         * The loop is stopped in place at its step's deadline. A run that stops at the first failure never reaches the
+         * loop, so the failure before it decides: killed, as without every test, the detail saying how the run ended.
+         */
+        @Test
+        void aFailureBeforeALoop_killsTheMutantAsWithoutEveryTest_andTheLoopIsStillStoppedInPlace() {
+            try (WorkerPool pool = WorkerPool.open(settings("every-timeout"), setup())) {
+                JobResult result = pool.run(List.of(MutantJob.schema("fails-then-loops", new int[] {0, 2},
+                        List.of(method("PricesTest", "addsTwoNumbers"), method("HostileTest", "countsToThree")), 1_000)
+                        .runningEveryTest()), done -> { }).get(0);
+                assertEquals(Outcome.KILLED, result.outcome(), result::toString);
+                assertEquals(method("PricesTest", "addsTwoNumbers"), result.testId());
+                assertTrue(result.message().endsWith("; a later test then ended the run: no answer within 3000 ms; stopped in place"),
+                        result.message());
+                assertEquals(List.of(method("PricesTest", "addsTwoNumbers")), result.failedTests());
+                assertEquals(List.of(TestStatus.FAILED, TestStatus.STOPPED), result.testsRun().stream().map(TestRun::status).toList());
+                assertEquals(1, pool.workersStarted(), "the killer passes unmutated and the stopped class too: the worker goes on");
+            }
+        }
+
+        /** The exit comes after the failure; a run that stops at the first failure would not have reached it. */
+        @Test
+        void aFailureBeforeACrash_killsTheMutant_andTheDeadWorkerIsReplaced() {
+            try (WorkerPool pool = WorkerPool.open(settings("every-crash"), setup())) {
+                List<JobResult> results = pool.run(List.of(MutantJob.schema("fails-then-exits", new int[] {0, 3},
+                        List.of(method("PricesTest", "addsTwoNumbers"), method("HostileTest", "checksOut")), GENEROUS)
+                        .runningEveryTest(), job("after", 0, method("PricesTest", "addsZero"))), done -> { });
+                JobResult crashed = results.get(0);
+                assertEquals(Outcome.KILLED, crashed.outcome(), crashed::toString);
+                assertEquals(List.of(method("PricesTest", "addsTwoNumbers")), crashed.failedTests());
+                assertTrue(crashed.message().contains("; a later test then ended the run: the worker JVM exited with code 7"),
+                        crashed.message());
+                assertEquals(Outcome.SURVIVED, results.get(1).outcome(), "the next mutant runs in a live worker");
+            }
+        }
+    }
+
     @Nested
     class ColdStart {
 

@@ -46,7 +46,8 @@ class KillHistoryTest {
     void onlyACompleteRunOfTheWholeProject_unsampled_leavesOne() {
         RunResults full = fullRun(MUTANTS);
         RunSettings scoped = new RunSettings("/tmp/shop", List.of("relational-subset"), List.of(1), "method", 1L, false,
-                7, "uncommitted changes", 1, 2.0, 1000L, List.of(), List.of(), List.of(), null, null, null, 500, false, 1);
+                7, "uncommitted changes", 1, 2.0, 1000L, List.of(), List.of(), List.of(), null, null, null, 500, false, 1,
+                false, null);
         RunResults ofAChange = new RunResults(RunResults.FORMAT, true, scoped, List.of(), Map.of(), MUTANTS, List.of(), Map.of());
         RunResults partial = new RunResults(RunResults.FORMAT, false, full.settings(), List.of(), Map.of(), MUTANTS, List.of(),
                 Map.of());

@@ -67,7 +67,8 @@ public final class ResultsForTests {
     /** A complete run over these results. */
     public static RunResults run(List<MutantResult> mutants, boolean sampled, int population) {
         RunSettings settings = new RunSettings("/tmp/shop", List.of("relational-subset"), List.of(1), "method", 1L,
-                sampled, population, null, 1, 2.0, 1000L, List.of(), List.of(), List.of(), "2g", null, null, 500, false, 0);
+                sampled, population, null, 1, 2.0, 1000L, List.of(), List.of(), List.of(), "2g", null, null, 500, false, 0,
+                false, null);
         return new RunResults(RunResults.FORMAT, true, settings, List.of(), Map.of(), mutants, List.of(), Map.of());
     }
 }

@@ -44,7 +44,8 @@ public final class RunFixtures {
 
     public static RunSettings settings(boolean sampled, String changeScope) {
         return new RunSettings("/project", FIXTURE_OPERATORS.stream().map(MutationOperator::id).toList(), List.of(1),
-                "method", 1L, sampled, 0, changeScope, 1, 2.0, 1000L, List.of(), List.of(), List.of(), "2g", null, null, 500, false, 0);
+                "method", 1L, sampled, 0, changeScope, 1, 2.0, 1000L, List.of(), List.of(), List.of(), "2g", null, null, 500, false, 0,
+                false, null);
     }
 
     public static MutantResult result(Mutant mutant, String fileText) {

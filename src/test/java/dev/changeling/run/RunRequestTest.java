@@ -1,6 +1,7 @@
 package dev.changeling.run;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.changeling.execution.Deadlines;
 import dev.changeling.mutant.HigherOrder;
@@ -40,10 +41,10 @@ class RunRequestTest {
                 .withMavenExecutable(folder.resolve("bin/mvn")).withExplicitProject(given);
         Selection selection = new Selection(new MutantRequest(Operators.named(List.of("relational-subset")), List.of(1),
                 HigherOrder.Scope.METHOD, 7, point -> true).withBudget(new LineBudget(2, Map.of("relational-subset", 0.5))),
-                null, null, 7);
+                null, null, 7, null);
         RunRequest first = new RunRequest(ProjectLayout.locate(folder, Optional.of(given)), List.of(), selection,
                 Optional.empty(), discovery, 2, new Deadlines(2.5, 400), Optional.of("768m"), 40, List.of("*IT"),
-                List.of("slow"), false);
+                List.of("slow"), false, true);
 
         RunSettings settings = first.settings(new Selection.Chosen(List.of(), 0, false, null), Optional.empty());
         Path file = folder.resolve("results.json");
@@ -61,5 +62,6 @@ class RunRequestTest {
         assertEquals(List.of("relational-subset"), again.selection().request().operators().stream().map(o -> o.id()).toList());
         assertEquals(1, again.workers(), "one mutant needs one worker");
         assertEquals(2, again.selection().request().budget().perLine(), "the per-line budget the run was made with");
+        assertTrue(again.everyTest(), "a run that built the full kill matrix runs the mutant again the same way");
     }
 }
