@@ -25,7 +25,9 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The greenhouse sample run twice on copies with one mixed sample of first-order and second-order mutants: once
  * stopping each mutant at its first failure, once with {@code --every-test}. The matrix must leave every verdict as
- * it was, and the sample must hold every part of each second-order mutant.
+ * it was, and the sample must hold every part of each second-order mutant. Greenhouse has nothing a mutant can make
+ * loop ({@code GreenhouseRunTest}), so the order of a mutant's tests, which follows each run's own baseline times, cannot
+ * move a verdict between killed and timed out here.
  */
 @Tag("e2e")
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
@@ -71,14 +73,17 @@ class KillMatrixRunTest {
     }
 
     @Test
-    void theMatrixLeavesEveryVerdictAsItWas() {
+    void theMatrixLeavesEveryVerdictAsItWas_andHoldsEveryKillerTheOtherRunFound() {
         Map<String, MutantResult> before = byId(firstFailure.results().mutants());
         Set<Verdict> seen = everyTest.results().mutants().stream().map(MutantResult::verdict).collect(Collectors.toSet());
         assertTrue(seen.containsAll(Set.of(Verdict.KILLED, Verdict.SURVIVED)), seen::toString);
         for (MutantResult after : everyTest.results().mutants()) {
             MutantResult was = before.get(after.id());
             assertEquals(was.verdict(), after.verdict(), () -> after.shortId() + "\n" + after.diff());
-            assertEquals(was.killedBy(), after.killedBy(), () -> after.shortId() + ": the first failing test in run order");
+            if (was.verdict() == Verdict.KILLED) {
+                // Each run orders the tests by its own baseline times, so the first to fail may differ; it is a killer either way.
+                assertTrue(after.killers().contains(was.killedBy()), () -> after.shortId() + ": " + was.killedBy() + " not among " + after.killers());
+            }
         }
     }
 
