@@ -57,7 +57,7 @@ final class Made {
     /** A complete run with these tests in the baseline, each named after its id. */
     static RunResults run(List<String> tests, List<MutantResult> mutants) {
         RunSettings settings = new RunSettings("/tmp/shop", List.of("relational-subset"), List.of(1, 2), "method", 1L,
-                false, mutants.size(), null, 1, 2.0, 1000L, List.of(), List.of(), List.of(), "2g", null, null, 500, false, 0);
+                false, mutants.size(), null, 1, 2.0, 1000L, List.of(), List.of(), List.of(), "2g", null, null, 500, false, 0, false, null);
         return new RunResults(RunResults.FORMAT, true, settings,
                 tests.stream().map(test -> new TestRecord(test, "name of " + test, 1.0)).toList(), Map.of(), mutants,
                 List.of(), Map.of());

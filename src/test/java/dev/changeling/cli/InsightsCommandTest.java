@@ -68,7 +68,7 @@ class InsightsCommandTest {
                 pair("h1ffffff", "f1aaaaaa", "f2bbbbbb", List.of("wets"), fullMatrix),
                 pair("h2999999", "f1aaaaaa", "f3cccccc", List.of(), fullMatrix)));
         RunSettings settings = new RunSettings(project.toString(), List.of("relational-subset"), List.of(1, 2), "method", 1L,
-                false, mutants.size(), changeScope, 1, 2.0, 300L, List.of(), List.of(), List.of(), null, null, null, 500, false, 0);
+                false, mutants.size(), changeScope, 1, 2.0, 300L, List.of(), List.of(), List.of(), null, null, null, 500, false, 0, false, null);
         List<TestRecord> tests = TESTS.stream().map(id -> new TestRecord(id, "SprinklerTest › " + id + "()", 2.0)).toList();
         ResultsFile.write(ProjectLayout.of(project).resultsFile(),
                 new RunResults(RunResults.FORMAT, true, settings, tests, Map.of(), mutants, List.of(), Map.of()));

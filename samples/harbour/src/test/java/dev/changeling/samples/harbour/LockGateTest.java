@@ -36,4 +36,9 @@ class LockGateTest {
     void countsEveryBoat() {
         assertEquals(7, gate.boatsPassed(new int[] {3, 4}));
     }
+
+    @Test
+    void countsASingleRound() {
+        assertEquals(5, gate.boatsPassed(new int[] {5}));
+    }
 }
