@@ -10,6 +10,7 @@ import dev.changeling.results.RunResults;
 import dev.changeling.review.Gate;
 import dev.changeling.review.Settled;
 import dev.changeling.review.Standing;
+import dev.changeling.review.export.HtmlReport;
 import dev.changeling.review.export.MarkdownReport;
 import dev.changeling.review.export.PatchFolder;
 import dev.changeling.review.export.SarifReport;
@@ -26,7 +27,7 @@ import picocli.CommandLine.Option;
 @Command(name = "export", mixinStandardHelpOptions = true,
         description = {
             "Write the survivors of the last run as attachments for the review: Markdown for a comment,"
-                    + " SARIF 2.1.0 for code-scanning tools, one patch per survivor. Reads the results file"
+                    + " SARIF 2.1.0 for code-scanning tools, one patch per survivor, a self-contained HTML page with pictures. Reads the results file"
                     + " (results.json in the build folder's changeling/, target/changeling/ by default); nothing is compiled or run.",
             "A survivor stays unresolved until triage settles it: marked equivalent, or marked fixed.",
             "As a CI gate, --fail-on-survivors and --min-score turn what is left into an exit code;"
@@ -40,7 +41,7 @@ import picocli.CommandLine.Option;
             "4:Unresolved survivors remain and --fail-on-survivors was given."},
         footerHeading = "%nExample:%n",
         footer = "  changeling export --markdown target/changeling/review.md --sarif target/changeling/survivors.sarif"
-                + " --patches target/changeling/patches --fail-on-survivors")
+                + " --html target/changeling/report.html --patches target/changeling/patches --fail-on-survivors")
 final class ExportCommand extends ProjectCommand {
 
     @Option(names = "--markdown", paramLabel = "FILE",
@@ -54,6 +55,16 @@ final class ExportCommand extends ProjectCommand {
     @Option(names = "--sarif", paramLabel = "FILE",
             description = "Write the unresolved survivors as a SARIF 2.1.0 log, one result each.")
     Path sarif;
+
+    @Option(names = "--html", paramLabel = "FILE",
+            description = "Write one self-contained HTML page: the score, figures per file and operator, a strip per file of where"
+                    + " the survivors are, a heat map of which tests kill which operators, and each survivor with its diff.")
+    Path html;
+
+    @Option(names = "--glance",
+            description = "Also print on the terminal a strip per file of where the survivors are and a shaded table of"
+                    + " which tests kill which operators (no colours with --plain).")
+    boolean glance;
 
     @Option(names = "--patches", paramLabel = "DIR",
             description = "Write one <short id>.patch per unresolved survivor; 'git apply' takes each on an unmodified checkout."
@@ -96,6 +107,13 @@ final class ExportCommand extends ProjectCommand {
         if (sarif != null) {
             write(sarif, SarifReport.render(standing, VersionProvider.number()));
             out.println("wrote " + sarif + " (" + survivors.size() + (survivors.size() == 1 ? " result)" : " results)"));
+        }
+        if (html != null) {
+            write(html, HtmlReport.render(standing));
+            out.println("wrote " + html);
+        }
+        if (glance) {
+            Glance.print(out, standing, project.style());
         }
         if (patches != null) {
             try {

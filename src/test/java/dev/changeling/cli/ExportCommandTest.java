@@ -86,6 +86,35 @@ class ExportCommandTest {
         }
 
         @Test
+        void html_writesOneSelfContainedPage() throws IOException {
+            results(true);
+            Path html = out.resolve("review/report.html");
+
+            Ran ran = export("--html", html.toString());
+
+            assertEquals(ExitCode.OK, ran.exit(), ran.err());
+            String page = Files.readString(html);
+            assertTrue(page.startsWith("<!DOCTYPE html>"), page);
+            assertTrue(page.contains("<h2>Survivors to look at</h2>"), page);
+            assertTrue(page.contains("id=\"m-aaaaaaaa\""), page);
+            assertTrue(ran.out().contains("wrote " + html), ran.out());
+        }
+
+        @Test
+        void glance_printsTheStripsAndTheKillTable_plainUnderPlain() throws IOException {
+            results(true);
+
+            Ran ran = export("--glance", "--plain");
+
+            assertEquals(ExitCode.OK, ran.exit(), ran.err());
+            assertTrue(ran.out().contains("where the survivors are (# survivor to look at"), ran.out());
+            assertTrue(ran.out().contains("  src/main/java/shop/A.java\n    1 .........# 10   survivor at 10\n"), ran.out());
+            assertTrue(ran.out().contains("which tests kill which operators"), ran.out());
+            assertTrue(ran.out().contains("  A relational-subset"), ran.out());
+            assertFalse(ran.out().contains("\u001b["), "no colour codes under --plain");
+        }
+
+        @Test
         void namedFile_limitsTheExportToIt() throws IOException {
             results(true);
             Path sarif = out.resolve("a.sarif");

@@ -132,7 +132,8 @@ public final class Summary {
         return BigDecimal.valueOf(value).setScale(2, RoundingMode.FLOOR).toPlainString();
     }
 
-    private static String up(double value) {
+    /** Two decimals, rounded up: an interval's upper end. */
+    static String up(double value) {
         return BigDecimal.valueOf(value).setScale(2, RoundingMode.CEILING).toPlainString();
     }
 }
