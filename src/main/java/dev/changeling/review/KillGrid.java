@@ -4,6 +4,7 @@ import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
 import dev.changeling.results.Verdict;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
@@ -58,7 +59,7 @@ public record KillGrid(List<String> operators, List<Row> rows, int otherTests, i
             lowerBound |= mutant.verdict() == Verdict.KILLED && mutant.killers() == null;
         }
         List<Row> all = byTest.entrySet().stream()
-                .map(entry -> new Row(entry.getKey(), java.util.Arrays.stream(entry.getValue()).boxed().toList()))
+                .map(entry -> new Row(entry.getKey(), Arrays.stream(entry.getValue()).boxed().toList()))
                 .sorted(Comparator.comparingInt(Row::total).reversed().thenComparing(Row::test))
                 .toList();
         List<Row> shown = all.subList(0, Math.min(topTests, all.size()));

@@ -25,7 +25,7 @@ final class HtmlPage {
             table { border-collapse: collapse; margin: 8px 0 14px; }
             th, td { padding: 3px 8px; text-align: left; border-bottom: 1px solid #eceff3; }
             td.num { text-align: right; font-variant-numeric: tabular-nums; }
-            td.name { font-family: ui-monospace, "DejaVu Sans Mono", monospace; font-size: 13px; overflow-wrap: anywhere; }
+            td.name { font-family: ui-monospace, "DejaVu Sans Mono", monospace; font-size: 13px; }
             .score-bar { width: 100px; height: 10px; display: block; }
             .strip { margin: 10px 0 14px; }
             .strip-name { font-family: ui-monospace, "DejaVu Sans Mono", monospace; font-size: 13px; }

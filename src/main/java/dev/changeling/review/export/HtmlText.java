@@ -38,4 +38,9 @@ final class HtmlText {
     static String element(String name, String cssClass, String text) {
         return "<" + name + " class=\"" + cssClass + "\">" + escape(text) + "</" + name + ">";
     }
+
+    /** A path as escaped text that may break after each slash, so a long path wraps between folders. */
+    static String path(String path) {
+        return escape(path).replace("/", "/<wbr>");
+    }
 }

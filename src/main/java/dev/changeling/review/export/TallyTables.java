@@ -26,7 +26,7 @@ final class TallyTables {
                 .append(HtmlText.element("th", what))
                 .append("<th>mutants</th><th>detected</th><th>survived</th><th>unreached</th><th>not counted</th>"
                         + "<th>score</th><th></th></tr></thead>\n<tbody>\n");
-        rows.forEach((name, tally) -> out.append("<tr>").append(HtmlText.element("td", "name", name))
+        rows.forEach((name, tally) -> out.append("<tr><td class=\"name\">").append(HtmlText.path(name)).append("</td>")
                 .append(number(tally.all())).append(number(tally.detected())).append(number(tally.count(Verdict.SURVIVED)))
                 .append(number(tally.count(Verdict.UNREACHED)))
                 .append(number(tally.count(Verdict.STILLBORN) + tally.count(Verdict.SKIPPED) + tally.equivalent()))

@@ -134,7 +134,7 @@ class HtmlReportTest {
             assertTrue(page.contains("survived 1</li>"), page);
             assertTrue(page.contains("unreached 1</li>"), page);
             assertTrue(page.contains("<td class=\"name\">arithmetic-swap</td><td class=\"num\">1</td>"), page);
-            assertTrue(page.contains("<td class=\"name\">" + SHOP + "</td><td class=\"num\">4</td>"), page);
+            assertTrue(page.contains("<td class=\"name\">" + SHOP.replace("/", "/<wbr>") + "</td><td class=\"num\">4</td>"), page);
         }
 
         @Test
