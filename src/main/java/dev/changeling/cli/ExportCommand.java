@@ -11,15 +11,20 @@ import dev.changeling.review.Gate;
 import dev.changeling.review.Settled;
 import dev.changeling.review.Standing;
 import dev.changeling.review.export.HtmlReport;
+import dev.changeling.review.export.HtmlSection;
 import dev.changeling.review.export.MarkdownReport;
 import dev.changeling.review.export.PatchFolder;
 import dev.changeling.review.export.SarifReport;
 import dev.changeling.review.export.Summary;
+import dev.changeling.terminal.Style;
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
+import java.util.Set;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -80,7 +85,13 @@ final class ExportCommand extends ProjectCommand {
                     + " for a sample, the point estimate counts. Results where no mutant counts pass.")
     BigDecimal minScore;
 
-    /** Known equivalent mutants (by full id) and the test for mutants marked fixed locally. */
+    /** What {@code changeling insights} prints, as a part of the HTML report. */
+    private static HtmlSection insights(RunResults results, Set<String> equivalent) {
+        StringWriter text = new StringWriter();
+        new InsightsReport(Style.plain(), InsightsReport.ALL).print(new PrintWriter(text), results, equivalent);
+        return HtmlSection.preformatted("Insights: coverage, tests, subsumption, combined faults", text.toString());
+    }
+
     @Override
     public Integer call() {
         Gate gate = new Gate(failOnSurvivors, minScore);
@@ -94,7 +105,8 @@ final class ExportCommand extends ProjectCommand {
             throw new UserError(resultsFile + ": the run was interrupted, so its figures are incomplete;"
                     + " run 'changeling run' to the end before using --fail-on-survivors or --min-score");
         }
-        Standing standing = Standing.of(results, Settled.load(layout.root()));
+        Settled settled = Settled.load(layout.root());
+        Standing standing = Standing.of(results, settled);
         List<MutantResult> survivors = standing.toLookAt();
 
         PrintWriter out = out();
@@ -109,7 +121,7 @@ final class ExportCommand extends ProjectCommand {
             out.println("wrote " + sarif + " (" + survivors.size() + (survivors.size() == 1 ? " result)" : " results)"));
         }
         if (html != null) {
-            write(html, HtmlReport.render(standing));
+            write(html, HtmlReport.render(standing, Optional.of(insights(results, settled.equivalent()))));
             out.println("wrote " + html);
         }
         if (glance) {

@@ -9,12 +9,16 @@ import dev.changeling.analysis.Subsumption;
 import dev.changeling.analysis.Tally;
 import dev.changeling.analysis.TestKills;
 import dev.changeling.analysis.WeakTests;
+import dev.changeling.analysis.WhySurvived;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
+import dev.changeling.review.TestNames;
 import dev.changeling.review.export.Summary;
 import dev.changeling.terminal.Style;
 import java.io.PrintWriter;
+import java.util.ArrayList;
 import java.util.BitSet;
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -36,6 +40,9 @@ final class InsightsReport {
     static final String COUPLING_REFERENCE = "for reference: tests that killed every first-order mutant killed over 99%"
             + " of second- and third-order ones (Offutt 1992)";
 
+    /** Every entry of every list. */
+    static final int ALL = 0;
+
     private final Style style;
     private final int top;
 
@@ -55,6 +62,7 @@ final class InsightsReport {
                 : "kill matrix: first failures only (the run stopped at each mutant's first failing test): kills per test"
                         + " are a lower bound, and tests may look redundant, idle or weak only for want of the rest");
         coverage(out, results, score, equivalent);
+        whyUndetected(out, results, equivalent);
         tests(out, matrix);
         subset(out, matrix);
         subsumption(out, matrix, score.overall());
@@ -73,6 +81,21 @@ final class InsightsReport {
             byFile.forEach((file, lines) -> coverageRow(out, width, file, score.byFile().get(file), lines));
         }
         coverageRow(out, width, total, score.overall(), LineCoverage.of(results.mutants(), equivalent));
+    }
+
+    /** The undetected mutants by which of reach, infection and propagation failed, each with what it needs. */
+    private void whyUndetected(PrintWriter out, RunResults results, Set<String> equivalent) {
+        heading(out, "why the undetected went undetected (reach, infection, propagation)");
+        TestNames names = new TestNames(results.tests());
+        Map<WhySurvived.Kind, List<MutantResult>> byKind = new EnumMap<>(WhySurvived.Kind.class);
+        results.mutants().stream().filter(mutant -> !equivalent.contains(mutant.id()))
+                .forEach(mutant -> WhySurvived.of(mutant).ifPresent(why ->
+                        byKind.computeIfAbsent(why.kind(), kind -> new ArrayList<>()).add(mutant)));
+        byKind.forEach((kind, mutants) -> {
+            out.println("  " + kind.words() + ": " + mutants.size());
+            list(out, mutants, mutant -> "  " + mutant.shortId() + "  " + mutant.file() + ":" + mutant.first().line() + "  "
+                    + mutant.first().operator() + "  " + WhySurvived.of(mutant).orElseThrow().sentence(names::of));
+        });
     }
 
     private static void coverageRow(PrintWriter out, int width, String name, Tally tally, LineCoverage lines) {

@@ -40,6 +40,11 @@ public final class HtmlSection {
         return new HtmlSection(heading, body.toString());
     }
 
+    /** Text laid out in lines and columns, as a terminal shows it, under a heading. */
+    public static HtmlSection preformatted(String heading, String text) {
+        return new HtmlSection(heading, HtmlText.element("pre", text) + "\n");
+    }
+
     String heading() {
         return heading;
     }
