@@ -41,8 +41,8 @@ public final class RunFigures {
         System.out.printf("changeling run         %8.1f s   (%.2f x mvn test; target <= 4)%n", runMillis / 1000, runMillis / mavenMillis);
         System.out.printf("mutants                %8d     (%.1f per second of the whole run)%n", mutants, mutants / (runMillis / 1000));
         System.out.printf("test runs              %8d     (their baseline times add up to %.1f s)%n", testRuns, executed / 1000);
-        for (String phase : new String[] {"maven", "generate", "compile", "baseline", "execute", "total"}) {
-            System.out.printf("  %-20s %8.1f s%n", phase, timings.path(phase).asDouble() / 1000);
+        for (var phase : timings.properties()) {
+            System.out.printf("  %-20s %8.1f s%n", phase.getKey(), phase.getValue().asDouble() / 1000);
         }
         System.out.printf("engine overhead        %8.2f     (total %.1f s ÷ (baseline %.1f s + tests %.1f s ÷ %d workers); target <= 1.3)%n",
                 timings.path("total").asDouble() / ideal, timings.path("total").asDouble() / 1000, baseline / 1000, executed / 1000, workers);
