@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalInt;
+import java.util.Set;
 
 /**
  * What a build produced: the schema's points by id, where every mutant ended up, the schema
@@ -16,14 +17,24 @@ import java.util.OptionalInt;
  * @param schemaClasses    the folder of schema classes, to go first on a worker's classpath
  * @param schemaClassNames the binary names of every class compiled into it, sorted
  * @param timings          where the time went
+ * @param watched          the schema's points whose infection the baseline records ({@link InfectionWatch})
  */
 public record BuildResult(List<Point> points, Map<String, Placement> placements, Path schemaClasses,
-                          List<String> schemaClassNames, BuildTimings timings) {
+                          List<String> schemaClassNames, BuildTimings timings, Set<Point> watched) {
 
     public BuildResult {
         points = List.copyOf(points);
         placements = Map.copyOf(placements);
         schemaClassNames = List.copyOf(schemaClassNames);
+        watched = Set.copyOf(watched);
+    }
+
+    /**
+     * Whether the schema watches point {@code id}: the baseline then records, as the reach of id
+     * {@code pointCount() + id}, each test for which its mutated value differed ({@code Probe.differs}).
+     */
+    public boolean watches(int id) {
+        return watched.contains(points.get(id));
     }
 
     /** How many points the schema has: what {@code Probe.prepare} is given. */

@@ -103,10 +103,12 @@ public final class CompilerEquivalence {
             if (classes == null) {
                 continue;
             }
-            String shape = ClassShape.of(classes);
             if (ClassShape.sameBytes(classes, originals.get(mutant.file()))) {
                 asOriginal.put(mutant.fingerprint(), Match.BYTES);
-            } else if (shape.equals(originalShapes.get(mutant.file()))) {
+                continue;
+            }
+            String shape = ClassShape.of(classes);
+            if (shape.equals(originalShapes.get(mutant.file()))) {
                 asOriginal.put(mutant.fingerprint(), Match.SHAPE);
             } else {
                 byShape.computeIfAbsent(mutant.file() + "\n" + shape, key -> new ArrayList<>()).add(mutant.fingerprint());

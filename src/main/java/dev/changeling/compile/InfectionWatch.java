@@ -30,7 +30,7 @@ import java.util.Set;
  * null reference throws in the original as well, since a mutant changes operators and literals only. While the baseline records reach, such
  * a point's switch also evaluates its mutated expression and notes each test for which the two values ever differed.
  */
-public final class InfectionWatch {
+final class InfectionWatch {
 
     private static final Set<String> VALUE_OPERATORS = Set.of("relational-subset", "relational-all", "connective-swap",
             "condition-negation", "boolean-literal-flip", "arithmetic-swap", "bitwise-swap", "shift-swap",
@@ -45,7 +45,7 @@ public final class InfectionWatch {
     }
 
     /** Whether the schema watches this point: a first-order switch whose infection the baseline can observe. */
-    public static boolean watchable(Point point, String fileText) {
+    static boolean watchable(Point point, String fileText) {
         if (point.kind() != HostKind.EXPRESSION || !VALUE_OPERATORS.contains(point.operator())) {
             return false;
         }

@@ -21,6 +21,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.stream.Collectors;
 import javax.tools.Diagnostic;
 import javax.tools.JavaFileObject;
 
@@ -46,9 +47,10 @@ final class SchemaCompiler {
      * @param evicted    the points that left the schema, each with the reason
      * @param stillborn  of those, the points whose mutants are certain not to compile, with the error
      * @param classNames the binary names of the classes written
+     * @param watched    the schema's points whose infection the baseline records ({@link InfectionWatch})
      */
     record Outcome(List<Point> points, Map<Point, String> evicted, Map<Point, String> stillborn,
-                   Set<String> classNames, long renderNanos, long compileNanos, int rounds) {
+                   Set<String> classNames, long renderNanos, long compileNanos, int rounds, Set<Point> watched) {
     }
 
     private final Javac javac;
@@ -59,6 +61,8 @@ final class SchemaCompiler {
     private final Set<String> wholeFiles = new HashSet<>();
     private final Set<String> checkedOriginals = new HashSet<>();
     private final Map<Point, String> stillborn = new LinkedHashMap<>();
+    /** Whether each point rendered so far is watched: the same in every round, so worked out once. */
+    private final Map<Point, Boolean> watchable = new HashMap<>();
     private long renderNanos;
     private long compileNanos;
 
@@ -86,7 +90,7 @@ final class SchemaCompiler {
                 continue;
             }
             if (ordered.isEmpty()) {
-                return new Outcome(List.of(), evicted, stillborn, Set.of(), renderNanos, compileNanos, round - 1);
+                return new Outcome(List.of(), evicted, stillborn, Set.of(), renderNanos, compileNanos, round - 1, Set.of());
             }
             long started = System.nanoTime();
             Javac.Task task = javac.task(rendered.values().stream()
@@ -97,7 +101,8 @@ final class SchemaCompiler {
                 Set<String> written = task.generate();
                 compileNanos += System.nanoTime() - started;
                 writeSources(rendered.values());
-                return new Outcome(ordered, evicted, stillborn, written, renderNanos, compileNanos, round);
+                return new Outcome(ordered, evicted, stillborn, written, renderNanos, compileNanos, round,
+                        ordered.stream().filter(this::watched).collect(Collectors.toUnmodifiableSet()));
             }
             compileNanos += System.nanoTime() - started;
             if (round >= ROUNDS_BEFORE_WHOLE_FILES || leaving.isEmpty()) {
@@ -117,9 +122,13 @@ final class SchemaCompiler {
         Map<String, List<Point>> byFile = new TreeMap<>();
         ordered.forEach(point -> byFile.computeIfAbsent(point.file(), path -> new ArrayList<>()).add(point));
         Map<String, RenderedFile> rendered = new LinkedHashMap<>();
-        byFile.forEach((path, points) -> rendered.put(path, SchemaRenderer.render(files.get(path), points, ids)));
+        byFile.forEach((path, points) -> rendered.put(path, SchemaRenderer.render(files.get(path), points, ids, this::watched)));
         renderNanos += System.nanoTime() - started;
         return rendered;
+    }
+
+    private boolean watched(Point point) {
+        return watchable.computeIfAbsent(point, unknown -> InfectionWatch.watchable(point, files.get(point.file()).text()));
     }
 
     /** Adds the points to move out to {@code leaving}; the paths of the files with errors. */

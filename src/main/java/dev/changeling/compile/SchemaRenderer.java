@@ -14,6 +14,7 @@ import java.util.Deque;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Predicate;
 
 /**
  * Rewrites one file's original text into its schema: every host becomes a switch over its points
@@ -31,20 +32,25 @@ final class SchemaRenderer {
 
     private final String original;
     private final Map<Point, Integer> ids;
+    private final Predicate<Point> watched;
     private final StringBuilder out;
     private final List<HostRegion> regions = new ArrayList<>();
 
-    private SchemaRenderer(String original, Map<Point, Integer> ids) {
+    private SchemaRenderer(String original, Map<Point, Integer> ids, Predicate<Point> watched) {
         this.original = original;
         this.ids = ids;
+        this.watched = watched;
         this.out = new StringBuilder(original.length() + original.length() / 4);
     }
 
-    /** The schema of {@code file} switching {@code points}, each under its id. */
-    static RenderedFile render(SourceFile file, Collection<Point> points, Map<Point, Integer> ids) {
+    /**
+     * The schema of {@code file} switching {@code points}, each under its id; the points {@code watched} accepts (see
+     * {@link InfectionWatch}) also compare their mutated value with the original's while the baseline records.
+     */
+    static RenderedFile render(SourceFile file, Collection<Point> points, Map<Point, Integer> ids, Predicate<Point> watched) {
         Map<Point, String> rejected = new LinkedHashMap<>();
         List<Host> roots = nest(wholeStatements(file, hosts(points, ids), rejected), rejected);
-        SchemaRenderer renderer = new SchemaRenderer(file.text(), ids);
+        SchemaRenderer renderer = new SchemaRenderer(file.text(), ids, watched);
         renderer.emitRange(0, file.text().length(), roots);
         return new RenderedFile(file, renderer.out.toString(), List.copyOf(renderer.regions), Map.copyOf(rejected));
     }
@@ -148,19 +154,19 @@ final class SchemaRenderer {
     }
 
     /**
-     * For the points {@link InfectionWatch} can watch, a link before the original that, while the baseline records,
+     * For the watched points, a link before the original that, while the baseline records,
      * evaluates each mutated expression beside the original and notes the ones that differ; it always goes on to the
      * original. Each mutated copy is one more branch of its point, so a compile error there is that point's.
      */
     private void watch(Host host, List<Branch> mutated) {
-        List<Point> watched = host.points().stream().filter(point -> InfectionWatch.watchable(point, original)).toList();
-        if (watched.isEmpty()) {
+        List<Point> watchedHere = host.points().stream().filter(watched).toList();
+        if (watchedHere.isEmpty()) {
             return;
         }
         String plainOriginal = "(" + oneLine(original.substring(host.span().begin(), host.span().end())) + ")";
         out.append(PROBE).append(".watching() && (");
-        for (int i = 0; i < watched.size(); i++) {
-            Point point = watched.get(i);
+        for (int i = 0; i < watchedHere.size(); i++) {
+            Point point = watchedHere.get(i);
             out.append(i == 0 ? "" : " | ").append(PROBE).append(".differs(").append(ids.get(point)).append(", ");
             int begin = out.length();
             out.append('(').append(oneLine(point.mutatedHost(original))).append(')');

@@ -60,7 +60,8 @@ public final class SchemaStage {
         Outputs.deleteTree(output.resolve(MutantBuild.SCRATCH));
         BuildTimings timings = new BuildTimings(millis(schema.renderNanos()), millis(schema.compileNanos()),
                 millis(System.nanoTime() - started), schema.rounds(), pending.size(), tasks);
-        return new BuildResult(schema.points(), all, schemaClasses(), new ArrayList<>(schema.classNames()), timings);
+        return new BuildResult(schema.points(), all, schemaClasses(), new ArrayList<>(schema.classNames()), timings,
+                schema.watched());
     }
 
     private static long millis(long nanos) {

@@ -1,7 +1,6 @@
 package dev.changeling.run;
 
 import dev.changeling.compile.BuildResult;
-import dev.changeling.compile.InfectionWatch;
 import dev.changeling.compile.Placement;
 import dev.changeling.execution.Baseline;
 import dev.changeling.execution.Deadlines;
@@ -58,8 +57,7 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
             }
             mutants.put(mutant.fingerprint(), mutant);
             reachedBy.put(mutant.fingerprint(), tests);
-            if (inSchema && mutant.order() == 1 && InfectionWatch.watchable(mutant.first(), files.get(mutant.file()).text())) {
-                // a point's infection is recorded as the reach of id pointCount + point (Probe.differs)
+            if (inSchema && mutant.order() == 1 && build.watches(placement.activation()[0])) {
                 infectedBy.put(mutant.fingerprint(), baseline.testsFor(build.pointCount() + placement.activation()[0]));
             }
             MutantJob job = inSchema

@@ -48,7 +48,7 @@ class SchemaRendererTest {
         }
 
         RenderedFile render() {
-            return SchemaRenderer.render(file, points, ids);
+            return SchemaRenderer.render(file, points, ids, point -> InfectionWatch.watchable(point, file.text()));
         }
 
         String text() {
