@@ -61,16 +61,8 @@ public final class KillMatrix {
             BitSet reach = new BitSet();
             killersOf[column] = killers;
             reachOf[column] = reach;
-            if (mutant.verdict().detected()) {
-                if (mutant.killedBy() != null) {
-                    killers.set(row(mutant.killedBy(), rows, tests, names));
-                }
-                if (mutant.killers() == null) {
-                    complete = false;
-                } else {
-                    mutant.killers().forEach(test -> killers.set(row(test, rows, tests, names)));
-                }
-            }
+            mutant.knownKillers().forEach(test -> killers.set(row(test, rows, tests, names)));
+            complete &= mutant.everyKillerKnown();
             if (mutant.reachedBy() != null) {
                 mutant.reachedBy().forEach(test -> reach.set(row(test, rows, tests, names)));
             }

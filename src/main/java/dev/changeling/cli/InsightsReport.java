@@ -87,14 +87,15 @@ final class InsightsReport {
     private void whyUndetected(PrintWriter out, RunResults results, Set<String> equivalent) {
         heading(out, "why the undetected went undetected (reach, infection, propagation)");
         TestNames names = new TestNames(results.tests());
-        Map<WhySurvived.Kind, List<MutantResult>> byKind = new EnumMap<>(WhySurvived.Kind.class);
-        results.mutants().stream().filter(mutant -> !equivalent.contains(mutant.id()))
+        Map<WhySurvived.Kind, List<String>> byKind = new EnumMap<>(WhySurvived.Kind.class);
+        results.mutants().stream().filter(mutant -> !Score.isEquivalent(mutant, equivalent))
                 .forEach(mutant -> WhySurvived.of(mutant).ifPresent(why ->
-                        byKind.computeIfAbsent(why.kind(), kind -> new ArrayList<>()).add(mutant)));
-        byKind.forEach((kind, mutants) -> {
-            out.println("  " + kind.words() + ": " + mutants.size());
-            list(out, mutants, mutant -> "  " + mutant.shortId() + "  " + mutant.file() + ":" + mutant.first().line() + "  "
-                    + mutant.first().operator() + "  " + WhySurvived.of(mutant).orElseThrow().sentence(names::of));
+                        byKind.computeIfAbsent(why.kind(), kind -> new ArrayList<>()).add("  " + mutant.shortId() + "  "
+                                + mutant.file() + ":" + mutant.first().line() + "  " + mutant.first().operator() + "  "
+                                + why.sentence(names::of))));
+        byKind.forEach((kind, lines) -> {
+            out.println("  " + kind.words() + ": " + lines.size());
+            list(out, lines, line -> line);
         });
     }
 

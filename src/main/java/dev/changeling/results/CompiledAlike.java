@@ -1,10 +1,9 @@
 package dev.changeling.results;
 
 import com.fasterxml.jackson.annotation.JsonIgnore;
-import java.util.HashMap;
+import java.util.Collections;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.TreeMap;
 
 /**
@@ -21,35 +20,13 @@ public record CompiledAlike(Map<String, String> asOriginal, List<List<String>> d
     public static final CompiledAlike NONE = new CompiledAlike(Map.of(), List.of(), 0);
 
     public CompiledAlike {
-        asOriginal = asOriginal == null ? Map.of() : new TreeMap<>(asOriginal);
+        asOriginal = asOriginal == null ? Map.of() : Collections.unmodifiableMap(new TreeMap<>(asOriginal));
         duplicates = duplicates == null ? List.of() : duplicates.stream().map(List::copyOf).toList();
-    }
-
-    /** How a survivor matched the original, if it did. */
-    public Optional<String> asOriginal(String id) {
-        return Optional.ofNullable(asOriginal.get(id));
-    }
-
-    /** The survivor that stands for this one's group, if this one is a duplicate and not the first. */
-    public Optional<String> duplicateOf(String id) {
-        return Optional.ofNullable(standsFor().get(id));
-    }
-
-    /** The other members of the group that {@code id} stands for; empty when it stands for none. */
-    public List<String> duplicatesOf(String id) {
-        return duplicates.stream().filter(group -> group.get(0).equals(id)).findFirst()
-                .map(group -> group.subList(1, group.size())).orElse(List.of());
     }
 
     /** How many survivors repeat another one's classes (the first of each group not counted). */
     @JsonIgnore
     public int duplicateCount() {
         return duplicates.stream().mapToInt(group -> group.size() - 1).sum();
-    }
-
-    private Map<String, String> standsFor() {
-        Map<String, String> first = new HashMap<>();
-        duplicates.forEach(group -> group.subList(1, group.size()).forEach(id -> first.put(id, group.get(0))));
-        return first;
     }
 }

@@ -2,7 +2,9 @@ package dev.changeling.results;
 
 import com.fasterxml.jackson.databind.annotation.JsonDeserialize;
 import com.fasterxml.jackson.databind.annotation.JsonSerialize;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Set;
 
 /**
  * One mutant and what became of it.
@@ -57,6 +59,26 @@ public record MutantResult(
 
     public PointRecord first() {
         return points.get(0);
+    }
+
+    /** The tests known to detect it: {@code killedBy} and every stored killer when it was detected; none otherwise. */
+    public List<String> knownKillers() {
+        if (!verdict.detected()) {
+            return List.of();
+        }
+        Set<String> known = new LinkedHashSet<>();
+        if (killedBy != null) {
+            known.add(killedBy);
+        }
+        if (killers != null) {
+            known.addAll(killers);
+        }
+        return List.copyOf(known);
+    }
+
+    /** Whether {@link #knownKillers()} are all its killers: it was not detected, or the run stored every one. */
+    public boolean everyKillerKnown() {
+        return !verdict.detected() || killers != null;
     }
 
     public MutantResult withVerdict(Verdict newVerdict, String newKilledBy, String newDetail,

@@ -2,7 +2,6 @@ package dev.changeling.review;
 
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
-import dev.changeling.results.Verdict;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -13,14 +12,14 @@ import java.util.TreeSet;
 
 /**
  * The kill matrix summed up for a picture: for each test (the busiest first) and each mutation operator, how many
- * mutants of that operator the test kills. Read from each mutant's killers when the run ran every reaching test;
- * otherwise only the first failing test is known, and the counts are a lower bound.
+ * mutants of that operator the test kills, as far as the run knows them ({@link MutantResult#knownKillers()}): all of
+ * them when it ran every reaching test, otherwise only the first failing test, and the counts are a lower bound.
  *
  * @param operators  the columns: every operator of the run (of each mutant's first point), sorted
  * @param rows       the tests shown, most kills first
  * @param otherTests how many further tests kill something and are not shown
  * @param otherKills the kills of those further tests, summed
- * @param lowerBound true when some killed mutant names only its first failing test
+ * @param lowerBound true when some detected mutant names only its first failing test
  */
 public record KillGrid(List<String> operators, List<Row> rows, int otherTests, int otherKills, boolean lowerBound) {
 
@@ -53,10 +52,10 @@ public record KillGrid(List<String> operators, List<Row> rows, int otherTests, i
         boolean lowerBound = false;
         for (MutantResult mutant : results.mutants()) {
             int column = operators.indexOf(mutant.first().operator());
-            for (String test : killersOf(mutant)) {
+            for (String test : mutant.knownKillers()) {
                 byTest.computeIfAbsent(test, unused -> new int[operators.size()])[column]++;
             }
-            lowerBound |= mutant.verdict() == Verdict.KILLED && mutant.killers() == null;
+            lowerBound |= !mutant.everyKillerKnown();
         }
         List<Row> all = byTest.entrySet().stream()
                 .map(entry -> new Row(entry.getKey(), Arrays.stream(entry.getValue()).boxed().toList()))
@@ -70,13 +69,5 @@ public record KillGrid(List<String> operators, List<Row> rows, int otherTests, i
     /** The largest count in any cell shown; 0 when no test kills anything. */
     public int largest() {
         return rows.stream().flatMap(row -> row.counts().stream()).mapToInt(Integer::intValue).max().orElse(0);
-    }
-
-    /** The tests that failed with it: all of them when recorded, else the first one, else none. */
-    static List<String> killersOf(MutantResult mutant) {
-        if (mutant.killers() != null) {
-            return mutant.killers();
-        }
-        return mutant.killedBy() == null ? List.of() : List.of(mutant.killedBy());
     }
 }
