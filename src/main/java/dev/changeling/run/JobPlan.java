@@ -27,17 +27,20 @@ import java.util.Set;
 
 /**
  * What the baseline decided for each runnable mutant: the tests that reach it, in the order they run, as one
- * job for the workers; a mutant no test reaches is unreached without running anything.
+ * job for the workers; a mutant no test reaches is unreached without running anything. Of a watched mutant's
+ * reaching tests only those that saw its expression give another value run: the others execute exactly what
+ * they executed unmutated, so they pass again; a watched mutant that no test infected survives without running.
  *
  * @param jobs      one per reached mutant
  * @param mutants   each job's mutant, by fingerprint
  * @param reachedBy  each job's reaching tests, by fingerprint
  * @param infectedBy each watched job's tests that saw its mutated expression differ in the baseline, by fingerprint
- * @param unreached  verdicts of the mutants no test reaches, by fingerprint
+ * @param settled    verdicts the baseline alone decides, by fingerprint: the mutants no test reaches, and the
+ *                   watched ones that no reaching test infected
  * @param everyTest  whether each job runs every reaching test, and each result keeps every killer
  */
 record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, List<String>> reachedBy,
-               Map<String, List<String>> infectedBy, Map<String, MutantResult> unreached, boolean everyTest) {
+               Map<String, List<String>> infectedBy, Map<String, MutantResult> settled, boolean everyTest) {
 
     static JobPlan of(List<Mutant> runnable, BuildResult build, Baseline baseline, Deadlines deadlines,
                       Map<String, SourceFile> files, boolean everyTest) {
@@ -45,27 +48,43 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
         Map<String, Mutant> mutants = new HashMap<>();
         Map<String, List<String>> reachedBy = new HashMap<>();
         Map<String, List<String>> infectedBy = new HashMap<>();
-        Map<String, MutantResult> unreached = new LinkedHashMap<>();
+        Map<String, MutantResult> settled = new LinkedHashMap<>();
         for (Mutant mutant : runnable) {
             Placement placement = build.placementOf(mutant);
             boolean inSchema = placement.kind() == Placement.Kind.IN_SCHEMA;
             List<String> tests = inSchema ? baseline.testsFor(placement.activation()) : testsForAlone(mutant, build, baseline);
             if (tests.isEmpty()) {
-                unreached.put(mutant.fingerprint(), Records.of(mutant, files.get(mutant.file()), Verdict.UNREACHED,
+                settled.put(mutant.fingerprint(), Records.of(mutant, files.get(mutant.file()), Verdict.UNREACHED,
                         "no test reaches this code"));
                 continue;
             }
+            List<String> toRun = tests;
+            if (inSchema && mutant.order() == 1 && build.watches(placement.activation()[0])) {
+                List<String> infected = baseline.testsFor(build.pointCount() + placement.activation()[0]);
+                if (infected.isEmpty()) {
+                    settled.put(mutant.fingerprint(), notInfected(mutant, files.get(mutant.file()), tests));
+                    continue;
+                }
+                infectedBy.put(mutant.fingerprint(), infected);
+                Set<String> infecting = Set.copyOf(infected);
+                toRun = tests.stream().filter(infecting::contains).toList();
+            }
             mutants.put(mutant.fingerprint(), mutant);
             reachedBy.put(mutant.fingerprint(), tests);
-            if (inSchema && mutant.order() == 1 && build.watches(placement.activation()[0])) {
-                infectedBy.put(mutant.fingerprint(), baseline.testsFor(build.pointCount() + placement.activation()[0]));
-            }
             MutantJob job = inSchema
-                    ? MutantJob.schema(mutant.fingerprint(), placement.activation(), tests, deadlines, baseline)
-                    : MutantJob.alone(mutant.fingerprint(), placement.classes(), tests, deadlines, baseline);
+                    ? MutantJob.schema(mutant.fingerprint(), placement.activation(), toRun, deadlines, baseline)
+                    : MutantJob.alone(mutant.fingerprint(), placement.classes(), toRun, deadlines, baseline);
             jobs.add(everyTest ? job.runningEveryTest() : job);
         }
-        return new JobPlan(jobs, mutants, reachedBy, infectedBy, unreached, everyTest);
+        return new JobPlan(jobs, mutants, reachedBy, infectedBy, settled, everyTest);
+    }
+
+    /** A watched mutant whose expression gave the original's value for every reaching test: it survives them all. */
+    private static MutantResult notInfected(Mutant mutant, SourceFile file, List<String> reachedBy) {
+        MutantResult base = Records.of(mutant, file, Verdict.SURVIVED,
+                "no reaching test made the expression give another value, so none ran again");
+        return new MutantResult(base.id(), base.file(), base.order(), base.points(), Verdict.SURVIVED, null, base.detail(),
+                List.of(), reachedBy, 0, base.diff(), null, List.of());
     }
 
     /**

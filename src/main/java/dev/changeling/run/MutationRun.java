@@ -136,7 +136,7 @@ public final class MutationRun {
             checkNotStopped();
 
             JobPlan plan = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files, request.everyTest());
-            results.putAll(plan.unreached());
+            results.putAll(plan.settled());
             results.values().forEach(listener::finished);
             listener.running(plan.jobs().size());
             mutantsStarted = true;

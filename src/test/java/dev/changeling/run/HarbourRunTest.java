@@ -36,8 +36,9 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The harbour sample's survivors compiled on their own: a comparison of compile-time constants that javac folds to the
  * original's bytes, a count nothing reads whose mutant matches only once dead stores are set aside, and a pair of
- * survivors that two operators wrote as the same code. Triage proposes, the Markdown comment shows the pair once, and
- * Maven, with each diff applied, agrees that all of them survive.
+ * survivors that two operators wrote as the same code. Triage proposes, the Markdown comment shows the pair once. The
+ * survivors whose expression no test made differ ran no test again. Maven, with each diff applied, agrees that all of
+ * them survive.
  */
 @Tag("e2e")
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
@@ -133,15 +134,35 @@ class HarbourRunTest {
     }
 
     @Test
-    void maven_withEachDiffApplied_letsEveryProposedEquivalentAndDuplicateSurvive(@TempDir Path work) {
+    void aSurvivorThatNoTestInfected_runsNoTestAgain_andOneThatSomeInfected_runsOnlyThose() {
+        List<MutantResult> notInfected = notInfected();
+        assertEquals(Set.of(13, 14, 19), notInfected.stream().map(mutant -> mutant.first().line()).collect(Collectors.toSet()),
+                run::transcript);
+        assertTrue(notInfected.stream().allMatch(mutant -> mutant.testsRun().isEmpty() && !mutant.reachedBy().isEmpty()),
+                run::transcript);
+        MutantResult alwaysFalse = survivor(19, "relational-subset", "replaced the comparison with false");
+        assertEquals(alwaysFalse.infectedBy(), alwaysFalse.testsRun());
+        assertTrue(alwaysFalse.reachedBy().size() > alwaysFalse.testsRun().size(), run::transcript);
+    }
+
+    private List<MutantResult> notInfected() {
+        return run.withVerdict(Verdict.SURVIVED).stream()
+                .filter(mutant -> mutant.infectedBy() != null && mutant.infectedBy().isEmpty())
+                .toList();
+    }
+
+    @Test
+    void maven_withEachDiffApplied_letsEveryProposedEquivalentDuplicateAndUninfectedSurvive(@TempDir Path work) {
         Set<String> compared = alike().asOriginal().keySet();
+        Set<String> uninfected = notInfected().stream().map(MutantResult::id).collect(Collectors.toSet());
         List<MutantResult> judgedHere = run.results().mutants().stream()
-                .filter(mutant -> compared.contains(mutant.id()) || alike().duplicates().get(0).contains(mutant.id()))
+                .filter(mutant -> compared.contains(mutant.id()) || alike().duplicates().get(0).contains(mutant.id())
+                        || uninfected.contains(mutant.id()))
                 .toList();
         List<MavenAgreement.Judged> judged = MavenAgreement.judge("harbour", judgedHere, work);
         String figure = MavenAgreement.figure("harbour", judged);
         System.out.println(figure);
-        assertEquals(5, judged.size(), figure);
+        assertEquals(7, judged.size(), figure);
         assertEquals(List.of(), judged.stream().filter(one -> !one.agrees()).map(MavenAgreement.Judged::describe)
                 .collect(Collectors.toList()), figure);
     }
