@@ -30,6 +30,12 @@ public record Deadlines(double factor, long constantMillis) {
      */
     public static final long FIRST_RUN_EXTRA_MILLIS = 2_000;
 
+    /**
+     * The constant of a job resumed after one of its tests was stopped in place, at most: the mutant is known to loop
+     * somewhere, so a later test gets little more than its own baseline time to fail normally.
+     */
+    public static final long RESUMED_CONSTANT_MILLIS = 50;
+
     public Deadlines {
         if (!(factor >= 1) || Double.isInfinite(factor)) {
             throw new IllegalArgumentException("the deadline factor must be a number of at least 1, not " + factor);
@@ -37,6 +43,11 @@ public record Deadlines(double factor, long constantMillis) {
         if (constantMillis < 0) {
             throw new IllegalArgumentException("the deadline constant must not be negative, not " + constantMillis + " ms");
         }
+    }
+
+    /** The deadlines of a job resumed after a stop: the same factor, a constant of at most {@link #RESUMED_CONSTANT_MILLIS}. */
+    public Deadlines resumed() {
+        return new Deadlines(factor, Math.min(constantMillis, RESUMED_CONSTANT_MILLIS));
     }
 
     /** The deadline for tests whose baseline times add up to {@code baselineNanos}. */

@@ -1,5 +1,6 @@
 package dev.changeling.execution;
 
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -41,6 +42,21 @@ public record JobResult(String key, Outcome outcome, String testId, String messa
                 .map(first -> new JobResult(key, Outcome.KILLED, first.testId(), first.message()
                         + "; a later test then ended the run: " + message, testsRun, nanos))
                 .orElse(this);
+    }
+
+    /**
+     * This result, of a job stopped in place, followed by {@code more}, of its tests after the stopped one: killed when
+     * one of those failed, else still timed out as it was; the tests and the time of both.
+     */
+    JobResult resumedWith(JobResult more) {
+        List<TestRun> all = new ArrayList<>(testsRun);
+        all.addAll(more.testsRun);
+        long total = nanos + more.nanos;
+        if (more.outcome == Outcome.KILLED) {
+            return new JobResult(key, Outcome.KILLED, more.testId, more.message + " (an earlier test, stopped at its deadline, "
+                    + "did not decide: " + message + ")", all, total);
+        }
+        return new JobResult(key, outcome, testId, message, all, total);
     }
 
     /** The test stopped in place at its step's deadline, or null when none was. */

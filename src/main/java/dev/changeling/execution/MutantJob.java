@@ -66,6 +66,13 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
         return new MutantJob(key, points, tests, testNanos, other, aloneClasses, everyTest);
     }
 
+    /** The tests after {@code test}, for a job stopped in place in it, under the deadlines of a resumed job. */
+    public MutantJob resumedAfter(String test) {
+        int at = tests.indexOf(test);
+        return new MutantJob(key, points, tests.subList(at + 1, tests.size()),
+                Arrays.copyOfRange(testNanos, at + 1, testNanos.length), deadlines.resumed(), aloneClasses, everyTest);
+    }
+
     /** The same job running every one of its tests, not stopping at the first failure. */
     public MutantJob runningEveryTest() {
         return new MutantJob(key, points, tests, testNanos, deadlines, aloneClasses, true);

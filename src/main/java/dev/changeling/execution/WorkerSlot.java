@@ -69,10 +69,29 @@ final class WorkerSlot {
         }
     }
 
+    /**
+     * Runs a mutant's tests. A mutant stopped in place at a test's deadline goes on with the tests after that one, under
+     * shorter deadlines: a later test that fails normally makes it killed, which is the verdict a longer deadline could
+     * have given too; otherwise it stays timed out. A mutant compiled alone, and one whose worker had to be ended, is not
+     * resumed.
+     */
     JobResult execute(MutantJob job) {
         if (job.aloneClasses() != null) {
             return executeAlone(job);
         }
+        JobResult result = executeShared(job);
+        if (job.everyTest() || result.outcome() != Outcome.TIMED_OUT || result.stoppedTest() == null) {
+            return result;
+        }
+        MutantJob rest = job.resumedAfter(result.stoppedTest());
+        if (rest.tests().isEmpty()) {
+            return result;
+        }
+        pool.throwIfStopped();
+        return result.resumedWith(executeShared(rest));
+    }
+
+    private JobResult executeShared(MutantJob job) {
         JobResult result;
         try {
             result = runInWorker(job);

@@ -305,6 +305,21 @@ class WorkerPoolTest {
             }
         }
 
+        /** Stopped in place in its first test, the mutant goes on with the next one, which fails normally: killed by it. */
+        @Test
+        void aMutantStoppedInOneTest_goesOnWithTheRest_andAFailureThereKillsIt() {
+            try (WorkerPool pool = WorkerPool.open(settings("resumed"), setup())) {
+                JobResult result = pool.run(List.of(MutantJob.schema("loops-then-fails", new int[] {0, 2},
+                        List.of(method("HostileTest", "countsToThree"), method("PricesTest", "addsTwoNumbers")), 1_000)),
+                        done -> { }).get(0);
+                assertEquals(Outcome.KILLED, result.outcome(), result::toString);
+                assertEquals(method("PricesTest", "addsTwoNumbers"), result.testId());
+                assertEquals(List.of(TestStatus.STOPPED, TestStatus.FAILED), result.testsRun().stream().map(TestRun::status).toList());
+                assertTrue(result.message().contains("stopped at its deadline"), result.message());
+                assertEquals(1, pool.workersStarted(), "the stop and the failure both leave the worker fit");
+            }
+        }
+
         /** The stop unwinds the test before it tidies its class's shared note, so the class fails unmutated afterwards. */
         @Test
         void replacesTheWorker_whenTheStoppedTestsClassFailsUnmutatedAfterTheStop() {
