@@ -20,5 +20,5 @@ start=$(date +%s%N)
 java -jar "$jar" run . --plain "$@" > target/changeling-run.txt 2>&1 || { cat target/changeling-run.txt; exit 1; }
 run_ms=$(( ($(date +%s%N) - start) / 1000000 ))
 
-tail -n 25 target/changeling-run.txt | grep -E "^(mutation score|  (maven|mutants|compiled|baseline):)" || true
+grep -E "^(mutation score|  (maven|mutants|compiled|baseline|[0-9]+ workers started)[:;])" target/changeling-run.txt || true
 java -cp "$jar:$classes" RunFigures target/changeling/results.json "$maven_ms" "$run_ms"

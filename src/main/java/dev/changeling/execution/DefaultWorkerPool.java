@@ -18,6 +18,7 @@ final class DefaultWorkerPool implements WorkerPool {
     private final Path workerClasses;
     private final WorkerSlot[] slots;
     private final AtomicInteger started = new AtomicInteger();
+    private final WorkerTime workerTime = new WorkerTime();
     private final Object listenerLock = new Object();
     private volatile boolean stopped;
 
@@ -158,6 +159,11 @@ final class DefaultWorkerPool implements WorkerPool {
     @Override
     public int workersStarted() {
         return started.get();
+    }
+
+    @Override
+    public WorkerTime workerTime() {
+        return workerTime;
     }
 
     @Override

@@ -46,6 +46,9 @@ public interface WorkerPool extends AutoCloseable {
     /** How many worker JVMs this pool has started so far. */
     int workersStarted();
 
+    /** Where the workers' time went so far. */
+    WorkerTime workerTime();
+
     /** Lets the workers quit, and kills any that have not within two seconds. */
     @Override
     void close();

@@ -29,11 +29,13 @@ final class WorkerSlot {
     private boolean warm;
     private volatile WorkerProcess live;
     private volatile WorkerProcess liveAlone;
+    private final WorkerTime time;
 
     WorkerSlot(DefaultWorkerPool pool, int number) {
         this.pool = pool;
         this.settings = pool.settings();
         this.setup = pool.setup();
+        this.time = pool.workerTime();
         Path folder = settings.workDirectory();
         this.log = folder.resolve("worker-" + number + ".log");
         this.temp = folder.resolve("tmp-" + number);
@@ -123,7 +125,7 @@ final class WorkerSlot {
                 retire();
             }
         } else if (mutantsOnWorker >= settings.mutantsPerWorker()) {
-            worker.close();
+            time.timed(WorkerTime.Use.ENDS, worker::close);
             retire();
         }
         return result;
@@ -140,7 +142,7 @@ final class WorkerSlot {
     private JobResult runInWorker(MutantJob job) {
         ensureWorker();
         warmUp(job);
-        return worker.run(job);
+        return time.timed(WorkerTime.Use.MUTANTS, () -> worker.run(job));
     }
 
     /**
@@ -157,7 +159,7 @@ final class WorkerSlot {
         if (failed.isEmpty() || worker == null) {
             return true;
         }
-        return worker.alive() && runUnmutated(key, failed).outcome() == Outcome.SURVIVED;
+        return worker.alive() && time.timed(WorkerTime.Use.KILL_CHECKS, () -> runUnmutated(key, failed)).outcome() == Outcome.SURVIVED;
     }
 
     /**
@@ -167,7 +169,8 @@ final class WorkerSlot {
      */
     private boolean classPassesUnmutated(String key, String stoppedTest) {
         String testClass = stoppedTest == null ? null : UniqueIds.outermostContainer(stoppedTest);
-        return testClass != null && runUnmutated(key, List.of(testClass)).outcome() == Outcome.SURVIVED;
+        return testClass != null
+                && time.timed(WorkerTime.Use.CLASS_CHECKS, () -> runUnmutated(key, List.of(testClass))).outcome() == Outcome.SURVIVED;
     }
 
     /** Runs tests in the current worker with no point switched on, each step under the start timeout, up to the first failure. */
@@ -221,6 +224,7 @@ final class WorkerSlot {
         try {
             try {
                 alone.prepare(setup, settings.startTimeout().toMillis());
+                time.add(WorkerTime.Use.STARTS, System.nanoTime() - start);
             } catch (WorkerProcess.Lost lost) {
                 pool.throwIfStopped();
                 // Only the mutant's own classes differ from a worker that prepares fine: its static initialiser did this.
@@ -228,9 +232,9 @@ final class WorkerSlot {
                         "while its classes were initialised: " + lost.getMessage(), List.of(), System.nanoTime() - start),
                         alone.death());
             }
-            return new AloneRun(alone.run(job), alone.death());
+            return new AloneRun(time.timed(WorkerTime.Use.MUTANTS, () -> alone.run(job)), alone.death());
         } finally {
-            alone.close();
+            time.timed(WorkerTime.Use.ENDS, alone::close);
             liveAlone = null;
             emptyFolder(aloneTemp);
         }
@@ -247,7 +251,7 @@ final class WorkerSlot {
         if (warm || job.tests().isEmpty()) {
             return;
         }
-        JobResult warming = runUnmutated(job.key(), List.of(job.tests().get(0)));
+        JobResult warming = time.timed(WorkerTime.Use.WARM_UPS, () -> runUnmutated(job.key(), List.of(job.tests().get(0))));
         if (warming.outcome() == Outcome.TIMED_OUT || warming.outcome() == Outcome.CRASHED) {
             // The unmutated tests did not come back: the mutant runs in a fresh worker as it would have without this.
             retire();
@@ -262,9 +266,11 @@ final class WorkerSlot {
         if (worker != null) {
             return;
         }
+        long starting = System.nanoTime();
         WorkerProcess started = launch(List.of(), temp, argumentFile, false);
         try {
             WorkerProcess.Prepared answer = started.prepare(setup, settings.startTimeout().toMillis());
+            time.add(WorkerTime.Use.STARTS, System.nanoTime() - starting);
             if (prepared == null) {
                 prepared = answer;
             }
@@ -313,7 +319,7 @@ final class WorkerSlot {
     /** Ends the current worker the way a test JVM ends (killed only if it will not), and empties its temp folder. */
     private void retire() {
         if (worker != null) {
-            worker.end();
+            time.timed(WorkerTime.Use.ENDS, worker::end);
         }
         worker = null;
         live = null;

@@ -146,6 +146,7 @@ public final class MutationRun {
                 listener.finished(result);
             }));
             complete = finished.size() == plan.jobs().size();
+            listener.phase(workers.workersStarted() + " workers started; " + workers.workerTime().describe());
             if (complete && !stopped && request.recheckTimeouts()) {
                 TimeoutRecheck.run(workers, plan.jobs(), finished, request.deadlines(), plan::label, listener);
             }
