@@ -64,11 +64,15 @@ public record WhySurvived(Kind kind, List<String> tests, String hint) {
                 "an assertion on the result in " + (mutant.infectedBy().size() == 1 ? "this test" : "one of these tests")));
     }
 
-    /** One sentence: the kind, who saw another value, and what the missing test needs; {@code names} names a test. */
+    /**
+     * One sentence: the kind, who saw another value, and what the missing test needs; {@code names} names a test. The
+     * tests are named in alphabetical order, not in the order the baseline met them, which changes from run to run with
+     * the tests' times, so the same tree gives the same sentence.
+     */
     public String sentence(Function<String, String> names) {
         return switch (kind) {
             case UNKNOWN -> kind.words() + ": " + hint;
-            case NOT_PROPAGATED -> kind.words() + ": " + tests.stream().map(names).collect(Collectors.joining(", "))
+            case NOT_PROPAGATED -> kind.words() + ": " + tests.stream().map(names).sorted().collect(Collectors.joining(", "))
                     + " saw another value and passed; it needs " + hint;
             default -> kind.words() + ": it needs " + hint;
         };

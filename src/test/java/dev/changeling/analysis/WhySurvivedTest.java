@@ -62,6 +62,17 @@ class WhySurvivedTest {
     }
 
     @Test
+    void theTestsThatSawAnotherValue_areNamedInAlphabeticalOrder_whateverOrderTheBaselineMetThemIn() {
+        String weeding = "[engine:junit-jupiter]/[class:PlotTest]/[method:weeding()]";
+        for (List<String> infected : List.of(List.of(weeding, SEEDLINGS), List.of(SEEDLINGS, weeding))) {
+            WhySurvived why = WhySurvived.of(mutant(Verdict.SURVIVED, "*", "/", "rows*2", infected)).orElseThrow();
+            assertEquals("infected, not propagated: PlotTest > seedlings(), PlotTest > weeding() saw another value and passed;"
+                    + " it needs an assertion on the result in one of these tests",
+                    why.sentence(id -> id.equals(weeding) ? "PlotTest > weeding()" : "PlotTest > seedlings()"));
+        }
+    }
+
+    @Test
     void aSurvivorWhoseExpressionWasNotWatched_isUnknown_neverGuessed() {
         WhySurvived why = WhySurvived.of(mutant(Verdict.SURVIVED, "<", "<=", "a<b", null)).orElseThrow();
 
