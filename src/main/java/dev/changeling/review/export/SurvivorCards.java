@@ -65,12 +65,13 @@ final class SurvivorCards {
         return out.append(DiffHtml.render(survivor.diff())).append("</article>\n").toString();
     }
 
+    /** The tests that run it, the first few named in alphabetical order: the baseline's order moves with the tests' times. */
     private static String reaching(MutantResult survivor, TestNames names) {
         List<String> tests = survivor.reachedBy() == null ? List.of() : survivor.reachedBy();
         if (tests.isEmpty()) {
             return "";
         }
-        String named = tests.stream().limit(TESTS_NAMED).map(names::of).collect(Collectors.joining(", "));
+        String named = tests.stream().map(names::of).sorted().limit(TESTS_NAMED).collect(Collectors.joining(", "));
         int rest = tests.size() - Math.min(TESTS_NAMED, tests.size());
         return HtmlText.element("p", "tests", (tests.size() == 1 ? "1 test runs it and passes: " : tests.size()
                 + " tests run it and pass: ") + named + (rest > 0 ? " and " + rest + " more" : "")) + "\n";
