@@ -17,6 +17,8 @@ public final class ExitCode {
     public static final int BASELINE_RED = 5;
     /** An interactive command was started without a terminal. */
     public static final int NO_TERMINAL = 6;
+    /** The results files given to merge are not the shards of one run: one missing or twice, or from different runs. */
+    public static final int SHARDS_APART = 7;
     /** A fault inside the tool itself; the message asks for a report. */
     public static final int INTERNAL = 70;
     /** Stopped by Ctrl-C (128 + SIGINT); partial results were kept. */

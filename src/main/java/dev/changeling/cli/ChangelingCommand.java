@@ -15,6 +15,7 @@ import picocli.CommandLine.HelpCommand;
             EquivalentsCommand.class,
             TriageCommand.class,
             RunCommand.class,
+            MergeCommand.class,
             OperatorsCommand.class,
             HelpCommand.class,
         })

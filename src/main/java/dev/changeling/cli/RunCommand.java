@@ -104,6 +104,12 @@ final class RunCommand implements Callable<Integer> {
             description = "Exit with code 3 when the mutation score is below S (0 to 1).")
     BigDecimal minScore;
 
+    @Option(names = "--shard", paramLabel = "I/N",
+            description = "Run only shard I of N: the mutants whose fingerprint falls in share I of N, the same on every machine;"
+                    + " N jobs with 1/N to N/N together run every mutant once. Merge their results files with 'changeling merge'"
+                    + " (see docs/ci-sharding.md).")
+    String shard;
+
     @Option(names = "--maven-arg", paramLabel = "ARG", description = "Pass an argument to every mvn call, e.g. -o or -s settings.xml (repeatable).")
     List<String> mavenArguments = new ArrayList<>();
 
@@ -115,7 +121,7 @@ final class RunCommand implements Callable<Integer> {
         Gate gate = new Gate(false, minScore);
         RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
                 workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts,
-                everyTest).resolve();
+                everyTest, shard).resolve();
         ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();

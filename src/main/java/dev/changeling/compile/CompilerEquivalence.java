@@ -2,6 +2,7 @@ package dev.changeling.compile;
 
 import dev.changeling.mutant.Mutant;
 import dev.changeling.source.SourceFile;
+import dev.changeling.source.SourceHash;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -36,10 +37,13 @@ public final class CompilerEquivalence {
      * @param duplicates  groups of two or more mutants whose classes match each other's and not the original's, in the
      *                    order given; the first of each group stands for the rest
      * @param uncompiled  mutants (or originals' mutants) that did not compile on their own, so were not compared
+     * @param shapes      for each compared mutant whose classes do not match the original's, by fingerprint, a digest of its
+     *                    file and its classes' shape: equal digests make the duplicates, here or in another shard of the run
      */
-    public record Findings(Map<String, Match> asOriginal, List<List<String>> duplicates, int compared, int uncompiled) {
+    public record Findings(Map<String, Match> asOriginal, List<List<String>> duplicates, int compared, int uncompiled,
+                           Map<String, String> shapes) {
 
-        public static final Findings NONE = new Findings(Map.of(), List.of(), 0, 0);
+        public static final Findings NONE = new Findings(Map.of(), List.of(), 0, 0, Map.of());
     }
 
     private CompilerEquivalence() {
@@ -98,6 +102,7 @@ public final class CompilerEquivalence {
         originals.forEach((file, classes) -> originalShapes.put(file, ClassShape.of(classes)));
         Map<String, Match> asOriginal = new LinkedHashMap<>();
         Map<String, List<String>> byShape = new LinkedHashMap<>();
+        Map<String, String> shapes = new LinkedHashMap<>();
         for (Mutant mutant : mutants) {
             Map<String, byte[]> classes = compiled.get(mutant.fingerprint());
             if (classes == null) {
@@ -111,11 +116,13 @@ public final class CompilerEquivalence {
             if (shape.equals(originalShapes.get(mutant.file()))) {
                 asOriginal.put(mutant.fingerprint(), Match.SHAPE);
             } else {
-                byShape.computeIfAbsent(mutant.file() + "\n" + shape, key -> new ArrayList<>()).add(mutant.fingerprint());
+                String digest = SourceHash.sha256(mutant.file() + "\n" + shape);
+                shapes.put(mutant.fingerprint(), digest);
+                byShape.computeIfAbsent(digest, key -> new ArrayList<>()).add(mutant.fingerprint());
             }
         }
         List<List<String>> duplicates = byShape.values().stream().filter(group -> group.size() > 1).map(List::copyOf).toList();
-        return new Findings(asOriginal, duplicates, compiled.size(), mutants.size() - compiled.size());
+        return new Findings(asOriginal, duplicates, compiled.size(), mutants.size() - compiled.size(), shapes);
     }
 
     private static Map<String, String> originalsOf(List<Mutant> mutants, Map<String, SourceFile> files) {

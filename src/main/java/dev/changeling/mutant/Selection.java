@@ -31,6 +31,11 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
 
     /** The chosen mutants, the population they were drawn from, and the generation they came from. */
     public record Chosen(List<Mutant> mutants, int population, boolean sampled, Generation.Generated generated) {
+
+        /** Only the mutants of one shard, chosen after sampling so that the shards together are the whole choice. */
+        public Chosen inShard(Shard shard) {
+            return new Chosen(shard.of(mutants, Mutant::fingerprint), population, sampled, generated);
+        }
     }
 
     /** The same selection, leaving out the points the project's suppression rules name. */

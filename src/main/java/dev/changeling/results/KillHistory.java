@@ -40,10 +40,10 @@ public record KillHistory(int format, Map<String, Kills> operators) {
         operators = operators == null ? Map.of() : Collections.unmodifiableMap(new TreeMap<>(operators));
     }
 
-    /** The history a run leaves, when it is a complete full run; nothing for a run of a change, a sample or a partial run. */
+    /** The history a run leaves, when it is a complete full run; nothing for a run of a change, a sample, a shard or a partial run. */
     public static Optional<KillHistory> of(RunResults results) {
         RunSettings settings = results.settings();
-        if (!results.complete() || settings.changeScope() != null || settings.sampled()) {
+        if (!results.complete() || settings.changeScope() != null || settings.sampled() || results.shard() != null) {
             return Optional.empty();
         }
         Map<String, Kills> operators = new TreeMap<>();

@@ -1,5 +1,6 @@
 package dev.changeling.results;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
 import java.util.Collections;
 import java.util.List;
 import java.util.TreeMap;
@@ -20,6 +21,7 @@ import java.util.Map;
  * @param notMade   points in scope not made, by reason (code that only serves diagnostics, a suppression rule, the
  *                  per-line budget); empty when none
  * @param compiledAlike what compiling each survivor on its own found: proposed equivalents and duplicates
+ * @param shard     which share of a sharded run this is, or null for a whole run (and for merged shards)
  */
 public record RunResults(
         int format,
@@ -31,13 +33,21 @@ public record RunResults(
         List<String> problems,
         Map<String, String> sourceHashes,
         Map<String, Integer> notMade,
-        CompiledAlike compiledAlike) {
+        CompiledAlike compiledAlike,
+        @JsonInclude(JsonInclude.Include.NON_NULL) ShardRecord shard) {
 
     public static final int FORMAT = 2;
 
     public RunResults {
         notMade = notMade == null ? Map.of() : Collections.unmodifiableMap(new TreeMap<>(notMade));
         compiledAlike = compiledAlike == null ? CompiledAlike.NONE : compiledAlike;
+    }
+
+    /** Results of a whole run, not a shard of one. */
+    public RunResults(int format, boolean complete, RunSettings settings, List<TestRecord> tests, Map<String, Double> timings,
+                      List<MutantResult> mutants, List<String> problems, Map<String, String> sourceHashes,
+                      Map<String, Integer> notMade, CompiledAlike compiledAlike) {
+        this(format, complete, settings, tests, timings, mutants, problems, sourceHashes, notMade, compiledAlike, null);
     }
 
     /** Results of a run that compared no survivor's classes. */
@@ -66,6 +76,6 @@ public record RunResults(
         List<MutantResult> inside = mutants.stream()
                 .filter(mutant -> limits.stream().anyMatch(limit -> projectRoot.resolve(mutant.file()).normalize().startsWith(limit)))
                 .toList();
-        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes, notMade, compiledAlike);
+        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes, notMade, compiledAlike, shard);
     }
 }

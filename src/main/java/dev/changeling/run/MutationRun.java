@@ -14,12 +14,14 @@ import dev.changeling.execution.WorkerPool;
 import dev.changeling.execution.WorkerSettings;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Selection;
+import dev.changeling.mutant.Shard;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.ProjectDiscovery;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.CompiledAlike;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
+import dev.changeling.results.ShardRecord;
 import dev.changeling.results.TestRecord;
 import dev.changeling.results.Verdict;
 import dev.changeling.scope.ChangeScope;
@@ -104,7 +106,8 @@ public final class MutationRun {
         checkNotStopped();
 
         Optional<ChangeScope> change = request.change().map(spec -> spec.resolve(project.layout().root()));
-        Selection.Chosen chosen = clock.time(PhaseClock.GENERATE, () -> generate(project.layout(), change));
+        Selection.Chosen whole = clock.time(PhaseClock.GENERATE, () -> generate(project.layout(), change));
+        Selection.Chosen chosen = request.shard().map(shard -> inShard(whole, shard)).orElse(whole);
         checkNotStopped();
 
         Path work = project.layout().changelingDirectory();
@@ -151,12 +154,20 @@ public final class MutationRun {
                 TimeoutRecheck.run(workers, plan.jobs(), finished, request.deadlines(), plan::label, listener);
             }
         }
-        CompiledAlike alike = stopped ? CompiledAlike.NONE
-                : clock.time(PhaseClock.COMPARE, () -> SurvivorComparison.compare(chosen, results, compileClasspath));
+        CompiledAlike alike = stopped ? CompiledAlike.NONE : clock.time(PhaseClock.COMPARE,
+                () -> SurvivorComparison.compare(chosen, results, compileClasspath, request.shard().isPresent()));
         if (alike.compared() > 0) {
             listener.phase(SurvivorComparison.describe(alike));
         }
-        return record(chosen, change, results, tests, complete, clock, alike);
+        return record(whole, chosen, change, results, tests, complete, clock, alike);
+    }
+
+    /** The shard's part of the chosen mutants, said in a line. */
+    private Selection.Chosen inShard(Selection.Chosen whole, Shard shard) {
+        Selection.Chosen part = whole.inShard(shard);
+        listener.phase("shard " + shard + ": " + part.mutants().size() + " of the " + whole.mutants().size()
+                + " mutants; merge the results files of all " + shard.count() + " shards with 'changeling merge'");
+        return part;
     }
 
     /**
@@ -215,22 +226,31 @@ public final class MutationRun {
         return TestJvm.settings(project.suite(), request, classpath, work.resolve("workers"), project.layout());
     }
 
-    private RunResults record(Selection.Chosen chosen, Optional<ChangeScope> change, Map<String, MutantResult> results,
-                              List<TestRecord> tests, boolean complete, PhaseClock clock, CompiledAlike alike) {
+    /**
+     * The results of the mutants {@code chosen} for this run. A shard's results also keep the whole selection, and
+     * hash the files of every mutant in it, so that every shard of a run holds the same hashes and a merge can tell.
+     */
+    private RunResults record(Selection.Chosen whole, Selection.Chosen chosen, Optional<ChangeScope> change,
+                              Map<String, MutantResult> results, List<TestRecord> tests, boolean complete, PhaseClock clock,
+                              CompiledAlike alike) {
         List<MutantResult> ordered = chosen.mutants().stream()
                 .map(mutant -> results.get(mutant.fingerprint()))
                 .filter(Objects::nonNull)
                 .distinct()
                 .toList();
+        ShardRecord shard = request.shard()
+                .map(share -> new ShardRecord(share.index(), share.count(), whole.mutants().stream().map(Mutant::fingerprint).toList()))
+                .orElse(null);
+        List<String> hashed = (shard == null ? ordered.stream().map(MutantResult::file) : whole.mutants().stream().map(Mutant::file))
+                .toList();
         return new RunResults(RunResults.FORMAT, complete, request.settings(chosen, change.map(ChangeScope::description)),
                 tests, clock.withTotal(), ordered, chosen.generated().problems().stream().map(Object::toString).toList(),
-                hashes(chosen.generated().files(), ordered), chosen.generated().notMade(), alike);
+                hashes(chosen.generated().files(), hashed), chosen.generated().notMade(), alike, shard);
     }
 
-    private static Map<String, String> hashes(Map<String, SourceFile> files, List<MutantResult> results) {
+    private static Map<String, String> hashes(Map<String, SourceFile> files, List<String> paths) {
         Map<String, String> hashes = new java.util.TreeMap<>();
-        results.stream().map(MutantResult::file).distinct()
-                .forEach(path -> hashes.put(path, SourceHash.sha256(files.get(path).text())));
+        paths.stream().distinct().forEach(path -> hashes.put(path, SourceHash.sha256(files.get(path).text())));
         return hashes;
     }
 

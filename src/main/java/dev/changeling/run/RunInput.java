@@ -5,6 +5,7 @@ import dev.changeling.UserError;
 import dev.changeling.execution.Deadlines;
 import dev.changeling.execution.WorkerSettings;
 import dev.changeling.mutant.SelectionInput;
+import dev.changeling.mutant.Shard;
 import dev.changeling.project.DiscoveryOptions;
 import dev.changeling.project.ExplicitProject;
 import dev.changeling.project.ProjectLayout;
@@ -31,11 +32,12 @@ import java.util.Optional;
  * @param skipTags         JUnit tags to leave out
  * @param recheckTimeouts  whether timed-out mutants run again with ten times their deadline afterwards
  * @param everyTest        whether every reaching test runs against every mutant (the full kill matrix)
+ * @param shard            the share of the mutants to run as typed ({@link Shard#FORM}), or null for all
  */
 public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, SelectionInput selection,
                        Optional<ChangeSpec> change, List<String> mavenArguments, Integer workers, double timeFactor,
                        long timeExtraMillis, String workerHeap, int mutantsPerWorker, List<String> skipTests,
-                       List<String> skipTags, boolean recheckTimeouts, boolean everyTest) {
+                       List<String> skipTags, boolean recheckTimeouts, boolean everyTest, String shard) {
 
     public RunInput {
         paths = List.copyOf(paths);
@@ -67,10 +69,23 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         if (mutantsPerWorker < 1) {
             throw usage("--mutants-per-worker takes a positive number, not " + mutantsPerWorker);
         }
+        Optional<Shard> share = parsedShard();
         ProjectLayout layout = ProjectLayout.locate(paths, explicit);
         DiscoveryOptions discovery = new DiscoveryOptions(Optional.empty(), mavenArguments, explicit);
         return new RunRequest(layout, layout.limits(paths), ProjectSelection.of(selection, change.isPresent(), layout), change, discovery, workerCount, deadlines,
-                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest);
+                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest, share);
+    }
+
+    private Optional<Shard> parsedShard() {
+        if (shard == null) {
+            return Optional.empty();
+        }
+        try {
+            return Optional.of(Shard.parse(shard));
+        } catch (IllegalArgumentException e) {
+            throw usage("--shard '" + shard + "': " + e.getMessage() + "; give " + Shard.FORM
+                    + ", shard I of N, such as --shard 2/3");
+        }
     }
 
     private static UserError usage(String message) {

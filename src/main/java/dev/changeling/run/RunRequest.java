@@ -8,6 +8,7 @@ import dev.changeling.mutant.LineBudget;
 import dev.changeling.mutant.MutantRequest;
 import dev.changeling.mutant.Point;
 import dev.changeling.mutant.Selection;
+import dev.changeling.mutant.Shard;
 import dev.changeling.mutant.Suppressions;
 import dev.changeling.operator.MutationOperator;
 import dev.changeling.operator.Operators;
@@ -41,6 +42,7 @@ import java.util.function.Predicate;
  *                         see whether the deadlines were long enough
  * @param everyTest        whether every reaching test runs against every mutant, for the full kill matrix, rather than
  *                         stopping at the first failure
+ * @param shard            the share of the chosen mutants this run runs, when the run is cut into shards
  */
 public record RunRequest(
         ProjectLayout layout,
@@ -55,7 +57,8 @@ public record RunRequest(
         List<String> skipTests,
         List<String> skipTags,
         boolean recheckTimeouts,
-        boolean everyTest) {
+        boolean everyTest,
+        Optional<Shard> shard) {
 
     public RunRequest {
         limits = List.copyOf(limits);
@@ -99,6 +102,6 @@ public record RunRequest(
                 Selection.all(request, recorded.seed()), Optional.empty(), discovery, 1,
                 new Deadlines(recorded.timeFactor(), recorded.timeExtraMillis()), Optional.ofNullable(recorded.workerHeap()),
                 recorded.mutantsPerWorker() > 0 ? recorded.mutantsPerWorker() : WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
-                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest());
+                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest(), Optional.empty());
     }
 }

@@ -21,7 +21,9 @@ final class SurvivorComparison {
     private SurvivorComparison() {
     }
 
-    static CompiledAlike compare(Selection.Chosen chosen, Map<String, MutantResult> results, List<Path> classpath) {
+    /** @param sharded whether the run is a shard of one, whose merge needs each survivor's shape to find duplicates across shards */
+    static CompiledAlike compare(Selection.Chosen chosen, Map<String, MutantResult> results, List<Path> classpath,
+                                 boolean sharded) {
         List<Mutant> survivors = chosen.mutants().stream()
                 .filter(mutant -> results.containsKey(mutant.fingerprint()))
                 .filter(mutant -> results.get(mutant.fingerprint()).verdict() == Verdict.SURVIVED)
@@ -29,7 +31,8 @@ final class SurvivorComparison {
         CompilerEquivalence.Findings findings = CompilerEquivalence.compare(survivors, chosen.generated().files(), classpath);
         Map<String, String> asOriginal = new TreeMap<>();
         findings.asOriginal().forEach((id, match) -> asOriginal.put(id, match.name().toLowerCase(Locale.ROOT)));
-        return new CompiledAlike(asOriginal, findings.duplicates(), findings.compared());
+        return new CompiledAlike(asOriginal, findings.duplicates(), findings.compared(),
+                sharded ? findings.shapes() : Map.of());
     }
 
     /** One line for the run's progress. */

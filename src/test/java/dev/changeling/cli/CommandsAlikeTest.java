@@ -22,7 +22,7 @@ class CommandsAlikeTest {
 
     @ParameterizedTest
     @ValueSource(strings = {"run", "mutants", "triage", "export", "equivalents", "equivalents show", "equivalents stale",
-        "equivalents prune", "equivalents add", "equivalents drop", "operators", "insights"})
+        "equivalents prune", "equivalents add", "equivalents drop", "operators", "insights", "merge"})
     void everyCommandListsItsExitCodesAndTakesTheOutputOptions(String command) {
         List<String> words = List.of(command.split(" "));
         CommandOutcome help = CommandOutcome.of(concat(words, "--help"));

@@ -48,6 +48,7 @@ class ExitCodesTest {
     static Stream<Arguments> rows() throws IOException {
         String p = project().toString();
         String empty = Files.createDirectories(folder.resolve("empty")).toString();
+        String results = ProjectLayout.of(Path.of(p)).resultsFile().toString();
         return Stream.of(
                 row(ExitCode.OK, "", "operators"),
                 row(ExitCode.OK, "", "export", p),
@@ -71,6 +72,12 @@ class ExitCodesTest {
                 row(ExitCode.USAGE, "changeling: --time-factor/--time-extra:", "run", p, "--time-factor", "0.5"),
                 row(ExitCode.USAGE, "changeling: unknown operator 'no-such-op'", "mutants", p, "--operators", "no-such-op"),
                 row(ExitCode.USAGE, "changeling: --per-line limits the mutants on each line of a change", "run", p, "--per-line", "2"),
+                row(ExitCode.USAGE, "changeling: --shard '0/3': I, the shard, must be from 1 to 3", "run", p, "--shard", "0/3"),
+                row(ExitCode.USAGE, "changeling: --shard '4/3': I, the shard, must be from 1 to 3", "run", p, "--shard", "4/3"),
+                row(ExitCode.USAGE, "changeling: --shard 'x': it is not of the form I/N", "run", p, "--shard", "x"),
+                row(ExitCode.SHARDS_APART, "changeling: " + results + ": these are the results of a whole run, not of a shard",
+                        "merge", results, "--into", folder.resolve("merged.json").toString()),
+                row(ExitCode.USER_ERROR, "changeling: " + folder.resolve("nowhere.json"), "merge", folder.resolve("nowhere.json").toString()),
                 row(ExitCode.USAGE, "Unknown option: '--no-such-option'", "export", p, "--no-such-option"),
                 row(ExitCode.USAGE, "Invalid value for option '--workers'", "run", p, "--workers", "many"),
                 row(ExitCode.SCORE_TOO_LOW, "changeling: 1 of 2 mutants detected is a score under --min-score 0.75", "export", p,
