@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.changeling.UserError;
 import dev.changeling.ExitCode;
 import java.nio.file.Files;
@@ -79,5 +80,35 @@ class ResultsFileTest {
                     || error.getMessage().contains("dev.changeling"), error.getMessage());
             assertEquals(ExitCode.USER_ERROR, error.exitCode());
         }
+    }
+
+    @Test
+    void aWholeRunsFileHasNoShardFields_andAShardsKeepsThem() throws Exception {
+        Path file = folder.resolve("results.json");
+        ResultsFile.write(file, results());
+        JsonNode whole = new ObjectMapper().readTree(file.toFile());
+        assertFalse(whole.has("shard"));
+        assertFalse(whole.get("compiledAlike").has("shapes"));
+
+        RunResults plain = results();
+        RunResults shard = new RunResults(plain.format(), true, plain.settings(), plain.tests(), plain.timings(), plain.mutants(),
+                plain.problems(), plain.sourceHashes(), plain.notMade(),
+                new CompiledAlike(Map.of(), List.of(), 1, Map.of("f1", "ab".repeat(32))), new ShardRecord(2, 3, List.of("f0", "f1")));
+        ResultsFile.write(file, shard);
+        assertEquals(shard, ResultsFile.read(file));
+    }
+
+    @Test
+    void aFileWrittenBeforeShardsExisted_stillLoads_asAWholeRun() throws Exception {
+        Path file = folder.resolve("results.json");
+        ResultsFile.write(file, results());
+        ObjectMapper json = new ObjectMapper();
+        ObjectNode tree = (ObjectNode) json.readTree(file.toFile());
+        tree.remove("compiledAlike");
+        json.writeValue(file.toFile(), tree);
+
+        RunResults read = ResultsFile.read(file);
+        assertEquals(null, read.shard());
+        assertEquals(CompiledAlike.NONE, read.compiledAlike());
     }
 }
