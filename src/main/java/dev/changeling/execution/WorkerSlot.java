@@ -100,13 +100,13 @@ final class WorkerSlot {
             if (!failuresPassUnmutated(job.key(), result)) {
                 // A killing test fails without the mutant too: an earlier mutant's tests left this worker's
                 // static state broken (a test class's shared fixture, say). Only a fresh worker gives the verdict.
-                retire();
+                retire(WorkerTime.Replacement.KILL_CHECK_FAILED);
                 pool.throwIfStopped();
                 result = runInWorker(job);
             }
             if (result.outcome() == Outcome.CRASHED) {
                 String death = worker == null ? null : worker.death();
-                retire();
+                retire(WorkerTime.Replacement.CRASHED);
                 pool.throwIfStopped();
                 result = CrashCheck.settle(result, death, runInWorker(job));
             }
@@ -118,15 +118,17 @@ final class WorkerSlot {
         // A kill can come from a worker that is gone: every test was run, and a later one ran past its deadline or
         // crashed the worker.
         boolean workerGone = worker == null || !worker.alive();
-        if (workerGone || result.outcome() == Outcome.CRASHED || exhaustedMemory(result)) {
-            retire();
+        if (workerGone || result.outcome() == Outcome.CRASHED) {
+            retire(workerGone ? WorkerTime.Replacement.GONE : WorkerTime.Replacement.CRASHED);
+        } else if (exhaustedMemory(result)) {
+            retire(WorkerTime.Replacement.HEAP_EXHAUSTED);
         } else if (result.stoppedTest() != null) {
             if (!classPassesUnmutated(job.key(), result.stoppedTest())) {
-                retire();
+                retire(WorkerTime.Replacement.CLASS_CHECK_FAILED);
             }
         } else if (mutantsOnWorker >= settings.mutantsPerWorker()) {
             time.timed(WorkerTime.Use.ENDS, worker::close);
-            retire();
+            retire(WorkerTime.Replacement.SHARE_DONE);
         }
         return result;
     }
@@ -318,6 +320,14 @@ final class WorkerSlot {
 
     /** Ends the current worker the way a test JVM ends (killed only if it will not), and empties its temp folder. */
     private void retire() {
+        retire(null);
+    }
+
+    /** {@link #retire()}, counting why the worker is replaced when it is. */
+    private void retire(WorkerTime.Replacement why) {
+        if (worker != null && why != null) {
+            time.replaced(why);
+        }
         if (worker != null) {
             time.timed(WorkerTime.Use.ENDS, worker::end);
         }

@@ -1,5 +1,6 @@
 package dev.changeling.execution;
 
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.Locale;
 import java.util.Map;
@@ -26,6 +27,23 @@ public final class WorkerTime {
         }
     }
 
+    /** Why a worker was replaced while mutants ran. */
+    public enum Replacement {
+        SHARE_DONE("after their share of mutants"),
+        CLASS_CHECK_FAILED("after a stopped test's class failed unmutated"),
+        KILL_CHECK_FAILED("after a killing test failed unmutated"),
+        GONE("ended at a deadline or dead"),
+        CRASHED("crashed"),
+        HEAP_EXHAUSTED("after their heap ran out");
+
+        private final String words;
+
+        Replacement(String words) {
+            this.words = words;
+        }
+    }
+
+    private final Map<Replacement, LongAdder> replacements = new EnumMap<>(Replacement.class);
     private final Map<Use, LongAdder> nanos = new EnumMap<>(Use.class);
     private final Map<Use, LongAdder> counts = new EnumMap<>(Use.class);
 
@@ -33,6 +51,9 @@ public final class WorkerTime {
         for (Use use : Use.values()) {
             nanos.put(use, new LongAdder());
             counts.put(use, new LongAdder());
+        }
+        for (Replacement why : Replacement.values()) {
+            replacements.put(why, new LongAdder());
         }
     }
 
@@ -59,6 +80,15 @@ public final class WorkerTime {
         });
     }
 
+    /** Counts a worker replaced for this reason. */
+    void replaced(Replacement why) {
+        replacements.get(why).increment();
+    }
+
+    public long replacements(Replacement why) {
+        return replacements.get(why).sum();
+    }
+
     public long nanos(Use use) {
         return nanos.get(use).sum();
     }
@@ -67,11 +97,19 @@ public final class WorkerTime {
         return counts.get(use).sum();
     }
 
-    /** One line: each use with its seconds and how many times, those that never happened left out. */
+    /**
+     * One line: each use with its seconds and how many times, then how many workers were replaced and why, those that
+     * never happened left out.
+     */
     public String describe() {
-        return "worker time: " + java.util.Arrays.stream(Use.values())
+        String uses = Arrays.stream(Use.values())
                 .filter(use -> count(use) > 0)
                 .map(use -> String.format(Locale.ROOT, "%s %.1f s (%d)", use.words, nanos(use) / 1e9, count(use)))
                 .collect(Collectors.joining(" · "));
+        String replaced = Arrays.stream(Replacement.values())
+                .filter(why -> replacements(why) > 0)
+                .map(why -> replacements(why) + " " + why.words)
+                .collect(Collectors.joining(", "));
+        return "worker time: " + uses + (replaced.isEmpty() ? "" : "; replaced: " + replaced);
     }
 }

@@ -1,0 +1,28 @@
+package dev.changeling.execution;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.junit.jupiter.api.Test;
+
+class WorkerTimeTest {
+
+    @Test
+    void describesEachUseThatHappened_withItsSecondsAndCount_thenTheReplacements() {
+        WorkerTime time = new WorkerTime();
+        time.add(WorkerTime.Use.MUTANTS, 1_500_000_000L);
+        time.add(WorkerTime.Use.MUTANTS, 500_000_000L);
+        time.add(WorkerTime.Use.KILL_CHECKS, 250_000_000L);
+        time.replaced(WorkerTime.Replacement.SHARE_DONE);
+        time.replaced(WorkerTime.Replacement.SHARE_DONE);
+        assertEquals("worker time: mutants' tests 2.0 s (2) · kill checks 0.3 s (1); replaced: 2 after their share of mutants",
+                time.describe());
+    }
+
+    @Test
+    void timesWhatItRuns_andHandsBackItsAnswer() {
+        WorkerTime time = new WorkerTime();
+        assertEquals("done", time.timed(WorkerTime.Use.WARM_UPS, () -> "done"));
+        assertEquals(1, time.count(WorkerTime.Use.WARM_UPS));
+        assertEquals("worker time: warm-ups 0.0 s (1)", time.describe());
+    }
+}
