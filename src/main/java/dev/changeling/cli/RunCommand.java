@@ -110,6 +110,11 @@ final class RunCommand implements Callable<Integer> {
                     + " (see docs/ci-sharding.md).")
     String shard;
 
+    @Option(names = "--module", paramLabel = "PATH",
+            description = "At the root of a multi-module build, analyse only this module (its folder from the root, e.g. core);"
+                    + " by default every module with tests of its own is analysed, each against its own tests.")
+    String module;
+
     @Option(names = "--maven-arg", paramLabel = "ARG", description = "Pass an argument to every mvn call, e.g. -o or -s settings.xml (repeatable).")
     List<String> mavenArguments = new ArrayList<>();
 
@@ -121,7 +126,7 @@ final class RunCommand implements Callable<Integer> {
         Gate gate = new Gate(false, minScore);
         RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
                 workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts,
-                everyTest, shard).resolve();
+                everyTest, shard, module).resolve();
         ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
@@ -208,12 +213,14 @@ final class RunCommand implements Callable<Integer> {
 
         @Override
         public void phase(String line) {
+            close();
             err.println("  " + line);
             err.flush();
         }
 
         @Override
         public void running(int mutants) {
+            close();
             progress = Progress.onStandardError(mutants, plain);
         }
 

@@ -40,6 +40,11 @@ final class RunReport {
             out.println(style.yellow(standing.unreadSummary() + ":"));
             standing.unreadFiles().forEach(problem -> out.println("  " + problem));
         }
+        List<String> modules = Summary.modules(standing);
+        if (!modules.isEmpty()) {
+            out.println("by module (each module's mutants against its own tests):");
+            modules.forEach(module -> out.println("  " + module));
+        }
         if (score.byFile().size() > 1) {
             out.println("by file:");
             fileTable(out, score, LineCoverage.byFile(results.mutants(), score.equivalent()));

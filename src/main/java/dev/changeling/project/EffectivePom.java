@@ -34,13 +34,7 @@ final class EffectivePom {
      * {@code buildDirectory} is taken.
      */
     static EffectivePom read(Path file, Path buildDirectory) {
-        Element root;
-        try {
-            root = XmlElements.root(file);
-        } catch (SAXException | IOException e) {
-            throw new UserError(file + ": Maven's effective POM cannot be read (" + e.getMessage()
-                    + "); delete the build directory and run again");
-        }
+        Element root = rootOf(file);
         if (!root.getTagName().equals("projects")) {
             return new EffectivePom(root);
         }
@@ -53,6 +47,28 @@ final class EffectivePom {
                 .map(EffectivePom::new)
                 .orElseThrow(() -> new UserError(file + ": Maven's effective POM has no module building into " + wanted
                         + "; delete the build directory and run again"));
+    }
+
+    /**
+     * The build directory of every module the file holds, in the order Maven wrote them: the reactor's order, in
+     * which each module comes after the modules it needs.
+     */
+    static List<Path> buildDirectories(Path file) {
+        Element root = rootOf(file);
+        List<Element> projects = root.getTagName().equals("projects") ? children(root, "project") : List.of(root);
+        return projects.stream()
+                .flatMap(project -> child(project, "build").flatMap(build -> child(build, "directory")).stream())
+                .map(directory -> Path.of(text(directory)).toAbsolutePath().normalize())
+                .toList();
+    }
+
+    private static Element rootOf(Path file) {
+        try {
+            return XmlElements.root(file);
+        } catch (SAXException | IOException e) {
+            throw new UserError(file + ": Maven's effective POM cannot be read (" + e.getMessage()
+                    + "); delete the build directory and run again");
+        }
     }
 
     /** The model's properties, as Maven resolved them. */

@@ -68,9 +68,7 @@ final class MavenDiscovery {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        List<String> build = List.of("test-compile", CachedMavenResolver.DEPENDENCY_PLUGIN + ":build-classpath",
-                "-Dmdep.outputFile=" + classpathFile, "-Dmdep.includeScope=test",
-                EffectivePom.HELP_PLUGIN + ":effective-pom", "-Doutput=" + effectivePom);
+        List<String> build = goals(classpathFile.toString(), effectivePom);
         Optional<Reactor> reactor = Reactor.around(module);
         Maven.Run run;
         if (reactor.isPresent() && Files.isRegularFile(reactorMarker)) {
@@ -87,6 +85,26 @@ final class MavenDiscovery {
         if (!run.succeeded()) {
             throw run.failure("mvn could not compile " + module);
         }
+        Compiled compiled = afterwards(run, module, folders, classpathFile, effectivePom, maven,
+                String.format(java.util.Locale.ROOT, "compiled and found the test classpath in %.1f s", maven.totalTime().toMillis() / 1000.0));
+        inputs.write(memoFile);
+        return compiled;
+    }
+
+    /**
+     * The goals of the one mvn call: compile main and test code, write the test classpath to {@code classpathFile}
+     * (an expression Maven fills in per module, such as {@code ${project.build.directory}}, may be part of it) and the
+     * effective POM to {@code effectivePom}.
+     */
+    static List<String> goals(String classpathFile, Path effectivePom) {
+        return List.of("test-compile", CachedMavenResolver.DEPENDENCY_PLUGIN + ":build-classpath",
+                "-Dmdep.outputFile=" + classpathFile, "-Dmdep.includeScope=test",
+                EffectivePom.HELP_PLUGIN + ":effective-pom", "-Doutput=" + effectivePom);
+    }
+
+    /** What a successful mvn call left for one module, checked: its test classpath, its compiled tests, its effective POM. */
+    static Compiled afterwards(Maven.Run run, Path module, PomFile.BuildFolders folders, Path classpathFile, Path effectivePom,
+                               Maven maven, String how) {
         if (!Files.isRegularFile(classpathFile)) {
             throw run.failure("mvn finished but wrote no test classpath to " + classpathFile);
         }
@@ -97,10 +115,7 @@ final class MavenDiscovery {
         if (!Files.isRegularFile(effectivePom)) {
             throw run.failure("mvn finished but wrote no effective POM to " + effectivePom);
         }
-        Compiled compiled = compiled(module, folders, classpathFile, EffectivePom.read(effectivePom, folders.directory()), maven,
-                String.format(java.util.Locale.ROOT, "compiled and found the test classpath in %.1f s", maven.totalTime().toMillis() / 1000.0));
-        inputs.write(memoFile);
-        return compiled;
+        return compiled(module, folders, classpathFile, EffectivePom.read(effectivePom, folders.directory()), maven, how);
     }
 
     /**

@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Finds what a run needs to know of a project: it compiles a Maven project through the real mvn (one call)
@@ -37,7 +38,44 @@ public final class ProjectDiscovery {
             throw new UserError(root + ": no pom.xml here; give a Maven project folder, or name the source folders,"
                     + " classes, test classes and classpath by hand (--source-root, --classes, --test-classes, --classpath)");
         }
-        MavenDiscovery.Compiled compiled = MavenDiscovery.compile(root, maven.get());
+        return finish(layout, MavenDiscovery.compile(root, maven.get()), maven);
+    }
+
+    /**
+     * Discovers the modules a run analyses: for the root of a multi-module build, every module with main sources and
+     * tests of its own, or only the one {@code module} names, compiled by one mvn call from the root, in the reactor's
+     * order; for any other project, the project as its only module.
+     *
+     * @param module the path of the one module to analyse, if one was picked; checked before mvn runs
+     * @throws UserError as {@link #discover(ProjectLayout, DiscoveryOptions)}, and when no module has tests of its own
+     */
+    public static List<DiscoveredModule> discoverModules(ProjectLayout layout, DiscoveryOptions options, Optional<String> module) {
+        Path root = layout.root();
+        Optional<CodeModule> picked = module.map(path -> CodeModule.named(root, path));
+        List<CodeModule> modules = options.explicitProject().isPresent() ? List.of() : CodeModule.below(root);
+        if (modules.isEmpty()) {
+            return List.of(new DiscoveredModule("", discover(layout, options), List.of()));
+        }
+        List<CodeModule> chosen = picked.map(List::of).orElseGet(() -> modules.stream().filter(CodeModule::hasTests).toList());
+        if (chosen.isEmpty()) {
+            throw new UserError(root + ": none of its modules (" + CodeModule.paths(modules)
+                    + ") has tests of its own; changeling runs each module's mutants against that module's tests");
+        }
+        LazyMaven maven = new LazyMaven(options);
+        List<ReactorBuild.Built> built = ReactorBuild.compile(root, layout.changelingDirectory(), chosen, picked.isPresent(), maven.get());
+        List<DiscoveredModule> discovered = new ArrayList<>();
+        for (ReactorBuild.Built one : built) {
+            MavenDiscovery.Compiled compiled = one.compiled();
+            List<String> testedAlsoBy = built.stream()
+                    .filter(other -> other != one && other.compiled().dependencies().contains(compiled.classes()))
+                    .map(other -> other.module().path())
+                    .toList();
+            discovered.add(new DiscoveredModule(one.module().path(), finish(layout.module(one.module()), compiled, maven), testedAlsoBy));
+        }
+        return List.copyOf(discovered);
+    }
+
+    private static DiscoveredProject finish(ProjectLayout layout, MavenDiscovery.Compiled compiled, LazyMaven maven) {
         List<Path> compileClasspath = new ArrayList<>();
         compileClasspath.add(compiled.classes());
         compileClasspath.addAll(compiled.dependencies());

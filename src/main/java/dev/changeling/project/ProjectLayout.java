@@ -24,7 +24,8 @@ public record ProjectLayout(Path root, List<Path> sourceRoots, List<Path> testRo
      * The layout of the project a path belongs to, worked out once for every command: the folders given by
      * hand when there are any; else, from the nearest folder upward with a pom.xml, the folders that pom
      * names ({@code sourceDirectory}, {@code testSourceDirectory}, {@code directory}, Maven's defaults
-     * otherwise); else the folder itself as a plain folder of sources.
+     * otherwise), and for an aggregator pom the folders of every module below it with main sources (its results in
+     * the aggregator's build directory); else the folder itself as a plain folder of sources.
      *
      * @param given    a project folder, or a file or folder inside it
      * @param explicit the folders given by hand, if any
@@ -51,7 +52,26 @@ public record ProjectLayout(Path root, List<Path> sourceRoots, List<Path> testRo
             return new ProjectLayout(root, List.of(root), List.of(), root.resolve("target"));
         }
         PomFile.BuildFolders folders = PomFile.read(root.resolve("pom.xml")).folders();
+        List<CodeModule> modules = CodeModule.below(root);
+        if (!modules.isEmpty()) {
+            return new ProjectLayout(root, modules.stream().map(CodeModule::sources).toList(),
+                    modules.stream().map(CodeModule::testSources).toList(), folders.directory());
+        }
         return new ProjectLayout(root, List.of(folders.sources()), List.of(folders.testSources()), folders.directory());
+    }
+
+    /**
+     * This multi-module build's layout with the folders of these modules' layouts ({@link #module}) only: what a run of
+     * some of its modules mutates, its results still below this build directory.
+     */
+    public ProjectLayout withModules(List<ProjectLayout> modules) {
+        return new ProjectLayout(root, modules.stream().flatMap(module -> module.sourceRoots().stream()).toList(),
+                modules.stream().flatMap(module -> module.testRoots().stream()).toList(), buildDirectory);
+    }
+
+    /** One module of this build: its own folders and build directory, every path still relative to this root. */
+    public ProjectLayout module(CodeModule module) {
+        return new ProjectLayout(root, List.of(module.sources()), List.of(module.testSources()), module.buildDirectory());
     }
 
     /** The layout of the project the first of the paths a user typed belongs to (the current folder for none). */

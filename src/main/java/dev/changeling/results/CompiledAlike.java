@@ -59,6 +59,17 @@ public record CompiledAlike(Map<String, String> asOriginal, List<List<String>> d
         return new CompiledAlike(asOriginal, duplicates, compared);
     }
 
+    /** What both comparisons found, as for one run: those of two modules of a build, whose survivors are apart. */
+    public CompiledAlike plus(CompiledAlike other) {
+        Map<String, String> both = new TreeMap<>(asOriginal);
+        both.putAll(other.asOriginal);
+        List<List<String>> groups = new ArrayList<>(duplicates);
+        groups.addAll(other.duplicates);
+        Map<String, String> allShapes = new HashMap<>(shapes);
+        allShapes.putAll(other.shapes);
+        return new CompiledAlike(both, groups, compared + other.compared, allShapes);
+    }
+
     /** How many survivors repeat another one's classes (the first of each group not counted). */
     @JsonIgnore
     public int duplicateCount() {

@@ -22,6 +22,8 @@ import java.util.Map;
  *                  per-line budget); empty when none
  * @param compiledAlike what compiling each survivor on its own found: proposed equivalents and duplicates
  * @param shard     which share of a sharded run this is, or null for a whole run (and for merged shards)
+ * @param modules   the modules of a multi-module build the run analysed, each with its own tests, in the reactor's
+ *                  order; empty for a project of one module (and in files written before modules were kept)
  */
 public record RunResults(
         int format,
@@ -34,20 +36,22 @@ public record RunResults(
         Map<String, String> sourceHashes,
         Map<String, Integer> notMade,
         CompiledAlike compiledAlike,
-        @JsonInclude(JsonInclude.Include.NON_NULL) ShardRecord shard) {
+        @JsonInclude(JsonInclude.Include.NON_NULL) ShardRecord shard,
+        List<ModuleRecord> modules) {
 
     public static final int FORMAT = 2;
 
     public RunResults {
         notMade = notMade == null ? Map.of() : Collections.unmodifiableMap(new TreeMap<>(notMade));
         compiledAlike = compiledAlike == null ? CompiledAlike.NONE : compiledAlike;
+        modules = modules == null ? List.of() : List.copyOf(modules);
     }
 
-    /** Results of a whole run, not a shard of one. */
+    /** Results of a whole run, not a shard of one, of a project of one module. */
     public RunResults(int format, boolean complete, RunSettings settings, List<TestRecord> tests, Map<String, Double> timings,
                       List<MutantResult> mutants, List<String> problems, Map<String, String> sourceHashes,
                       Map<String, Integer> notMade, CompiledAlike compiledAlike) {
-        this(format, complete, settings, tests, timings, mutants, problems, sourceHashes, notMade, compiledAlike, null);
+        this(format, complete, settings, tests, timings, mutants, problems, sourceHashes, notMade, compiledAlike, null, List.of());
     }
 
     /** Results of a run that compared no survivor's classes. */
@@ -76,6 +80,6 @@ public record RunResults(
         List<MutantResult> inside = mutants.stream()
                 .filter(mutant -> limits.stream().anyMatch(limit -> projectRoot.resolve(mutant.file()).normalize().startsWith(limit)))
                 .toList();
-        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes, notMade, compiledAlike, shard);
+        return new RunResults(format, complete, settings, tests, timings, inside, problems, sourceHashes, notMade, compiledAlike, shard, modules);
     }
 }

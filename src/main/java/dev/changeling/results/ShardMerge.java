@@ -144,7 +144,7 @@ public final class ShardMerge {
         boolean complete = shards.stream().allMatch(shard -> shard.results().complete());
         CompiledAlike alike = CompiledAlike.regrouped(shards.stream().map(shard -> shard.results().compiledAlike()).toList(), order);
         return new RunResults(first.format(), complete, first.settings(), first.tests(), timings, mutants, first.problems(),
-                hashes, first.notMade(), alike);
+                hashes, first.notMade(), alike, null, first.modules());
     }
 
     /** The first setting (by its name in the results file) in which two runs differ, leaving out {@link #PER_MACHINE}. */

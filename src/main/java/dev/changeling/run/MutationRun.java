@@ -15,10 +15,13 @@ import dev.changeling.execution.WorkerSettings;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Selection;
 import dev.changeling.mutant.Shard;
+import dev.changeling.project.CodeModule;
+import dev.changeling.project.DiscoveredModule;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.ProjectDiscovery;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.results.CompiledAlike;
+import dev.changeling.results.ModuleRecord;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
 import dev.changeling.results.ShardRecord;
@@ -96,55 +99,116 @@ public final class MutationRun {
     }
 
     /**
-     * The phases in order: discover, generate and narrow, compile the schema, baseline, compile the mutants that
-     * cannot join the schema (only once the suite is known to be green), execute, record.
+     * The phases in order: discover, generate and narrow, then for each module (a project of one module is its only
+     * one): compile the schema, baseline, compile the mutants that cannot join the schema (only once the suite is known
+     * to be green), execute, compare survivors; record.
      */
     private RunResults run() {
         PhaseClock clock = new PhaseClock(listener::starting);
-        DiscoveredProject project = clock.time(PhaseClock.MAVEN, this::discover);
-        listener.phase("maven: " + project.build() + " (" + project.junitSetup() + ")");
+        List<DiscoveredModule> modules = clock.time(PhaseClock.MAVEN, this::discover);
+        boolean several = !modules.get(0).path().isEmpty();
+        listener.phase("maven: " + modules.get(0).project().build() + (several ? "" : " (" + modules.get(0).project().junitSetup() + ")"));
+        if (several) {
+            announce(modules);
+        }
         checkNotStopped();
 
-        Optional<ChangeScope> change = request.change().map(spec -> spec.resolve(project.layout().root()));
-        Selection.Chosen whole = clock.time(PhaseClock.GENERATE, () -> generate(project.layout(), change));
+        ProjectLayout layout = several
+                ? request.layout().withModules(modules.stream().map(module -> module.project().layout()).toList())
+                : modules.get(0).project().layout();
+        Optional<ChangeScope> change = request.change().map(spec -> spec.resolve(layout.root()));
+        Selection.Chosen whole = clock.time(PhaseClock.GENERATE, () -> generate(layout, change));
         Selection.Chosen chosen = request.shard().map(shard -> inShard(whole, shard)).orElse(whole);
         checkNotStopped();
 
+        Map<String, MutantResult> results = new ConcurrentHashMap<>();
+        List<TestRecord> tests = new ArrayList<>();
+        List<ModuleRecord> records = new ArrayList<>();
+        boolean complete = true;
+        CompiledAlike alike = CompiledAlike.NONE;
+        for (DiscoveredModule module : modules) {
+            if (stopped) {
+                complete = false;
+                break;
+            }
+            ModuleRecord record = new ModuleRecord(module.path(), module.testedAlsoBy());
+            List<Mutant> own = chosen.mutants().stream().filter(mutant -> record.holds(mutant.file())).toList();
+            if (several) {
+                records.add(record);
+                listener.phase("module " + module.path() + ": " + own.size() + (own.size() == 1 ? " mutant" : " mutants")
+                        + " (" + module.project().junitSetup() + ")" + testedAlsoByNote(module));
+                if (own.isEmpty()) {
+                    continue;
+                }
+            }
+            ModuleOutcome outcome;
+            try {
+                outcome = runModule(module, own, chosen, clock, results);
+            } catch (RuntimeException failure) {
+                if (!stopped || !mutantsStarted) {
+                    throw failure;
+                }
+                complete = false;
+                break;
+            }
+            tests.addAll(outcome.tests());
+            alike = alike.plus(outcome.alike());
+            if (!outcome.complete()) {
+                complete = false;
+                break;
+            }
+        }
+        return record(whole, chosen, change, results, tests, complete, clock, alike, records);
+    }
+
+    /** What one module's part of the run found. */
+    private record ModuleOutcome(List<TestRecord> tests, boolean complete, CompiledAlike alike) {
+    }
+
+    /**
+     * One module's mutants against its own tests: compile the schema, baseline, compile alone, execute, compare
+     * survivors; verdicts go into {@code results} as they come.
+     */
+    private ModuleOutcome runModule(DiscoveredModule module, List<Mutant> mutants, Selection.Chosen chosen, PhaseClock clock,
+                                    Map<String, MutantResult> results) {
+        DiscoveredProject project = module.project();
         Path work = project.layout().changelingDirectory();
         List<Path> compileClasspath = compileClasspath(project, work);
-        SchemaStage schema = clock.time(PhaseClock.COMPILE, () -> compileSchema(chosen, compileClasspath, work));
+        SchemaStage schema = clock.time(PhaseClock.COMPILE, () -> compileSchema(mutants, chosen, compileClasspath, work));
         checkNotStopped();
 
         Map<String, SourceFile> files = chosen.generated().files();
-        Map<String, MutantResult> results = new ConcurrentHashMap<>();
-        List<TestRecord> tests = List.of();
-        boolean complete = false;
+        Map<String, MutantResult> own = new ConcurrentHashMap<>();
+        List<TestRecord> tests;
+        boolean complete;
         SuiteSetup setup = TestJvm.setup(project.suite(), request, schema.pointCount(), project.productionClasses(), listener);
         try (WorkerPool workers = WorkerPool.open(workerSettings(project, schema.schemaClasses(), work), setup)) {
             pool = workers;
             checkNotStopped();
             Baseline baseline = clock.time(PhaseClock.BASELINE, () -> workers.baseline(name -> { }));
             TestJvm.noteUnusedSkipTags(request, baseline, listener);
-            GreenBaseline.require(baseline, setup, project.layout().root());
+            GreenBaseline.require(baseline, setup, project.layout().root().resolve(module.path()));
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
             listener.phase(String.format(Locale.ROOT, "baseline: %d tests green in %.1f s%s",
                     baseline.tests().size(), baseline.nanos() / 1e9, GreenBaseline.freshWorkers(baseline)));
 
             BuildResult build = clock.time(PhaseClock.COMPILE_ALONE, schema::compileAlone);
-            Placements placements = Placements.of(chosen.mutants(), build, files);
+            Placements placements = Placements.of(mutants, build, files);
             listener.phase("compiled: " + build.pointCount() + " points in one schema in "
                     + build.timings().compileMillis() + " ms; " + build.timings().aloneCompiles() + " mutants compiled alone; "
                     + placements.count(Verdict.STILLBORN) + " stillborn, " + placements.count(Verdict.SKIPPED) + " skipped (run once per JVM)");
-            results.putAll(placements.settled());
+            own.putAll(placements.settled());
             checkNotStopped();
 
             JobPlan plan = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files, request.everyTest());
-            results.putAll(plan.settled());
-            results.values().forEach(listener::finished);
+            own.putAll(plan.settled());
+            results.putAll(own);
+            own.values().forEach(listener::finished);
             listener.running(plan.jobs().size());
             mutantsStarted = true;
             List<JobResult> finished = clock.time(PhaseClock.EXECUTE, () -> workers.run(plan.jobs(), job -> {
                 MutantResult result = plan.resultOf(job, files);
+                own.put(job.key(), result);
                 results.put(job.key(), result);
                 listener.finished(result);
             }));
@@ -154,12 +218,13 @@ public final class MutationRun {
                 TimeoutRecheck.run(workers, plan.jobs(), finished, request.deadlines(), plan::label, listener);
             }
         }
-        CompiledAlike alike = stopped ? CompiledAlike.NONE : clock.time(PhaseClock.COMPARE,
-                () -> SurvivorComparison.compare(chosen, results, compileClasspath, request.shard().isPresent()));
+        CompiledAlike alike = stopped ? CompiledAlike.NONE
+                : clock.time(PhaseClock.COMPARE, () -> SurvivorComparison.compare(mutants, files, own, compileClasspath,
+                        request.shard().isPresent()));
         if (alike.compared() > 0) {
             listener.phase(SurvivorComparison.describe(alike));
         }
-        return record(whole, chosen, change, results, tests, complete, clock, alike);
+        return new ModuleOutcome(tests, complete, alike);
     }
 
     /** The shard's part of the chosen mutants, said in a line. */
@@ -170,17 +235,37 @@ public final class MutationRun {
         return part;
     }
 
+    /** The modules in the reactor's order, and those left out for want of tests of their own; or the one picked. */
+    private void announce(List<DiscoveredModule> modules) {
+        if (request.module().isPresent()) {
+            listener.phase("modules: " + request.module().get() + " alone (--module), against its own tests");
+            return;
+        }
+        listener.phase("modules: " + String.join(", ", modules.stream().map(DiscoveredModule::path).toList())
+                + " (in the reactor's order); each module's mutants run against its own tests");
+        List<CodeModule> untested = CodeModule.below(request.layout().root()).stream().filter(module -> !module.hasTests()).toList();
+        if (!untested.isEmpty()) {
+            listener.phase("modules: left out, having no tests of their own: " + CodeModule.paths(untested));
+        }
+    }
+
+    private static String testedAlsoByNote(DiscoveredModule module) {
+        return module.testedAlsoBy().isEmpty() ? ""
+                : "; its classes are also on the test classpath of " + String.join(", ", module.testedAlsoBy())
+                        + ", whose tests do not run against its mutants";
+    }
+
     /**
      * Builds the project where a stop can interrupt it: mvn is ended then, and whatever the build says after that
      * (mvn's own exit on the same Ctrl-C, say) is reported as the interruption it is.
      */
-    private DiscoveredProject discover() {
+    private List<DiscoveredModule> discover() {
         synchronized (this) {
             checkNotStopped();
             building = Thread.currentThread();
         }
         try {
-            return ProjectDiscovery.discover(request.layout(), request.discovery());
+            return ProjectDiscovery.discoverModules(request.layout(), request.discovery(), request.module());
         } catch (RuntimeException failure) {
             if (stopped) {
                 throw new UserError("interrupted while the project was being built; nothing was written", ExitCode.INTERRUPTED);
@@ -214,8 +299,8 @@ public final class MutationRun {
         return compileClasspath;
     }
 
-    private static SchemaStage compileSchema(Selection.Chosen chosen, List<Path> compileClasspath, Path work) {
-        return MutantBuild.compileSchema(new BuildRequest(chosen.mutants(), chosen.generated().files(), compileClasspath,
+    private static SchemaStage compileSchema(List<Mutant> mutants, Selection.Chosen chosen, List<Path> compileClasspath, Path work) {
+        return MutantBuild.compileSchema(new BuildRequest(mutants, chosen.generated().files(), compileClasspath,
                 work.resolve("build")));
     }
 
@@ -232,7 +317,7 @@ public final class MutationRun {
      */
     private RunResults record(Selection.Chosen whole, Selection.Chosen chosen, Optional<ChangeScope> change,
                               Map<String, MutantResult> results, List<TestRecord> tests, boolean complete, PhaseClock clock,
-                              CompiledAlike alike) {
+                              CompiledAlike alike, List<ModuleRecord> modules) {
         List<MutantResult> ordered = chosen.mutants().stream()
                 .map(mutant -> results.get(mutant.fingerprint()))
                 .filter(Objects::nonNull)
@@ -245,7 +330,7 @@ public final class MutationRun {
                 .toList();
         return new RunResults(RunResults.FORMAT, complete, request.settings(chosen, change.map(ChangeScope::description)),
                 tests, clock.withTotal(), ordered, chosen.generated().problems().stream().map(Object::toString).toList(),
-                hashes(chosen.generated().files(), hashed), chosen.generated().notMade(), alike, shard);
+                hashes(chosen.generated().files(), hashed), chosen.generated().notMade(), alike, shard, modules);
     }
 
     private static Map<String, String> hashes(Map<String, SourceFile> files, List<String> paths) {

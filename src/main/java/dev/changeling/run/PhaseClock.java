@@ -6,8 +6,8 @@ import java.util.function.Consumer;
 import java.util.function.Supplier;
 
 /**
- * The time of each phase of a run, in the order they ran, and the whole run's as {@code total}; says each
- * phase's name as it starts.
+ * The time of each phase of a run, in the order they first ran (a phase run again, as for each module of a build,
+ * adds up), and the whole run's as {@code total}; says each phase's name as it starts.
  */
 final class PhaseClock {
 
@@ -33,7 +33,7 @@ final class PhaseClock {
         try {
             return work.get();
         } finally {
-            millis.put(phase, (System.nanoTime() - at) / 1e6);
+            millis.merge(phase, (System.nanoTime() - at) / 1e6, Double::sum);
         }
     }
 

@@ -1,19 +1,23 @@
 package dev.changeling.run;
 
 import dev.changeling.UserError;
+import dev.changeling.results.ModuleRecord;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.PointRecord;
 import dev.changeling.results.RunResults;
 import dev.changeling.results.RunSettings;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 import java.util.stream.Collectors;
 
 /**
  * Runs one mutant of an earlier run again, through the same engine, against the code and tests as
- * they are now: the project is rebuilt, the suite's baseline taken again, and only that mutant run.
+ * they are now: the project (in a multi-module build, the mutant's module) is rebuilt, the suite's baseline taken
+ * again, and only that mutant run.
  */
 public final class Rerun {
 
@@ -26,10 +30,12 @@ public final class Rerun {
 
     private final Path projectRoot;
     private final RunSettings settings;
+    private final List<ModuleRecord> modules;
 
     public Rerun(Path projectRoot, RunResults earlier) {
         this.projectRoot = projectRoot;
         this.settings = earlier.settings();
+        this.modules = earlier.modules();
     }
 
     /** The mutant run again with the tests that reach it today; a {@link UserError} when it cannot be. */
@@ -43,7 +49,8 @@ public final class Rerun {
      */
     public MutantResult rerun(MutantResult mutant, Consumer<String> steps) {
         Set<String> points = mutant.points().stream().map(PointRecord::fingerprint).collect(Collectors.toSet());
-        RunRequest again = RunRequest.again(projectRoot, settings, mutant.order(), point -> points.contains(point.fingerprint()));
+        Optional<String> module = modules.stream().filter(one -> one.holds(mutant.file())).map(ModuleRecord::path).findFirst();
+        RunRequest again = RunRequest.again(projectRoot, settings, module, mutant.order(), point -> points.contains(point.fingerprint()));
         RunResults results = new MutationRun(again, announcing(steps)).execute();
         return results.mutants().stream()
                 .filter(result -> result.id().equals(mutant.id()))

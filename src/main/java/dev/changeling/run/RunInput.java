@@ -6,6 +6,7 @@ import dev.changeling.execution.Deadlines;
 import dev.changeling.execution.WorkerSettings;
 import dev.changeling.mutant.SelectionInput;
 import dev.changeling.mutant.Shard;
+import dev.changeling.project.CodeModule;
 import dev.changeling.project.DiscoveryOptions;
 import dev.changeling.project.ExplicitProject;
 import dev.changeling.project.ProjectLayout;
@@ -33,11 +34,13 @@ import java.util.Optional;
  * @param recheckTimeouts  whether timed-out mutants run again with ten times their deadline afterwards
  * @param everyTest        whether every reaching test runs against every mutant (the full kill matrix)
  * @param shard            the share of the mutants to run as typed ({@link Shard#FORM}), or null for all
+ * @param module           the one module of a multi-module build to analyse ({@code --module}), or null for every one
  */
 public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, SelectionInput selection,
                        Optional<ChangeSpec> change, List<String> mavenArguments, Integer workers, double timeFactor,
                        long timeExtraMillis, String workerHeap, int mutantsPerWorker, List<String> skipTests,
-                       List<String> skipTags, boolean recheckTimeouts, boolean everyTest, String shard) {
+                       List<String> skipTags, boolean recheckTimeouts, boolean everyTest, String shard,
+                       String module) {
 
     public RunInput {
         paths = List.copyOf(paths);
@@ -71,9 +74,10 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         }
         Optional<Shard> share = parsedShard();
         ProjectLayout layout = ProjectLayout.locate(paths, explicit);
+        Optional<String> picked = Optional.ofNullable(module).map(path -> CodeModule.named(layout.root(), path).path());
         DiscoveryOptions discovery = new DiscoveryOptions(Optional.empty(), mavenArguments, explicit);
         return new RunRequest(layout, layout.limits(paths), ProjectSelection.of(selection, change.isPresent(), layout), change, discovery, workerCount, deadlines,
-                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest, share);
+                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest, share, picked);
     }
 
     private Optional<Shard> parsedShard() {

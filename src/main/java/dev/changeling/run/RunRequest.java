@@ -43,6 +43,8 @@ import java.util.function.Predicate;
  * @param everyTest        whether every reaching test runs against every mutant, for the full kill matrix, rather than
  *                         stopping at the first failure
  * @param shard            the share of the chosen mutants this run runs, when the run is cut into shards
+ * @param module           the one module of a multi-module build to analyse, by its path from the root; empty for
+ *                         every module with tests of its own (and for a project of one module)
  */
 public record RunRequest(
         ProjectLayout layout,
@@ -58,7 +60,8 @@ public record RunRequest(
         List<String> skipTags,
         boolean recheckTimeouts,
         boolean everyTest,
-        Optional<Shard> shard) {
+        Optional<Shard> shard,
+        Optional<String> module) {
 
     public RunRequest {
         limits = List.copyOf(limits);
@@ -82,11 +85,12 @@ public record RunRequest(
     /**
      * The request an earlier run was made with, for the points {@code only} picks of one order, in one worker:
      * the same project found the same way, the same operators, deadlines, heap, tests, per-line budget (the points
-     * picked were kept under it, so it keeps them all again, whatever ranks them now) and kill matrix or not.
+     * picked were kept under it, so it keeps them all again, whatever ranks them now) and kill matrix or not; in a
+     * multi-module build, only the module that holds them ({@code module}).
      *
      * @throws UserError when the recorded settings no longer make sense (an operator that is gone)
      */
-    static RunRequest again(Path projectRoot, RunSettings recorded, int order, Predicate<Point> only) {
+    static RunRequest again(Path projectRoot, RunSettings recorded, Optional<String> module, int order, Predicate<Point> only) {
         MutantRequest request;
         try {
             request = new MutantRequest(Operators.named(recorded.operators()), List.of(order),
@@ -102,6 +106,6 @@ public record RunRequest(
                 Selection.all(request, recorded.seed()), Optional.empty(), discovery, 1,
                 new Deadlines(recorded.timeFactor(), recorded.timeExtraMillis()), Optional.ofNullable(recorded.workerHeap()),
                 recorded.mutantsPerWorker() > 0 ? recorded.mutantsPerWorker() : WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
-                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest(), Optional.empty());
+                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest(), Optional.empty(), module);
     }
 }

@@ -2,10 +2,10 @@ package dev.changeling.run;
 
 import dev.changeling.compile.CompilerEquivalence;
 import dev.changeling.mutant.Mutant;
-import dev.changeling.mutant.Selection;
 import dev.changeling.results.CompiledAlike;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Verdict;
+import dev.changeling.source.SourceFile;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -21,14 +21,17 @@ final class SurvivorComparison {
     private SurvivorComparison() {
     }
 
-    /** @param sharded whether the run is a shard of one, whose merge needs each survivor's shape to find duplicates across shards */
-    static CompiledAlike compare(Selection.Chosen chosen, Map<String, MutantResult> results, List<Path> classpath,
-                                 boolean sharded) {
-        List<Mutant> survivors = chosen.mutants().stream()
+    /**
+     * @param sharded whether the run is a shard of one, whose merge needs each survivor's shape to find duplicates across
+     *                shards
+     */
+    static CompiledAlike compare(List<Mutant> mutants, Map<String, SourceFile> files, Map<String, MutantResult> results,
+                                 List<Path> classpath, boolean sharded) {
+        List<Mutant> survivors = mutants.stream()
                 .filter(mutant -> results.containsKey(mutant.fingerprint()))
                 .filter(mutant -> results.get(mutant.fingerprint()).verdict() == Verdict.SURVIVED)
                 .toList();
-        CompilerEquivalence.Findings findings = CompilerEquivalence.compare(survivors, chosen.generated().files(), classpath);
+        CompilerEquivalence.Findings findings = CompilerEquivalence.compare(survivors, files, classpath);
         Map<String, String> asOriginal = new TreeMap<>();
         findings.asOriginal().forEach((id, match) -> asOriginal.put(id, match.name().toLowerCase(Locale.ROOT)));
         return new CompiledAlike(asOriginal, findings.duplicates(), findings.compared(),

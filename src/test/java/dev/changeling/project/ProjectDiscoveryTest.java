@@ -170,6 +170,46 @@ class ProjectDiscoveryTest {
     @Nested
     @Tag("maven")
     @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+    class ModulesFromTheRoot {
+
+        Path root;
+        List<DiscoveredModule> modules;
+
+        @BeforeAll
+        void discover(@TempDir Path temporary) {
+            root = SampleProjects.twoModules(temporary.resolve("multi"));
+            modules = ProjectDiscovery.discoverModules(ProjectLayout.of(root), DiscoveryOptions.defaults(), Optional.empty());
+        }
+
+        @Test
+        void aModuleWithoutTestsOfItsOwn_isLeftOut() {
+            assertEquals(List.of("b"), modules.stream().map(DiscoveredModule::path).toList());
+            assertEquals(List.of(), modules.get(0).testedAlsoBy());
+        }
+
+        @Test
+        void theModuleKeepsItsOwnFolders_andItsPathsFromTheRoot() {
+            ProjectLayout layout = modules.get(0).project().layout();
+            assertEquals(root, layout.root());
+            assertEquals(List.of(root.resolve("b/src/main/java")), layout.sourceRoots());
+            assertEquals(root.resolve("b/target"), layout.buildDirectory());
+            assertTrue(modules.get(0).project().compileClasspath().contains(root.resolve("a/target/classes")));
+            assertEquals(List.of("demo.b.B"), modules.get(0).project().productionClasses());
+        }
+
+        @Test
+        void oneMvnCall_fromTheRoot_builtEveryModule() throws IOException {
+            String log = Files.readString(root.resolve("target/changeling/maven.log"));
+            assertTrue(log.contains("Reactor Build Order"), log);
+            assertTrue(Files.isRegularFile(root.resolve("a/target/changeling/classpath.txt")));
+            assertTrue(modules.get(0).project().build().startsWith("compiled every module and found its test classpath in "),
+                    modules.get(0).project().build());
+        }
+    }
+
+    @Nested
+    @Tag("maven")
+    @TestInstance(TestInstance.Lifecycle.PER_CLASS)
     class ModuleNeedingASiblingThatIsNotInstalled {
 
         Path folder;

@@ -52,6 +52,23 @@ class ResultsFileTest {
     }
 
     @Test
+    void theModulesOfABuild_areReadBack_andAFileWithoutThem_isOfOneModule() throws Exception {
+        Path file = folder.resolve("results.json");
+        RunResults plain = results();
+        RunResults built = new RunResults(plain.format(), plain.complete(), plain.settings(), plain.tests(), plain.timings(),
+                plain.mutants(), plain.problems(), plain.sourceHashes(), plain.notMade(), plain.compiledAlike(), null,
+                List.of(new ModuleRecord("parts/core", List.of("app")), new ModuleRecord("app", List.of())));
+        ResultsFile.write(file, built);
+        assertEquals(built, ResultsFile.read(file));
+
+        ObjectMapper json = new ObjectMapper();
+        com.fasterxml.jackson.databind.node.ObjectNode tree = (com.fasterxml.jackson.databind.node.ObjectNode) json.readTree(file.toFile());
+        tree.remove("modules");
+        json.writeValue(file.toFile(), tree);
+        assertEquals(List.of(), ResultsFile.read(file).modules(), "a file written before modules were kept");
+    }
+
+    @Test
     void refusesATestNumberOutsideTheSuite_andAnOlderFormat_withOneLineSayingWhatToDo() throws Exception {
         Path file = folder.resolve("results.json");
         ResultsFile.write(file, results());
@@ -93,7 +110,7 @@ class ResultsFileTest {
         RunResults plain = results();
         RunResults shard = new RunResults(plain.format(), true, plain.settings(), plain.tests(), plain.timings(), plain.mutants(),
                 plain.problems(), plain.sourceHashes(), plain.notMade(),
-                new CompiledAlike(Map.of(), List.of(), 1, Map.of("f1", "ab".repeat(32))), new ShardRecord(2, 3, List.of("f0", "f1")));
+                new CompiledAlike(Map.of(), List.of(), 1, Map.of("f1", "ab".repeat(32))), new ShardRecord(2, 3, List.of("f0", "f1")), List.of());
         ResultsFile.write(file, shard);
         assertEquals(shard, ResultsFile.read(file));
     }

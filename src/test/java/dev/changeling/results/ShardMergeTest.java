@@ -73,7 +73,7 @@ class ShardMergeTest {
         timings.put("total", 1000.0 + index);
         return new RunResults(RunResults.FORMAT, true, settings(), tests, timings, mine, List.of("Beacon.java:3: cannot parse"),
                 Map.of(LAMP, "lamp-hash", HORN, "horn-hash"), Map.of("assert statement", 2),
-                new CompiledAlike(Map.of(), List.of(), shapes.size(), shapes), new ShardRecord(index, count, order()));
+                new CompiledAlike(Map.of(), List.of(), shapes.size(), shapes), new ShardRecord(index, count, order()), List.of());
     }
 
     private static RunSettings settings() {
@@ -155,7 +155,7 @@ class ShardMergeTest {
         void oneInterrupted_makeIncompleteResults() {
             RunResults two = shard(2, 3);
             RunResults interrupted = new RunResults(two.format(), false, two.settings(), two.tests(), two.timings(),
-                    two.mutants().subList(0, 1), two.problems(), two.sourceHashes(), two.notMade(), two.compiledAlike(), two.shard());
+                    two.mutants().subList(0, 1), two.problems(), two.sourceHashes(), two.notMade(), two.compiledAlike(), two.shard(), List.of());
             RunResults merged = ShardMerge.merge(parts(shard(1, 3), interrupted, shard(3, 3)));
             assertFalse(merged.complete());
             assertEquals(WHOLE.size() - two.mutants().size() + 1, merged.mutants().size());
@@ -215,7 +215,7 @@ class ShardMergeTest {
         void aShardOfOtherSources_namingTheFile() {
             RunResults two = shard(2, 3);
             RunResults edited = new RunResults(two.format(), true, two.settings(), two.tests(), two.timings(), two.mutants(),
-                    two.problems(), Map.of(LAMP, "lamp-edited", HORN, "horn-hash"), two.notMade(), two.compiledAlike(), two.shard());
+                    two.problems(), Map.of(LAMP, "lamp-edited", HORN, "horn-hash"), two.notMade(), two.compiledAlike(), two.shard(), List.of());
             String message = refused(shard(1, 3), edited, shard(3, 3)).getMessage();
             assertEquals("shard-2.json: shard 2/3 was run on another version of " + LAMP + " than shard 1/3 (shard-1.json);"
                     + " run every shard on the same revision", message);
@@ -226,7 +226,7 @@ class ShardMergeTest {
             RunResults two = shard(2, 3);
             RunResults otherCut = new RunResults(two.format(), true, two.settings(), two.tests(), two.timings(), two.mutants(),
                     two.problems(), two.sourceHashes(), two.notMade(), two.compiledAlike(),
-                    new ShardRecord(2, 3, order().subList(1, order().size())));
+                    new ShardRecord(2, 3, order().subList(1, order().size())), List.of());
             String message = refused(shard(1, 3), otherCut, shard(3, 3)).getMessage();
             assertTrue(message.startsWith("shard-2.json: shard 2/3 was cut from other mutants (17, against 18)"), message);
         }
@@ -235,7 +235,7 @@ class ShardMergeTest {
         void aShardWhoseBaselineRanOtherTests() {
             RunResults three = shard(3, 3);
             RunResults fewer = new RunResults(three.format(), true, three.settings(), three.tests().subList(1, 2), three.timings(),
-                    three.mutants(), three.problems(), three.sourceHashes(), three.notMade(), three.compiledAlike(), three.shard());
+                    three.mutants(), three.problems(), three.sourceHashes(), three.notMade(), three.compiledAlike(), three.shard(), List.of());
             String message = refused(shard(1, 3), shard(2, 3), fewer).getMessage();
             assertTrue(message.startsWith("shard-3.json: shard 3/3's baseline ran other tests than shard 1/3 (shard-1.json), "
                     + SOUNDS + " in one only"), message);
@@ -248,7 +248,7 @@ class ShardMergeTest {
             MutantResult stray = shard(2, 3).mutants().get(0);
             more.add(stray);
             RunResults tampered = new RunResults(one.format(), true, one.settings(), one.tests(), one.timings(), more,
-                    one.problems(), one.sourceHashes(), one.notMade(), one.compiledAlike(), one.shard());
+                    one.problems(), one.sourceHashes(), one.notMade(), one.compiledAlike(), one.shard(), List.of());
             String message = refused(tampered, shard(2, 3), shard(3, 3)).getMessage();
             assertEquals("shard-1.json: mutant " + stray.shortId() + " is not in shard 1/3; give the results files as the"
                     + " shards' runs wrote them", message);
@@ -257,6 +257,6 @@ class ShardMergeTest {
 
     private static RunResults withSettings(RunResults shard, RunSettings settings) {
         return new RunResults(shard.format(), shard.complete(), settings, shard.tests(), shard.timings(), shard.mutants(),
-                shard.problems(), shard.sourceHashes(), shard.notMade(), shard.compiledAlike(), shard.shard());
+                shard.problems(), shard.sourceHashes(), shard.notMade(), shard.compiledAlike(), shard.shard(), List.of());
     }
 }

@@ -44,13 +44,13 @@ class RunRequestTest {
                 null, null, 7, null);
         RunRequest first = new RunRequest(ProjectLayout.locate(folder, Optional.of(given)), List.of(), selection,
                 Optional.empty(), discovery, 2, new Deadlines(2.5, 400), Optional.of("768m"), 40, List.of("*IT"),
-                List.of("slow"), false, true, Optional.empty());
+                List.of("slow"), false, true, Optional.empty(), Optional.empty());
 
         RunSettings settings = first.settings(new Selection.Chosen(List.of(), 0, false, null), Optional.empty());
         Path file = folder.resolve("results.json");
         ResultsFile.write(file, new RunResults(RunResults.FORMAT, true, settings, List.of(), Map.of(), List.of(), List.of(), Map.of()));
         RunSettings recorded = ResultsFile.read(file).settings();
-        RunRequest again = RunRequest.again(folder, recorded, 1, point -> true);
+        RunRequest again = RunRequest.again(folder, recorded, Optional.empty(), 1, point -> true);
 
         assertEquals(first.layout(), again.layout());
         assertEquals(first.discovery(), again.discovery());

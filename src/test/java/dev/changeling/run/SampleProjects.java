@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.stream.Stream;
+import java.util.stream.StreamSupport;
 
 /**
  * The sample projects of {@code samples/}, copied into temporary folders before anything runs on them, so
@@ -18,7 +19,7 @@ import java.util.stream.Stream;
  */
 final class SampleProjects {
 
-    /** Folders never copied: build output a local build of a sample may have left. */
+    /** Folders never copied, at any depth (a module's own too): build output a local build of a sample may have left. */
     private static final List<String> LEFT_OUT = List.of("target", ".changeling");
 
     private SampleProjects() {
@@ -39,7 +40,8 @@ final class SampleProjects {
         try (Stream<Path> files = Files.walk(from)) {
             for (Path file : (Iterable<Path>) files::iterator) {
                 Path relative = from.relativize(file);
-                if (!relative.toString().isEmpty() && LEFT_OUT.contains(relative.getName(0).toString())) {
+                if (!relative.toString().isEmpty() && StreamSupport.stream(relative.spliterator(), false)
+                        .anyMatch(part -> LEFT_OUT.contains(part.toString()))) {
                     continue;
                 }
                 Path to = target.resolve(relative.toString());

@@ -43,6 +43,11 @@ public final class MarkdownReport {
                 .append("\n\n")
                 .append(MarkdownText.text(Summary.coverage(standing)))
                 .append("\n\n");
+        List<String> modules = Summary.modules(standing);
+        if (!modules.isEmpty()) {
+            modules.forEach(module -> out.append("- ").append(MarkdownText.text(module)).append('\n'));
+            out.append('\n');
+        }
         if (!standing.unreadFiles().isEmpty()) {
             out.append("**").append(MarkdownText.text(standing.unreadSummary())).append(":**\n\n");
             standing.unreadFiles().forEach(problem -> out.append("- ").append(MarkdownText.text(problem)).append('\n'));

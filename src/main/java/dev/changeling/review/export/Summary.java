@@ -2,8 +2,10 @@ package dev.changeling.review.export;
 
 import dev.changeling.analysis.Interval;
 import dev.changeling.analysis.LineCoverage;
+import dev.changeling.analysis.Score;
 import dev.changeling.analysis.Tally;
 import dev.changeling.mutant.LineBudget;
+import dev.changeling.results.ModuleRecord;
 import dev.changeling.results.RunResults;
 import dev.changeling.review.SameClasses;
 import dev.changeling.review.Standing;
@@ -125,6 +127,30 @@ public final class Summary {
             counts.add("equivalent " + overall.equivalent());
         }
         return counts;
+    }
+
+    /**
+     * One line per module of a multi-module build, in the reactor's order: its score by its own tests, and the other
+     * modules whose tests have its classes on their classpath; none for a project of one module.
+     */
+    public static List<String> modules(Standing standing) {
+        List<String> lines = new ArrayList<>();
+        for (ModuleRecord module : standing.results().modules()) {
+            Tally tally = Score.of(module.mutantsOf(standing.results()), standing.score().equivalent()).overall();
+            StringBuilder line = new StringBuilder("module ").append(module.path()).append(": ");
+            if (tally.score().isPresent()) {
+                line.append("score ").append(down(tally.score().getAsDouble())).append(" (").append(tally.detected()).append(" of ")
+                        .append(tally.denominator()).append(" detected by its own tests)");
+            } else {
+                line.append("score n/a (").append(tally.all()).append(tally.all() == 1 ? " mutant" : " mutants").append(", none counts)");
+            }
+            if (!module.testedAlsoBy().isEmpty()) {
+                line.append(DOT).append("its classes are also on the test classpath of ").append(String.join(", ", module.testedAlsoBy()))
+                        .append(", whose tests did not run against its mutants");
+            }
+            lines.add(line.toString());
+        }
+        return lines;
     }
 
     /** A share to two places, rounded down so it never flatters: 0.999 reads 0.99. */
