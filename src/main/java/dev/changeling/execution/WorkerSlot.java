@@ -15,6 +15,9 @@ import java.util.function.Consumer;
  */
 final class WorkerSlot {
 
+    /** How the JVM refuses an array longer than it can ever allocate (HotSpot's message). */
+    static final String ARRAY_BEYOND_LIMIT = "OutOfMemoryError: Requested array size exceeds VM limit";
+
     private final DefaultWorkerPool pool;
     private final WorkerSettings settings;
     private final SuiteSetup setup;
@@ -135,10 +138,13 @@ final class WorkerSlot {
 
     /**
      * A mutant that ran the heap out failed its test like any error, but the worker it ran in may limp on (a
-     * thread of a test or of the engine may have met the error too), so it is replaced.
+     * thread of a test or of the engine may have met the error too), so it is replaced. An array longer than any
+     * JVM allows is refused before anything is allocated: that error leaves the heap as it was, and the worker goes on.
      */
-    private static boolean exhaustedMemory(JobResult result) {
-        return result.outcome() == Outcome.KILLED && result.message() != null && result.message().startsWith("OutOfMemoryError");
+    static boolean exhaustedMemory(JobResult result) {
+        String message = result.message();
+        return result.outcome() == Outcome.KILLED && message != null && message.startsWith("OutOfMemoryError")
+                && !message.startsWith(ARRAY_BEYOND_LIMIT);
     }
 
     private JobResult runInWorker(MutantJob job) {
