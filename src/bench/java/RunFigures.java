@@ -17,6 +17,7 @@ public final class RunFigures {
         JsonNode results = new ObjectMapper().readTree(new File(args[0]));
         double mavenMillis = Double.parseDouble(args[1]);
         double runMillis = Double.parseDouble(args[2]);
+        String target = args.length > 3 ? args[3] : "4";
         // A mutant's tests are stored as numbers into "tests" (docs/results-format.md).
         List<Double> testMillis = new ArrayList<>();
         results.get("tests").forEach(test -> testMillis.add(test.get("millis").asDouble()));
@@ -38,7 +39,8 @@ public final class RunFigures {
         double baseline = timings.path("baseline").asDouble();
         double ideal = baseline + executed / workers;
         System.out.printf("mvn -q test            %8.1f s%n", mavenMillis / 1000);
-        System.out.printf("changeling run         %8.1f s   (%.2f x mvn test; target <= 4)%n", runMillis / 1000, runMillis / mavenMillis);
+        System.out.printf("changeling run         %8.1f s   (%.2f x mvn test; target <= %s)%n", runMillis / 1000, runMillis / mavenMillis,
+                target);
         System.out.printf("mutants                %8d     (%.1f per second of the whole run)%n", mutants, mutants / (runMillis / 1000));
         System.out.printf("test runs              %8d     (their baseline times add up to %.1f s)%n", testRuns, executed / 1000);
         for (var phase : timings.properties()) {
