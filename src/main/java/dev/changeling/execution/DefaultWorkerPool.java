@@ -1,5 +1,6 @@
 package dev.changeling.execution;
 
+import dev.changeling.worker.UniqueIds;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -19,6 +20,7 @@ final class DefaultWorkerPool implements WorkerPool {
     private final WorkerSlot[] slots;
     private final AtomicInteger started = new AtomicInteger();
     private final WorkerTime workerTime = new WorkerTime();
+    private volatile Baseline lastBaseline;
     private final Object listenerLock = new Object();
     private volatile boolean stopped;
 
@@ -69,7 +71,8 @@ final class DefaultWorkerPool implements WorkerPool {
                 }
             }
         }
-        return Baseline.merge(List.of(parts), System.nanoTime() - start, fresh);
+        lastBaseline = Baseline.merge(List.of(parts), System.nanoTime() - start, fresh);
+        return lastBaseline;
     }
 
     @Override
@@ -172,6 +175,18 @@ final class DefaultWorkerPool implements WorkerPool {
             slot.close();
         }
         Reaper.forget(this);
+    }
+
+    /** What the tests within these containers (test classes, say) took in this pool's baseline; unknown counts as none. */
+    long baselineNanosWithin(List<String> containers) {
+        Baseline baseline = lastBaseline;
+        if (baseline == null) {
+            return 0;
+        }
+        return baseline.tests().stream()
+                .filter(test -> containers.stream().anyMatch(container -> UniqueIds.isWithin(test.id(), container)))
+                .mapToLong(RecordedTest::nanos)
+                .sum();
     }
 
     WorkerSettings settings() {

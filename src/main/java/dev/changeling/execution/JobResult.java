@@ -59,6 +59,11 @@ public record JobResult(String key, Outcome outcome, String testId, String messa
         return new JobResult(key, outcome, testId, message, all, total);
     }
 
+    /** Every test stopped in place at its step's deadline, in the order they ran. */
+    List<String> stoppedTests() {
+        return testsRun.stream().filter(test -> test.status() == TestStatus.STOPPED).map(TestRun::testId).toList();
+    }
+
     /** The test stopped in place at its step's deadline, or null when none was. */
     String stoppedTest() {
         return testsRun.stream().filter(test -> test.status() == TestStatus.STOPPED).map(TestRun::testId).findFirst().orElse(null);

@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Objects;
 import java.util.concurrent.CancellationException;
 import java.util.function.Consumer;
 
@@ -77,23 +78,24 @@ final class WorkerSlot {
     /**
      * Runs a mutant's tests. A mutant stopped in place at a test's deadline goes on with the tests after that one, under
      * shorter deadlines: a later test that fails normally makes it killed, which is the verdict a longer deadline could
-     * have given too; otherwise it stays timed out. A mutant compiled alone, and one whose worker had to be ended, is not
-     * resumed.
+     * have given too; otherwise it stays timed out. Only then is the worker's fitness settled, once for every stop
+     * ({@link #settleStops}): a kill among the later tests is checked on unmutated code as any kill is. A mutant compiled
+     * alone, and one whose worker had to be ended, is not resumed.
      */
     JobResult execute(MutantJob job) {
         if (job.aloneClasses() != null) {
             return executeAlone(job);
         }
         JobResult result = executeShared(job);
-        if (job.everyTest() || result.outcome() != Outcome.TIMED_OUT || result.stoppedTest() == null) {
-            return result;
+        if (!job.everyTest() && result.outcome() == Outcome.TIMED_OUT && result.stoppedTest() != null) {
+            MutantJob rest = job.resumedAfter(result.stoppedTest());
+            if (!rest.tests().isEmpty() && worker != null) {
+                pool.throwIfStopped();
+                result = result.resumedWith(executeShared(rest));
+            }
         }
-        MutantJob rest = job.resumedAfter(result.stoppedTest());
-        if (rest.tests().isEmpty()) {
-            return result;
-        }
-        pool.throwIfStopped();
-        return result.resumedWith(executeShared(rest));
+        settleStops(job.key(), result.stoppedTests());
+        return result;
     }
 
     private JobResult executeShared(MutantJob job) {
@@ -125,11 +127,7 @@ final class WorkerSlot {
             retire(workerGone ? WorkerTime.Replacement.GONE : WorkerTime.Replacement.CRASHED);
         } else if (exhaustedMemory(result)) {
             retire(WorkerTime.Replacement.HEAP_EXHAUSTED);
-        } else if (result.stoppedTest() != null) {
-            if (!classPassesUnmutated(job.key(), result.stoppedTest())) {
-                retire(WorkerTime.Replacement.CLASS_CHECK_FAILED);
-            }
-        } else if (mutantsOnWorker >= settings.mutantsPerWorker()) {
+        } else if (result.stoppedTest() == null && mutantsOnWorker >= settings.mutantsPerWorker()) {
             time.timed(WorkerTime.Use.ENDS, worker::close);
             retire(WorkerTime.Replacement.SHARE_DONE);
         }
@@ -171,14 +169,23 @@ final class WorkerSlot {
     }
 
     /**
-     * After a mutant was stopped in place, the class of the stopped test runs once with nothing switched on: the
-     * stop unwound its test from wherever it was, which may have left the class's static state half changed, and
-     * only a worker whose tests still pass unmutated may go on.
+     * After a mutant was stopped in place, the classes of the stopped tests run once with nothing switched on: the stop
+     * unwound a test from wherever it was, which may have left its class's static state half changed, and only a worker
+     * whose tests still pass unmutated may go on. Where running those classes would take longer than a fresh worker
+     * (its start, end and warm-up, as measured in this run), the worker is replaced instead, which settles it as well.
      */
-    private boolean classPassesUnmutated(String key, String stoppedTest) {
-        String testClass = stoppedTest == null ? null : UniqueIds.outermostContainer(stoppedTest);
-        return testClass != null
-                && time.timed(WorkerTime.Use.CLASS_CHECKS, () -> runUnmutated(key, List.of(testClass))).outcome() == Outcome.SURVIVED;
+    private void settleStops(String key, List<String> stoppedTests) {
+        if (stoppedTests.isEmpty() || worker == null) {
+            return;
+        }
+        List<String> classes = stoppedTests.stream().map(UniqueIds::outermostContainer).filter(Objects::nonNull).distinct().toList();
+        if (classes.isEmpty()) {
+            retire(WorkerTime.Replacement.CLASS_CHECK_FAILED);
+        } else if (pool.baselineNanosWithin(classes) > time.freshWorkerNanos()) {
+            retire(WorkerTime.Replacement.FRESH_WORKER_CHEAPER);
+        } else if (time.timed(WorkerTime.Use.CLASS_CHECKS, () -> runUnmutated(key, classes)).outcome() != Outcome.SURVIVED) {
+            retire(WorkerTime.Replacement.CLASS_CHECK_FAILED);
+        }
     }
 
     /** Runs tests in the current worker with no point switched on, each step under the start timeout, up to the first failure. */

@@ -31,6 +31,7 @@ public final class WorkerTime {
     public enum Replacement {
         SHARE_DONE("after their share of mutants"),
         CLASS_CHECK_FAILED("after a stopped test's class failed unmutated"),
+        FRESH_WORKER_CHEAPER("after a stop, where a fresh worker costs less than running the stopped test's class"),
         KILL_CHECK_FAILED("after a killing test failed unmutated"),
         GONE("ended at a deadline or dead"),
         CRASHED("crashed"),
@@ -87,6 +88,23 @@ public final class WorkerTime {
 
     public long replacements(Replacement why) {
         return replacements.get(why).sum();
+    }
+
+    /**
+     * What a fresh worker has cost on average in this run: a start, an end and a warm-up (the last two as none until
+     * measured); with no start measured yet, as much as anything could cost, so that no check is skipped for want of a
+     * measure.
+     */
+    long freshWorkerNanos() {
+        if (count(Use.STARTS) == 0) {
+            return Long.MAX_VALUE;
+        }
+        return average(Use.STARTS) + average(Use.ENDS) + average(Use.WARM_UPS);
+    }
+
+    private long average(Use use) {
+        long count = count(use);
+        return count == 0 ? 0 : nanos(use) / count;
     }
 
     public long nanos(Use use) {

@@ -25,4 +25,16 @@ class WorkerTimeTest {
         assertEquals(1, time.count(WorkerTime.Use.WARM_UPS));
         assertEquals("worker time: warm-ups 0.0 s (1)", time.describe());
     }
+
+    @Test
+    void aFreshWorkerCostsItsAverageStartEndAndWarmUp_andAsMuchAsAnythingBeforeAnyStart() {
+        WorkerTime time = new WorkerTime();
+        assertEquals(Long.MAX_VALUE, time.freshWorkerNanos());
+        time.add(WorkerTime.Use.STARTS, 600);
+        time.add(WorkerTime.Use.STARTS, 800);
+        assertEquals(700, time.freshWorkerNanos(), "no end or warm-up measured yet");
+        time.add(WorkerTime.Use.ENDS, 100);
+        time.add(WorkerTime.Use.WARM_UPS, 50);
+        assertEquals(850, time.freshWorkerNanos());
+    }
 }
