@@ -2,13 +2,14 @@ package dev.changeling.execution;
 
 /**
  * How long a step of a mutant's tests may run: {@code factor} times their baseline time plus
- * {@code constantMillis}, and {@link #FIRST_RUN_EXTRA_MILLIS} more when the step is the first in its worker
+ * {@code constantMillis}, and {@code firstRunExtraMillis} more when the step is the first in its worker
  * to run a test of some class.
  *
- * @param factor         how many times slower than the baseline a run may be; at least 1
- * @param constantMillis added to every deadline, for costs that do not grow with the tests' own time
+ * @param factor              how many times slower than the baseline a run may be; at least 1
+ * @param constantMillis      added to every deadline, for costs that do not grow with the tests' own time
+ * @param firstRunExtraMillis added for a step that runs a test class its worker has not run before
  */
-public record Deadlines(double factor, long constantMillis) {
+public record Deadlines(double factor, long constantMillis, long firstRunExtraMillis) {
 
     /**
      * Factor 3: the baseline ran with the cores to itself or nearly, while mutants share them with the other
@@ -32,22 +33,35 @@ public record Deadlines(double factor, long constantMillis) {
 
     /**
      * The constant of a job resumed after one of its tests was stopped in place, at most: the mutant is known to loop
-     * somewhere, so a later test gets little more than its own baseline time to fail normally.
+     * somewhere, so a later test gets little more than its own baseline time to fail normally, and no extra for a
+     * class its worker meets for the first time. A later test stopped too soon costs nothing in trust: the mutant
+     * merely stays timed out, as it was.
      */
     public static final long RESUMED_CONSTANT_MILLIS = 50;
+
+    /** Deadlines with {@link #FIRST_RUN_EXTRA_MILLIS} for a worker's first run of a test class. */
+    public Deadlines(double factor, long constantMillis) {
+        this(factor, constantMillis, FIRST_RUN_EXTRA_MILLIS);
+    }
 
     public Deadlines {
         if (!(factor >= 1) || Double.isInfinite(factor)) {
             throw new IllegalArgumentException("the deadline factor must be a number of at least 1, not " + factor);
+        }
+        if (firstRunExtraMillis < 0) {
+            throw new IllegalArgumentException("the extra for a first run must not be negative, not " + firstRunExtraMillis + " ms");
         }
         if (constantMillis < 0) {
             throw new IllegalArgumentException("the deadline constant must not be negative, not " + constantMillis + " ms");
         }
     }
 
-    /** The deadlines of a job resumed after a stop: the same factor, a constant of at most {@link #RESUMED_CONSTANT_MILLIS}. */
+    /**
+     * The deadlines of a job resumed after a stop: the same factor, a constant of at most
+     * {@link #RESUMED_CONSTANT_MILLIS}, no extra for a first run of a class.
+     */
     public Deadlines resumed() {
-        return new Deadlines(factor, Math.min(constantMillis, RESUMED_CONSTANT_MILLIS));
+        return new Deadlines(factor, Math.min(constantMillis, RESUMED_CONSTANT_MILLIS), 0);
     }
 
     /** The deadline for tests whose baseline times add up to {@code baselineNanos}. */
@@ -57,6 +71,6 @@ public record Deadlines(double factor, long constantMillis) {
 
     /** The deadline for a step, with the extra for one that runs a test class its worker has not run before. */
     public long millisFor(long baselineNanos, boolean firstRunOfAClass) {
-        return millisFor(baselineNanos) + (firstRunOfAClass ? FIRST_RUN_EXTRA_MILLIS : 0);
+        return millisFor(baselineNanos) + (firstRunOfAClass ? firstRunExtraMillis : 0);
     }
 }

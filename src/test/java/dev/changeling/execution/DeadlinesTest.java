@@ -23,6 +23,15 @@ class DeadlinesTest {
         }
 
         @Test
+        void aWorkersFirstRunOfAClassGetsTwoSecondsMore_butNotInAJobResumedAfterAStop() {
+            Deadlines usual = new Deadlines(3, 300);
+            assertEquals(300 + 3 * 10 + 2_000, usual.millisFor(10_000_000L, true));
+            Deadlines resumed = usual.resumed();
+            assertEquals(50 + 3 * 10, resumed.millisFor(10_000_000L, true));
+            assertEquals(usual.factor(), resumed.factor());
+        }
+
+        @Test
         void isNeverZero() {
             assertEquals(1, new Deadlines(1, 0).millisFor(0));
         }
