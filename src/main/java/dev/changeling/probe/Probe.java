@@ -17,6 +17,8 @@ public final class Probe {
     private static volatile int step;
     /** The step whose deadline passed: while it runs, every switch throws. */
     private static volatile int stopAt = -1;
+    /** How many times a switch has thrown to stop a step, ever: a test that saw it change was ended by a stop. */
+    private static volatile int stopsThrown;
 
     private Probe() {
     }
@@ -27,6 +29,7 @@ public final class Probe {
      */
     public static boolean on(int id) {
         if (stopAt == step) {
+            stopsThrown++;
             throw new MutantStopped();
         }
         if (recording) {
@@ -64,6 +67,11 @@ public final class Probe {
     /** Stops the step with this number, if it is still running (any thread may call this). */
     public static void stop(int stepNumber) {
         stopAt = stepNumber;
+    }
+
+    /** How many times a switch has thrown to stop a step so far (only ever grows). */
+    public static int stopsThrown() {
+        return stopsThrown;
     }
 
     /** Whether the running step was told to stop. */

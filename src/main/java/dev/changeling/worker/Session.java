@@ -127,7 +127,8 @@ final class Session {
     /**
      * The step was stopped at its deadline: the tests that passed before the stop are reported as they ended, and
      * the first that did not pass (the one running when the stop came; the last, if a thread of the test's own
-     * was what ran on) as stopped.
+     * was what ran on) as stopped, unless it failed by itself with no switch throwing while it ran: the deadline
+     * passed, but its end, a failure like any other (a heap run out after long collecting, say), is its own.
      */
     private void reportStopped(List<String> chunk, List<SingleTestRun.Result> results) throws IOException {
         int stopped = 0;
@@ -136,7 +137,8 @@ final class Session {
             stopped++;
         }
         SingleTestRun.Result result = results.get(stopped);
-        report(chunk.get(stopped), new SingleTestRun.Result(Wire.STOPPED, result.nanos(), result.message()));
+        boolean ownFailure = result.status() == Wire.FAILED && !result.byStop();
+        report(chunk.get(stopped), ownFailure ? result : new SingleTestRun.Result(Wire.STOPPED, result.nanos(), result.message()));
     }
 
     /** Sends one test's outcome; false when it failed (or was stopped). */

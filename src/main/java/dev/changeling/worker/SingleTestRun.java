@@ -1,5 +1,6 @@
 package dev.changeling.worker;
 
+import dev.changeling.probe.Probe;
 import org.junit.platform.engine.TestExecutionResult;
 import org.junit.platform.launcher.TestIdentifier;
 
@@ -9,11 +10,19 @@ import org.junit.platform.launcher.TestIdentifier;
  */
 final class SingleTestRun implements RequestWatch {
 
-    /** How the one test ended; {@code message} says why it failed, was aborted or skipped. */
-    record Result(byte status, long nanos, String message) {
+    /**
+     * How the one test ended; {@code message} says why it failed, was aborted or skipped; {@code byStop} whether a
+     * switch threw to stop the step while it ran, so that its end may be the stop's doing rather than its own.
+     */
+    record Result(byte status, long nanos, String message, boolean byStop) {
+
+        Result(byte status, long nanos, String message) {
+            this(status, nanos, message, false);
+        }
     }
 
     private final String target;
+    private final int stopsBefore = Probe.stopsThrown();
     private byte status = Wire.MISSING;
     private String message;
     private String failure;
@@ -54,6 +63,7 @@ final class SingleTestRun implements RequestWatch {
     }
 
     Result result(long nanos) {
-        return failure != null ? new Result(Wire.FAILED, nanos, failure) : new Result(status, nanos, message);
+        boolean byStop = Probe.stopsThrown() != stopsBefore;
+        return failure != null ? new Result(Wire.FAILED, nanos, failure, byStop) : new Result(status, nanos, message, byStop);
     }
 }

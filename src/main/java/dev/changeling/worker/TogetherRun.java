@@ -1,5 +1,6 @@
 package dev.changeling.worker;
 
+import dev.changeling.probe.Probe;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -15,6 +16,7 @@ final class TogetherRun implements RequestWatch {
     private final List<String> targets;
     private final Map<String, SingleTestRun.Result> results = new HashMap<>();
     private final Map<String, Long> started = new HashMap<>();
+    private final Map<String, Integer> stopsAtStart = new HashMap<>();
     private final Map<String, String> failedContainers = new HashMap<>();
 
     TogetherRun(List<String> targets) {
@@ -24,6 +26,7 @@ final class TogetherRun implements RequestWatch {
     @Override
     public void executionStarted(TestIdentifier identifier) {
         started.put(identifier.getUniqueId(), System.nanoTime());
+        stopsAtStart.put(identifier.getUniqueId(), Probe.stopsThrown());
     }
 
     @Override
@@ -46,7 +49,7 @@ final class TogetherRun implements RequestWatch {
                 case ABORTED -> Wire.ABORTED;
                 case FAILED -> Wire.FAILED;
             };
-            results.put(id, new SingleTestRun.Result(status, nanos, message));
+            results.put(id, new SingleTestRun.Result(status, nanos, message, byStop(id)));
         } else if (result.getStatus() == TestExecutionResult.Status.FAILED) {
             failedContainers.put(id, message == null ? "failed" : message);
         }
@@ -58,9 +61,15 @@ final class TogetherRun implements RequestWatch {
         long now = System.nanoTime();
         for (String target : targets) {
             if (started.containsKey(target) && !results.containsKey(target)) {
-                results.put(target, new SingleTestRun.Result(Wire.FAILED, now - started.get(target), Failures.describe(error)));
+                results.put(target, new SingleTestRun.Result(Wire.FAILED, now - started.get(target), Failures.describe(error),
+                        byStop(target)));
             }
         }
+    }
+
+    /** Whether a switch threw to stop the step while this started test ran. */
+    private boolean byStop(String id) {
+        return Probe.stopsThrown() != stopsAtStart.getOrDefault(id, Probe.stopsThrown());
     }
 
     /** The outcome of each target, in the order given; a target inside a failed container failed with it. */

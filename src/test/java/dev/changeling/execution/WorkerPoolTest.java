@@ -305,6 +305,22 @@ class WorkerPoolTest {
             }
         }
 
+        /**
+         * The hoarding loop passes no switch, so the stop sent at its 10 ms deadline cannot end it; the heap running out
+         * does, a failure of the test's own, which kills the mutant as it would under any longer deadline.
+         */
+        @Test
+        void aTestThatFailsByItselfPastItsDeadline_withNoSwitchThrowing_killsTheMutant() {
+            try (WorkerPool pool = WorkerPool.open(settings("own-failure"), setup())) {
+                JobResult result = pool.run(List.of(MutantJob.schema("hogs", new int[] {4},
+                        List.of(method("HostileTest", "hogs")), 10)), done -> { }).get(0);
+                assertEquals(Outcome.KILLED, result.outcome(), result::toString);
+                assertTrue(result.message().startsWith("OutOfMemoryError"), result.message());
+                assertEquals(List.of(TestStatus.FAILED), result.testsRun().stream().map(TestRun::status).toList());
+                assertTrue(result.nanos() > 10_000_000L, "the heap ran out after the deadline: " + result.nanos() / 1_000_000 + " ms");
+            }
+        }
+
         /** Stopped in place in its first test, the mutant goes on with the next one, which fails normally: killed by it. */
         @Test
         void aMutantStoppedInOneTest_goesOnWithTheRest_andAFailureThereKillsIt() {
