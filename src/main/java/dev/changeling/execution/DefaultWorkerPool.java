@@ -1,18 +1,11 @@
 package dev.changeling.execution;
 
 import dev.changeling.worker.UniqueIds;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.concurrent.CancellationException;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
@@ -28,12 +21,6 @@ final class DefaultWorkerPool implements WorkerPool {
     private final AtomicInteger started = new AtomicInteger();
     private final WorkerTime workerTime = new WorkerTime();
     private volatile Baseline lastBaseline;
-    private final ExecutorService enders = Executors.newCachedThreadPool(task -> {
-        Thread thread = new Thread(task, "changeling-worker-ending");
-        thread.setDaemon(true);
-        return thread;
-    });
-    private final List<Future<?>> endings = new ArrayList<>();
     private final Object listenerLock = new Object();
     private volatile boolean stopped;
 
@@ -85,7 +72,6 @@ final class DefaultWorkerPool implements WorkerPool {
             }
         }
         lastBaseline = Baseline.merge(List.of(parts), System.nanoTime() - start, fresh);
-        awaitEndings();
         return lastBaseline;
     }
 
@@ -101,7 +87,6 @@ final class DefaultWorkerPool implements WorkerPool {
         JobResult[] results = new JobResult[jobs.size()];
         AtomicInteger next = new AtomicInteger();
         onSlots(jobs.size(), slot -> work(slot, jobs, next, results, onResult));
-        awaitEndings();
         List<JobResult> finished = new ArrayList<>();
         for (JobResult result : results) {
             if (result != null) {
@@ -189,8 +174,6 @@ final class DefaultWorkerPool implements WorkerPool {
         for (WorkerSlot slot : slots) {
             slot.close();
         }
-        awaitEndings();
-        enders.shutdown();
         Reaper.forget(this);
     }
 
@@ -204,47 +187,6 @@ final class DefaultWorkerPool implements WorkerPool {
                 .filter(test -> containers.stream().anyMatch(container -> UniqueIds.isWithin(test.id(), container)))
                 .mapToLong(RecordedTest::nanos)
                 .sum();
-    }
-
-    /**
-     * Runs {@code ending} (a replaced worker's wait for its exit) in the background, counted as ending workers, then
-     * deletes the worker's temp folder; {@link #run}, {@link #baseline} and {@link #close} wait for it before they
-     * return, so no worker outlives them.
-     */
-    void afterExit(Runnable ending, Path temp) {
-        synchronized (endings) {
-            endings.add(enders.submit(() -> {
-                workerTime.timed(WorkerTime.Use.ENDS, ending);
-                deleteFolder(temp);
-            }));
-        }
-    }
-
-    private void awaitEndings() {
-        List<Future<?>> pending;
-        synchronized (endings) {
-            pending = new ArrayList<>(endings);
-            endings.clear();
-        }
-        for (Future<?> ending : pending) {
-            try {
-                ending.get();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                return;
-            } catch (ExecutionException e) {
-                // The worker is ended either way; a file it left and locked must not stop the run.
-            }
-        }
-    }
-
-    private static void deleteFolder(Path folder) {
-        try {
-            WorkerClasses.deleteContents(folder);
-            Files.deleteIfExists(folder);
-        } catch (IOException | UncheckedIOException e) {
-            // A file a test left behind and locked must not stop the run.
-        }
     }
 
     WorkerSettings settings() {

@@ -12,8 +12,7 @@ import java.util.function.Consumer;
 
 /**
  * One place in the pool for a worker: it keeps its worker between jobs, replaces it when it is spent,
- * and starts a fresh one of its own for a mutant compiled alone. Its log stays the same; each worker gets a temp folder
- * of its own, so that a replaced one can end in the background while the next one starts.
+ * and starts a fresh one of its own for a mutant compiled alone. Its log and temp folder stay the same.
  */
 final class WorkerSlot {
 
@@ -24,10 +23,7 @@ final class WorkerSlot {
     private final WorkerSettings settings;
     private final SuiteSetup setup;
     private final Path log;
-    private final Path folder;
-    private final int number;
-    private Path temp;
-    private int generation;
+    private final Path temp;
     private final Path aloneTemp;
     private final Path argumentFile;
     private final Path aloneArgumentFile;
@@ -44,8 +40,7 @@ final class WorkerSlot {
         this.settings = pool.settings();
         this.setup = pool.setup();
         this.time = pool.workerTime();
-        this.folder = settings.workDirectory();
-        this.number = number;
+        Path folder = settings.workDirectory();
         this.log = folder.resolve("worker-" + number + ".log");
         this.temp = folder.resolve("tmp-" + number);
         this.aloneTemp = folder.resolve("tmp-" + number + "-alone");
@@ -133,6 +128,7 @@ final class WorkerSlot {
         } else if (exhaustedMemory(result)) {
             retire(WorkerTime.Replacement.HEAP_EXHAUSTED);
         } else if (result.stoppedTest() == null && mutantsOnWorker >= settings.mutantsPerWorker()) {
+            time.timed(WorkerTime.Use.ENDS, worker::close);
             retire(WorkerTime.Replacement.SHARE_DONE);
         }
         return result;
@@ -305,12 +301,12 @@ final class WorkerSlot {
         warm = false;
     }
 
-    private WorkerProcess launch(List<Path> first, Path tempFolder, Path arguments, boolean alone) {
+    private WorkerProcess launch(List<Path> first, Path folder, Path arguments, boolean alone) {
         pool.throwIfStopped();
-        emptyFolder(tempFolder);
+        emptyFolder(folder);
         WorkerProcess started;
         try {
-            started = WorkerProcess.launch(settings, pool.workerClasses(), first, log, tempFolder, arguments);
+            started = WorkerProcess.launch(settings, pool.workerClasses(), first, log, folder, arguments);
         } catch (IOException e) {
             throw new UserError("cannot start a worker JVM with " + settings.javaExecutable() + ": " + e.getMessage()
                     + "; check the Java installation or give another one");
@@ -335,34 +331,22 @@ final class WorkerSlot {
         return started;
     }
 
-    /**
-     * Ends the current worker the way a test JVM ends (killed only if it will not): it is asked to exit now, and the
-     * pool waits for that and deletes its temp folder in the background, while this slot goes on with a fresh folder.
-     */
+    /** Ends the current worker the way a test JVM ends (killed only if it will not), and empties its temp folder. */
     private void retire() {
         retire(null);
     }
 
-    /**
-     * {@link #retire()}, counting why the worker is replaced when it is; one that has run its share of mutants is let
-     * go as at the end of a run (its test session closed first).
-     */
+    /** {@link #retire()}, counting why the worker is replaced when it is. */
     private void retire(WorkerTime.Replacement why) {
-        if (worker == null) {
-            return;
-        }
-        if (why != null) {
+        if (worker != null && why != null) {
             time.replaced(why);
         }
-        WorkerProcess leaving = worker;
-        if (why != WorkerTime.Replacement.SHARE_DONE) {
-            leaving.askToExit();
+        if (worker != null) {
+            time.timed(WorkerTime.Use.ENDS, worker::end);
         }
-        pool.afterExit(why == WorkerTime.Replacement.SHARE_DONE ? leaving::close : leaving::end, temp);
         worker = null;
         live = null;
-        generation++;
-        temp = folder.resolve("tmp-" + number + "-" + generation);
+        emptyFolder(temp);
     }
 
     private static void emptyFolder(Path folder) {
