@@ -66,7 +66,7 @@ public record JobResult(String key, Outcome outcome, String testId, String messa
 
     /** The test stopped in place at its step's deadline, or null when none was. */
     String stoppedTest() {
-        return testsRun.stream().filter(test -> test.status() == TestStatus.STOPPED).map(TestRun::testId).findFirst().orElse(null);
+        return stoppedTests().stream().findFirst().orElse(null);
     }
 
     public List<String> failedTests() {

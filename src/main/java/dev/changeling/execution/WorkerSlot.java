@@ -128,7 +128,6 @@ final class WorkerSlot {
         } else if (exhaustedMemory(result)) {
             retire(WorkerTime.Replacement.HEAP_EXHAUSTED);
         } else if (result.stoppedTest() == null && mutantsOnWorker >= settings.mutantsPerWorker()) {
-            time.timed(WorkerTime.Use.ENDS, worker::close);
             retire(WorkerTime.Replacement.SHARE_DONE);
         }
         return result;
@@ -336,13 +335,16 @@ final class WorkerSlot {
         retire(null);
     }
 
-    /** {@link #retire()}, counting why the worker is replaced when it is. */
+    /**
+     * {@link #retire()}, counting why the worker is replaced when it is; one that has run its share of mutants is let go
+     * as at the end of a run (its test session closed first), and killed only if it will not exit.
+     */
     private void retire(WorkerTime.Replacement why) {
-        if (worker != null && why != null) {
-            time.replaced(why);
-        }
         if (worker != null) {
-            time.timed(WorkerTime.Use.ENDS, worker::end);
+            if (why != null) {
+                time.replaced(why);
+            }
+            time.timed(WorkerTime.Use.ENDS, why == WorkerTime.Replacement.SHARE_DONE ? worker::close : worker::end);
         }
         worker = null;
         live = null;
