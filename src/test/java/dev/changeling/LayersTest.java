@@ -27,7 +27,7 @@ class LayersTest {
     private static final Pattern REFERENCE = Pattern.compile("\\bdev\\.changeling\\.([a-z]+)\\b");
     private static final Set<String> VIEWS = Set.of("cli", "review", "terminal");
     private static final Set<String> ENGINE = Set.of("run", "execution", "compile", "mutant", "operator", "project",
-            "scope", "source", "results", "analysis");
+            "scope", "source", "results", "analysis", "recall");
 
     @Test
     void theEngineImportsNoView() throws IOException {

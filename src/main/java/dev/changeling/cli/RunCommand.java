@@ -14,6 +14,7 @@ import dev.changeling.review.Gate;
 import dev.changeling.review.Settled;
 import dev.changeling.review.Standing;
 import dev.changeling.run.MutationRun;
+import dev.changeling.recall.Recall;
 import dev.changeling.run.RunInput;
 import dev.changeling.run.RunListener;
 import dev.changeling.run.RunRequest;
@@ -73,6 +74,11 @@ final class RunCommand implements Callable<Integer> {
                     + " one (the full kill matrix, in results.json); the verdicts stay the same.")
     boolean everyTest;
 
+    @Option(names = "--run-all",
+            description = "Run every mutant, also those whose verdict an earlier run found with the same code, tests, classpath"
+                    + " and settings (kept in target/changeling/" + Recall.FILE_NAME + ", which this run still updates).")
+    boolean runAll;
+
     @Option(names = "--time-extra", paramLabel = "MS",
             description = "... plus this many milliseconds (" + Deadlines.FIRST_RUN_EXTRA_MILLIS + " more when the worker first meets a test class), before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
     long timeExtraMillis = Deadlines.DEFAULT.constantMillis();
@@ -126,7 +132,7 @@ final class RunCommand implements Callable<Integer> {
         Gate gate = new Gate(false, minScore);
         RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
                 workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts,
-                everyTest, shard, module).resolve();
+                everyTest, shard, module, runAll).resolve();
         ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();

@@ -11,6 +11,8 @@ import dev.changeling.execution.TestRun;
 import dev.changeling.execution.TestStatus;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
+import dev.changeling.recall.Recall;
+import dev.changeling.recall.VerdictKeys;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.Records;
 import dev.changeling.results.Verdict;
@@ -77,6 +79,28 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
             jobs.add(everyTest ? job.runningEveryTest() : job);
         }
         return new JobPlan(jobs, mutants, reachedBy, infectedBy, settled, everyTest);
+    }
+
+    /**
+     * The plan less the jobs whose verdicts an earlier run found with the same inputs; those verdicts join the settled
+     * ones.
+     */
+    JobPlan recalling(Recall recall, VerdictKeys keys, Map<String, SourceFile> files) {
+        List<MutantJob> left = new ArrayList<>();
+        Map<String, MutantResult> known = new LinkedHashMap<>(settled);
+        for (MutantJob job : jobs) {
+            Mutant mutant = mutants.get(job.key());
+            recall.verdict(mutant, files.get(mutant.file()), job.tests(), everyTest, keys, reachedBy.get(job.key()),
+                            infectedBy.get(job.key()))
+                    .ifPresentOrElse(result -> known.put(job.key(), result), () -> left.add(job));
+        }
+        return new JobPlan(left, mutants, reachedBy, infectedBy, known, everyTest);
+    }
+
+    /** Keeps the verdict of a job that ran, for later runs. */
+    void keep(MutantResult result, Recall recall, VerdictKeys keys, Map<String, SourceFile> files) {
+        Mutant mutant = mutants.get(result.id());
+        recall.keep(mutant, files.get(mutant.file()), result, everyTest, keys);
     }
 
     /** A watched mutant whose expression gave the original's value for every reaching test: it survives them all. */

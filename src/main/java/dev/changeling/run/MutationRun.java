@@ -20,6 +20,9 @@ import dev.changeling.project.DiscoveredModule;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.ProjectDiscovery;
 import dev.changeling.project.ProjectLayout;
+import dev.changeling.project.SuiteConfiguration;
+import dev.changeling.recall.Recall;
+import dev.changeling.recall.VerdictKeys;
 import dev.changeling.results.CompiledAlike;
 import dev.changeling.results.ModuleRecord;
 import dev.changeling.results.MutantResult;
@@ -30,6 +33,7 @@ import dev.changeling.results.Verdict;
 import dev.changeling.scope.ChangeScope;
 import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -181,6 +185,9 @@ public final class MutationRun {
         Map<String, MutantResult> own = new ConcurrentHashMap<>();
         List<TestRecord> tests;
         boolean complete;
+        Recall kept = Recall.open(work.resolve(Recall.FILE_NAME), listener::phase);
+        Recall recall = request.recall() ? kept : kept.withoutGiving();
+        VerdictKeys keys;
         SuiteSetup setup = TestJvm.setup(project.suite(), request, schema.pointCount(), project.productionClasses(), listener);
         try (WorkerPool workers = WorkerPool.open(workerSettings(project, schema.schemaClasses(), work), setup)) {
             pool = workers;
@@ -201,7 +208,15 @@ public final class MutationRun {
             own.putAll(placements.settled());
             checkNotStopped();
 
-            JobPlan plan = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files, request.everyTest());
+            keys = VerdictKeys.of(project.classesDirectory(), project.testClassRoots(), project.testClasspath(),
+                    verdictSettings(project), baseline, build.points());
+            JobPlan planned = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files, request.everyTest());
+            JobPlan plan = planned.recalling(recall, keys, files);
+            int recalled = plan.settled().size() - planned.settled().size();
+            if (recalled > 0) {
+                listener.phase("recalled: " + recalled + (recalled == 1 ? " verdict" : " verdicts") + " of earlier runs whose"
+                        + " mutant, tests, classes and settings are the same (" + Recall.FILE_NAME + "; --run-all runs them)");
+            }
             own.putAll(plan.settled());
             results.putAll(own);
             own.values().forEach(listener::finished);
@@ -209,6 +224,7 @@ public final class MutationRun {
             mutantsStarted = true;
             List<JobResult> finished = clock.time(PhaseClock.EXECUTE, () -> workers.run(plan.jobs(), job -> {
                 MutantResult result = plan.resultOf(job, files);
+                plan.keep(result, recall, keys, files);
                 own.put(job.key(), result);
                 results.put(job.key(), result);
                 listener.finished(result);
@@ -221,11 +237,27 @@ public final class MutationRun {
         }
         CompiledAlike alike = stopped ? CompiledAlike.NONE
                 : clock.time(PhaseClock.COMPARE, () -> SurvivorComparison.compare(mutants, files, own, compileClasspath,
-                        request.shard().isPresent()));
+                        request.shard().isPresent(), recall, keys));
         if (alike.compared() > 0) {
             listener.phase(SurvivorComparison.describe(alike));
         }
+        recall.save(path -> Files.exists(request.layout().root().resolve(path)), listener::phase);
         return new ModuleOutcome(tests, complete, alike);
+    }
+
+    /** Every setting of the run that can change a verdict, in words: part of each verdict's key. */
+    private String verdictSettings(DiscoveredProject project) {
+        return request.deadlines() + "; heap " + request.workerHeap().orElse("default") + "; " + request.mutantsPerWorker()
+                + " mutants per worker; every test " + request.everyTest() + "; skipped " + request.skipTests() + " "
+                + request.skipTags() + "; maven " + request.discovery() + "; " + testJvm(project.suite());
+    }
+
+    /** How the tests run, whichever tests they are (a new test class must not change every key). */
+    private static String testJvm(SuiteConfiguration suite) {
+        return "tags " + suite.includedTags() + " " + suite.excludedTags() + "; properties " + suite.systemProperties()
+                + "; environment " + suite.environment() + "; parameters " + suite.configurationParameters() + "; options "
+                + suite.jvmArguments() + " " + suite.maxHeap() + "; in " + suite.workingDirectory() + "; fresh JVM per class "
+                + suite.freshJvmPerClass();
     }
 
     /** The shard's part of the chosen mutants, said in a line. */

@@ -35,12 +35,13 @@ import java.util.Optional;
  * @param everyTest        whether every reaching test runs against every mutant (the full kill matrix)
  * @param shard            the share of the mutants to run as typed ({@link Shard#FORM}), or null for all
  * @param module           the one module of a multi-module build to analyse ({@code --module}), or null for every one
+ * @param runAll           whether every mutant runs, none getting the verdict an earlier run found with the same inputs
  */
 public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, SelectionInput selection,
                        Optional<ChangeSpec> change, List<String> mavenArguments, Integer workers, double timeFactor,
                        long timeExtraMillis, String workerHeap, int mutantsPerWorker, List<String> skipTests,
                        List<String> skipTags, boolean recheckTimeouts, boolean everyTest, String shard,
-                       String module) {
+                       String module, boolean runAll) {
 
     public RunInput {
         paths = List.copyOf(paths);
@@ -77,7 +78,7 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         Optional<String> picked = Optional.ofNullable(module).map(path -> CodeModule.named(layout.root(), path).path());
         DiscoveryOptions discovery = new DiscoveryOptions(Optional.empty(), mavenArguments, explicit);
         return new RunRequest(layout, layout.limits(paths), ProjectSelection.of(selection, change.isPresent(), layout), change, discovery, workerCount, deadlines,
-                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest, share, picked);
+                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest, share, picked, !runAll);
     }
 
     private Optional<Shard> parsedShard() {

@@ -45,6 +45,8 @@ import java.util.function.Predicate;
  * @param shard            the share of the chosen mutants this run runs, when the run is cut into shards
  * @param module           the one module of a multi-module build to analyse, by its path from the root; empty for
  *                         every module with tests of its own (and for a project of one module)
+ * @param recall           whether a mutant whose code, tests and settings are those an earlier run found its verdict
+ *                         with gets that verdict again without running ({@code recall.Recall}); kept for later runs either way
  */
 public record RunRequest(
         ProjectLayout layout,
@@ -61,7 +63,8 @@ public record RunRequest(
         boolean recheckTimeouts,
         boolean everyTest,
         Optional<Shard> shard,
-        Optional<String> module) {
+        Optional<String> module,
+        boolean recall) {
 
     public RunRequest {
         limits = List.copyOf(limits);
@@ -106,6 +109,6 @@ public record RunRequest(
                 Selection.all(request, recorded.seed()), Optional.empty(), discovery, 1,
                 new Deadlines(recorded.timeFactor(), recorded.timeExtraMillis()), Optional.ofNullable(recorded.workerHeap()),
                 recorded.mutantsPerWorker() > 0 ? recorded.mutantsPerWorker() : WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
-                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest(), Optional.empty(), module);
+                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest(), Optional.empty(), module, true);
     }
 }
