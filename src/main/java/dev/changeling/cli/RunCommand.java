@@ -15,9 +15,11 @@ import dev.changeling.review.Settled;
 import dev.changeling.review.Standing;
 import dev.changeling.run.MutationRun;
 import dev.changeling.recall.Recall;
+import dev.changeling.recall.ReachMap;
 import dev.changeling.run.RunInput;
 import dev.changeling.run.RunListener;
 import dev.changeling.run.RunRequest;
+import dev.changeling.run.Reuse;
 import dev.changeling.terminal.Progress;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -25,6 +27,7 @@ import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -75,9 +78,21 @@ final class RunCommand implements Callable<Integer> {
     boolean everyTest;
 
     @Option(names = "--run-all",
-            description = "Run every mutant, also those whose verdict an earlier run found with the same code, tests, classpath"
-                    + " and settings (kept in target/changeling/" + Recall.FILE_NAME + ", which this run still updates).")
+            description = "Run every mutant and the whole unmutated suite, also where an earlier run found the verdict, or the"
+                    + " tests' reach, with the same code, tests, classpath and settings (kept in target/changeling/"
+                    + Recall.FILE_NAME + " and " + ReachMap.FILE_NAME + ", which this run still updates).")
     boolean runAll;
+
+    @Option(names = "--reach-map", paramLabel = "FILE",
+            description = "Choose the baseline's tests by this reach map (one a whole run wrote, handed over by CI, say): only"
+                    + " test classes that are new, changed, or reached changed code run; the others' reach is taken from the map."
+                    + " Default: target/changeling/" + ReachMap.FILE_NAME + " when there is one.")
+    Path reachMap;
+
+    @Option(names = "--map-only",
+            description = "Make every mutation point, run the unmutated suite, write the reach map (target/changeling/"
+                    + ReachMap.FILE_NAME + ") and stop: no mutant runs and no results are written.")
+    boolean mapOnly;
 
     @Option(names = "--time-extra", paramLabel = "MS",
             description = "... plus this many milliseconds (" + Deadlines.FIRST_RUN_EXTRA_MILLIS + " more when the worker first meets a test class), before the worker is stopped and the mutant counts as timed out (default: ${DEFAULT-VALUE}).")
@@ -132,7 +147,7 @@ final class RunCommand implements Callable<Integer> {
         Gate gate = new Gate(false, minScore);
         RunRequest request = new RunInput(project.paths, explicit.project(), mutants.input(), change.spec(), mavenArguments,
                 workers, timeFactor, timeExtraMillis, workerHeap, mutantsPerWorker, skipTests, skipTags, recheckTimeouts,
-                everyTest, shard, module, runAll).resolve();
+                everyTest, shard, module, new Reuse(!runAll, Optional.ofNullable(reachMap), mapOnly)).resolve();
         ProjectLayout layout = request.layout();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
@@ -141,7 +156,7 @@ final class RunCommand implements Callable<Integer> {
         MutationRun run = new MutationRun(request, listener);
         Interruption interruption = Interruption.watch(run, err);
         try {
-            return runAndReport(run, listener, interruption, gate, out, err, layout);
+            return runAndReport(run, listener, interruption, gate, out, err, layout, request.reuse().mapOnly());
         } finally {
             listener.close();
             interruption.told();
@@ -153,7 +168,7 @@ final class RunCommand implements Callable<Integer> {
      * they were written; a run that completed before the stop took effect still gets its report.
      */
     private Integer runAndReport(MutationRun run, ProgressListener listener, Interruption interruption, Gate gate,
-                                 PrintWriter out, PrintWriter err, ProjectLayout layout) {
+                                 PrintWriter out, PrintWriter err, ProjectLayout layout, boolean mapOnly) {
         RunResults results;
         try {
             results = run.execute();
@@ -164,6 +179,10 @@ final class RunCommand implements Callable<Integer> {
             listener.close();
             err.println("changeling: " + failure.getMessage());
             return ExitCode.INTERRUPTED;
+        }
+        if (mapOnly) {
+            listener.close();
+            return results.complete() ? ExitCode.OK : ExitCode.INTERRUPTED;
         }
         Path resultsFile = layout.resultsFile();
         write(resultsFile, results);

@@ -82,6 +82,14 @@ public final class Baseline {
         return new Baseline(tests, containers, reached, failures, nanos, classesRunInFreshWorkers, tags);
     }
 
+    /** The same run with more tests, whose reach and times were recorded earlier (a reach map's). */
+    public Baseline with(List<RecordedTest> recorded) {
+        List<RecordedTest> all = new ArrayList<>(tests);
+        all.addAll(recorded);
+        return new Baseline(all, failedContainers, reachedWhileInitialising, initialisationFailures, nanos,
+                classesRunInFreshWorkers, tagsThatLeftOutTests);
+    }
+
     /** The same run, with the excluded tag expressions that left out at least one test (the worker says which). */
     Baseline withTagsThatLeftOutTests(Collection<String> tags) {
         return new Baseline(tests, failedContainers, reachedWhileInitialising, initialisationFailures, nanos,

@@ -5,10 +5,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
+import java.util.function.Predicate;
 import java.util.stream.Collectors;
 
 /** The worker pool: one thread per slot takes the next job from a shared list until none are left. */
@@ -42,13 +44,13 @@ final class DefaultWorkerPool implements WorkerPool {
      * shared worker runs again in a fresh one, and that run counts.
      */
     @Override
-    public synchronized Baseline baseline(Consumer<String> onTestFinished) {
+    public synchronized Baseline baseline(Predicate<String> runs, Consumer<String> onTestFinished) {
         throwIfStopped();
         long start = System.nanoTime();
         List<List<String>> classes = new ArrayList<>(setup.testClasses().stream()
                 .collect(Collectors.groupingBy(name -> name.contains("$") ? name.substring(0, name.indexOf('$')) : name,
                         LinkedHashMap::new, Collectors.toList()))
-                .values());
+                .entrySet().stream().filter(group -> runs.test(group.getKey())).map(Map.Entry::getValue).toList());
         Baseline[] parts = new Baseline[classes.size()];
         AtomicInteger next = new AtomicInteger();
         Consumer<String> progress = name -> {

@@ -2,6 +2,7 @@ package dev.changeling.execution;
 
 import java.util.List;
 import java.util.function.Consumer;
+import java.util.function.Predicate;
 
 /**
  * Worker JVMs that run the project's tests: the unmutated suite once, then mutant after mutant. Workers
@@ -23,7 +24,15 @@ public interface WorkerPool extends AutoCloseable {
      * @throws dev.changeling.UserError                 when the worker cannot start, dies or runs out of time
      * @throws java.util.concurrent.CancellationException when the pool was stopped
      */
-    Baseline baseline(Consumer<String> onTestFinished);
+    default Baseline baseline(Consumer<String> onTestFinished) {
+        return baseline(testClass -> true, onTestFinished);
+    }
+
+    /**
+     * Runs the test classes (top-level, binary names) that {@code runs} accepts, as {@link #baseline(Consumer)} runs them
+     * all.
+     */
+    Baseline baseline(Predicate<String> runs, Consumer<String> onTestFinished);
 
     /**
      * Runs the jobs on all workers, each job's tests one at a time, and returns the results of the jobs

@@ -19,7 +19,9 @@ import java.util.TreeSet;
 import java.util.stream.Stream;
 import org.objectweb.asm.ClassReader;
 import org.objectweb.asm.ClassVisitor;
+import org.objectweb.asm.ClassWriter;
 import org.objectweb.asm.Opcodes;
+import org.objectweb.asm.tree.ClassNode;
 
 /**
  * The compiled classes of a project's output folders: each class's bytes by digest, the source file javac compiled it
@@ -30,8 +32,11 @@ final class ClassGraph {
 
     private static final int CONSTANT_CLASS = 7;
 
-    /** One class file: its digest, its source by package path ({@code org/x/Foo.java}) or null, the classes it names. */
-    private record Node(String digest, String source, Set<String> names) {
+    /**
+     * One class file: its digest, the digest of what another class's compilation reads of it (everything but the
+     * methods' code and debug information), its source by package path ({@code org/x/Foo.java}), the classes it names.
+     */
+    private record Node(String digest, String apiDigest, String source, Set<String> names) {
     }
 
     private final Map<String, Node> nodes;
@@ -87,7 +92,11 @@ final class ClassGraph {
         String name = reader.getClassName();
         String packagePath = name.lastIndexOf('/') < 0 ? "" : name.substring(0, name.lastIndexOf('/') + 1);
         String sourcePath = source[0] != null ? packagePath + source[0] : conventionalSource(name);
-        return new Node(digest(bytes), sourcePath, names);
+        ClassNode api = new ClassNode();
+        reader.accept(api, ClassReader.SKIP_CODE | ClassReader.SKIP_DEBUG | ClassReader.SKIP_FRAMES);
+        ClassWriter writer = new ClassWriter(0);
+        api.accept(writer);
+        return new Node(digest(bytes), digest(writer.toByteArray()), sourcePath, names);
     }
 
     /** Without a source attribute, the file javac names after the top-level class. */
@@ -129,16 +138,31 @@ final class ClassGraph {
      * package path and source attribute end it.
      */
     List<String> classesOf(String sourcePath) {
+        String source = sourceOf(sourcePath);
+        return source == null ? List.of() : bySource.get(source);
+    }
+
+    /** The source, by package path ({@code org/x/Foo.java}), that a file's path ends with, or null when no class has it. */
+    String sourceOf(String sourcePath) {
         String path = sourcePath.replace('\\', '/');
         for (int slash = -1; ; slash = path.indexOf('/', slash + 1)) {
-            List<String> classes = bySource.get(path.substring(slash + 1));
-            if (classes != null) {
-                return classes;
+            if (bySource.containsKey(path.substring(slash + 1))) {
+                return path.substring(slash + 1);
             }
             if (path.indexOf('/', slash + 1) < 0) {
-                return List.of();
+                return null;
             }
         }
+    }
+
+    /** Every source the classes were compiled from, by package path. */
+    Set<String> sources() {
+        return bySource.keySet();
+    }
+
+    /** The classes compiled from a source given by package path ({@code org/x/Foo.java}). */
+    List<String> classesOfSource(String source) {
+        return bySource.getOrDefault(source, List.of());
     }
 
     /** The classes of the folders that a class can reach by the names in constant pools, itself and its nested classes included. */
@@ -164,9 +188,18 @@ final class ClassGraph {
 
     /** One digest of the classes' names and bytes; a class the folders do not hold counts as absent. */
     String digestOf(Collection<String> classes) {
+        return digestOf(classes, Node::digest);
+    }
+
+    /** One digest of what compiling against the classes reads of them: as {@link #digestOf}, without methods' code. */
+    String apiDigestOf(Collection<String> classes) {
+        return digestOf(classes, Node::apiDigest);
+    }
+
+    private String digestOf(Collection<String> classes, java.util.function.Function<Node, String> part) {
         StringBuilder text = new StringBuilder();
         new TreeSet<>(classes).forEach(name -> text.append(name).append(' ')
-                .append(nodes.containsKey(name) ? nodes.get(name).digest() : "absent").append('\n'));
+                .append(nodes.containsKey(name) ? part.apply(nodes.get(name)) : "absent").append('\n'));
         return SourceHash.sha256(text.toString());
     }
 }

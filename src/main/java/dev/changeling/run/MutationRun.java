@@ -20,9 +20,6 @@ import dev.changeling.project.DiscoveredModule;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.ProjectDiscovery;
 import dev.changeling.project.ProjectLayout;
-import dev.changeling.project.SuiteConfiguration;
-import dev.changeling.recall.Recall;
-import dev.changeling.recall.VerdictKeys;
 import dev.changeling.results.CompiledAlike;
 import dev.changeling.results.ModuleRecord;
 import dev.changeling.results.MutantResult;
@@ -33,7 +30,6 @@ import dev.changeling.results.Verdict;
 import dev.changeling.scope.ChangeScope;
 import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -185,19 +181,20 @@ public final class MutationRun {
         Map<String, MutantResult> own = new ConcurrentHashMap<>();
         List<TestRecord> tests;
         boolean complete;
-        Recall kept = Recall.open(work.resolve(Recall.FILE_NAME), listener::phase);
-        Recall recall = request.recall() ? kept : kept.withoutGiving();
-        VerdictKeys keys;
+        EarlierRuns earlier = EarlierRuns.open(request, listener, project, work, chosen);
         SuiteSetup setup = TestJvm.setup(project.suite(), request, schema.pointCount(), project.productionClasses(), listener);
         try (WorkerPool workers = WorkerPool.open(workerSettings(project, schema.schemaClasses(), work), setup)) {
             pool = workers;
             checkNotStopped();
-            Baseline baseline = clock.time(PhaseClock.BASELINE, () -> workers.baseline(name -> { }));
-            TestJvm.noteUnusedSkipTags(request, baseline, listener);
+            Baseline baseline = clock.time(PhaseClock.BASELINE, () -> earlier.baseline(workers, schema.points(), setup));
             GreenBaseline.require(baseline, setup, project.layout().root().resolve(module.path()));
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
             listener.phase(String.format(Locale.ROOT, "baseline: %d tests green in %.1f s%s",
                     baseline.tests().size(), baseline.nanos() / 1e9, GreenBaseline.freshWorkers(baseline)));
+            earlier.map(schema.points(), baseline);
+            if (request.reuse().mapOnly()) {
+                return new ModuleOutcome(tests, true, CompiledAlike.NONE);
+            }
 
             BuildResult build = clock.time(PhaseClock.COMPILE_ALONE, schema::compileAlone);
             Placements placements = Placements.of(mutants, build, files);
@@ -208,15 +205,8 @@ public final class MutationRun {
             own.putAll(placements.settled());
             checkNotStopped();
 
-            keys = VerdictKeys.of(project.classesDirectory(), project.testClassRoots(), project.testClasspath(),
-                    verdictSettings(project), baseline, build.points());
-            JobPlan planned = JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files, request.everyTest());
-            JobPlan plan = planned.recalling(recall, keys, files);
-            int recalled = plan.settled().size() - planned.settled().size();
-            if (recalled > 0) {
-                listener.phase("recalled: " + recalled + (recalled == 1 ? " verdict" : " verdicts") + " of earlier runs whose"
-                        + " mutant, tests, classes and settings are the same (" + Recall.FILE_NAME + "; --run-all runs them)");
-            }
+            JobPlan plan = earlier.recalling(JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files,
+                    request.everyTest()), baseline, build, files);
             own.putAll(plan.settled());
             results.putAll(own);
             own.values().forEach(listener::finished);
@@ -224,7 +214,7 @@ public final class MutationRun {
             mutantsStarted = true;
             List<JobResult> finished = clock.time(PhaseClock.EXECUTE, () -> workers.run(plan.jobs(), job -> {
                 MutantResult result = plan.resultOf(job, files);
-                plan.keep(result, recall, keys, files);
+                plan.keep(result, earlier.recall(), earlier.keys(), files);
                 own.put(job.key(), result);
                 results.put(job.key(), result);
                 listener.finished(result);
@@ -237,27 +227,12 @@ public final class MutationRun {
         }
         CompiledAlike alike = stopped ? CompiledAlike.NONE
                 : clock.time(PhaseClock.COMPARE, () -> SurvivorComparison.compare(mutants, files, own, compileClasspath,
-                        request.shard().isPresent(), recall, keys));
+                        request.shard().isPresent(), earlier.recall(), earlier.keys()));
         if (alike.compared() > 0) {
             listener.phase(SurvivorComparison.describe(alike));
         }
-        recall.save(path -> Files.exists(request.layout().root().resolve(path)), listener::phase);
+        earlier.save();
         return new ModuleOutcome(tests, complete, alike);
-    }
-
-    /** Every setting of the run that can change a verdict, in words: part of each verdict's key. */
-    private String verdictSettings(DiscoveredProject project) {
-        return request.deadlines() + "; heap " + request.workerHeap().orElse("default") + "; " + request.mutantsPerWorker()
-                + " mutants per worker; every test " + request.everyTest() + "; skipped " + request.skipTests() + " "
-                + request.skipTags() + "; maven " + request.discovery() + "; " + testJvm(project.suite());
-    }
-
-    /** How the tests run, whichever tests they are (a new test class must not change every key). */
-    private static String testJvm(SuiteConfiguration suite) {
-        return "tags " + suite.includedTags() + " " + suite.excludedTags() + "; properties " + suite.systemProperties()
-                + "; environment " + suite.environment() + "; parameters " + suite.configurationParameters() + "; options "
-                + suite.jvmArguments() + " " + suite.maxHeap() + "; in " + suite.workingDirectory() + "; fresh JVM per class "
-                + suite.freshJvmPerClass();
     }
 
     /** The shard's part of the chosen mutants, said in a line. */

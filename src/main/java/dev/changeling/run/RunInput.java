@@ -11,6 +11,7 @@ import dev.changeling.project.DiscoveryOptions;
 import dev.changeling.project.ExplicitProject;
 import dev.changeling.project.ProjectLayout;
 import dev.changeling.scope.ChangeSpec;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
@@ -35,13 +36,13 @@ import java.util.Optional;
  * @param everyTest        whether every reaching test runs against every mutant (the full kill matrix)
  * @param shard            the share of the mutants to run as typed ({@link Shard#FORM}), or null for all
  * @param module           the one module of a multi-module build to analyse ({@code --module}), or null for every one
- * @param runAll           whether every mutant runs, none getting the verdict an earlier run found with the same inputs
+ * @param reuse            what to take from earlier runs (kept verdicts, a reach map), as typed
  */
 public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, SelectionInput selection,
                        Optional<ChangeSpec> change, List<String> mavenArguments, Integer workers, double timeFactor,
                        long timeExtraMillis, String workerHeap, int mutantsPerWorker, List<String> skipTests,
                        List<String> skipTags, boolean recheckTimeouts, boolean everyTest, String shard,
-                       String module, boolean runAll) {
+                       String module, Reuse reuse) {
 
     public RunInput {
         paths = List.copyOf(paths);
@@ -78,7 +79,22 @@ public record RunInput(List<Path> paths, Optional<ExplicitProject> explicit, Sel
         Optional<String> picked = Optional.ofNullable(module).map(path -> CodeModule.named(layout.root(), path).path());
         DiscoveryOptions discovery = new DiscoveryOptions(Optional.empty(), mavenArguments, explicit);
         return new RunRequest(layout, layout.limits(paths), ProjectSelection.of(selection, change.isPresent(), layout), change, discovery, workerCount, deadlines,
-                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest, share, picked, !runAll);
+                Optional.ofNullable(workerHeap), mutantsPerWorker, skipTests, skipTags, recheckTimeouts, everyTest, share, picked, reused(share));
+    }
+
+    /** What to take from earlier runs; a reach map given by hand must exist, and a run that only maps must map it all. */
+    private Reuse reused(Optional<Shard> share) {
+        reuse.reachMap().filter(file -> !Files.isRegularFile(file)).ifPresent(file -> {
+            throw new UserError(file + ": no such reach map; give the " + "reach-map.json a whole run wrote in its build folder"
+                    + " (target/changeling/), or leave --reach-map out");
+        });
+        if (reuse.mapOnly() && (change.isPresent() || share.isPresent() || selection.sample() != null || selection.margin() != null
+                || selection.mix() != null || !selection.fileGlobs().isEmpty() || !selection.orders().contains(1)
+                || !paths.stream().allMatch(Files::isDirectory))) {
+            throw usage("--map-only maps the whole project: leave out --changed-since, --uncommitted, --diff-file, --sample,"
+                    + " --mix, --files, --shard and file paths, and keep order 1");
+        }
+        return reuse;
     }
 
     private Optional<Shard> parsedShard() {

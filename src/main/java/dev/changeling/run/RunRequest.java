@@ -45,8 +45,7 @@ import java.util.function.Predicate;
  * @param shard            the share of the chosen mutants this run runs, when the run is cut into shards
  * @param module           the one module of a multi-module build to analyse, by its path from the root; empty for
  *                         every module with tests of its own (and for a project of one module)
- * @param recall           whether a mutant whose code, tests and settings are those an earlier run found its verdict
- *                         with gets that verdict again without running ({@code recall.Recall}); kept for later runs either way
+ * @param reuse            what the run takes from earlier runs: kept verdicts, the reach map
  */
 public record RunRequest(
         ProjectLayout layout,
@@ -64,7 +63,7 @@ public record RunRequest(
         boolean everyTest,
         Optional<Shard> shard,
         Optional<String> module,
-        boolean recall) {
+        Reuse reuse) {
 
     public RunRequest {
         limits = List.copyOf(limits);
@@ -109,6 +108,6 @@ public record RunRequest(
                 Selection.all(request, recorded.seed()), Optional.empty(), discovery, 1,
                 new Deadlines(recorded.timeFactor(), recorded.timeExtraMillis()), Optional.ofNullable(recorded.workerHeap()),
                 recorded.mutantsPerWorker() > 0 ? recorded.mutantsPerWorker() : WorkerSettings.DEFAULT_MUTANTS_PER_WORKER,
-                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest(), Optional.empty(), module, true);
+                recorded.skipTests(), recorded.skipTags(), false, recorded.everyTest(), Optional.empty(), module, Reuse.DEFAULT);
     }
 }

@@ -62,6 +62,20 @@ class ClassGraphTest {
         assertNotEquals(first, compile(Path.of("tide/Buoy.java"), buoy).digestOf(Set.of("tide/Buoy", "tide/Absent")));
     }
 
+    @Test
+    void whatCompilingAgainstAClassReads_changesWithItsSignaturesAndConstants_notWithTheCodeOfItsMethods() throws IOException {
+        String buoy = """
+                package tide;
+                class Buoy { static final int LIGHTS = 2; static int count() { return 3; } }
+                """;
+        String first = compile(Path.of("tide/Buoy.java"), buoy).apiDigestOf(Set.of("tide/Buoy"));
+
+        assertEquals(first, compile(Path.of("tide/Buoy.java"), buoy.replace("return 3", "return 4")).apiDigestOf(Set.of("tide/Buoy")));
+        assertNotEquals(first, compile(Path.of("tide/Buoy.java"), buoy.replace("LIGHTS = 2", "LIGHTS = 5")).apiDigestOf(Set.of("tide/Buoy")));
+        assertNotEquals(first, compile(Path.of("tide/Buoy.java"), buoy.replace("static int count()", "static long count()"))
+                .apiDigestOf(Set.of("tide/Buoy")));
+    }
+
     /** Compiles the sources (path, text, path, text, ...) with javac into a fresh folder and reads the graph. */
     private ClassGraph compile(Path firstPath, String firstText, String... more) throws IOException {
         Path sources = Files.createTempDirectory(folder, "sources");

@@ -1,6 +1,7 @@
 package dev.changeling.run;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.changeling.ExitCode;
@@ -26,7 +27,8 @@ import org.junit.jupiter.api.io.TempDir;
  * The greenhouse sample run again and again as a change under review is pushed again: a run with nothing changed gives
  * every verdict again without running a mutant; after an edit of a main method, after a new test and after a new
  * version of a dependency, the warm run gives exactly the verdicts of {@code --run-all} on the same tree (a cold run),
- * running only what the change can have touched; a recall file that cannot be read is set aside with a notice.
+ * running only what the change can have touched; a recall file that cannot be read is set aside with a notice. The
+ * baseline runs only the test classes the reach map the previous run wrote cannot vouch for.
  */
 @Tag("e2e")
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
@@ -64,6 +66,7 @@ class RecallRunTest {
                 package dev.changeling.samples.greenhouse;
 
                 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 
                 import org.junit.jupiter.api.Test;
 
@@ -121,6 +124,18 @@ class RecallRunTest {
         assertEquals(Verdict.KILLED, nineOClock.verdict());
         assertTrue(nineOClock.killedBy().contains("NineInTheEveningTest"), nineOClock.killedBy());
         assertTrue(recalled(afterTest) > 0 && recalled(afterTest) < ran(afterTest), afterTest::transcript);
+    }
+
+    @Test
+    void theBaselineRunsOnlyTheTestClassesTheReachMapCannotVouchFor() {
+        assertTrue(unchanged.err().contains("reach map: 0 of 3 test classes run (new, changed, or reaching 0 changed files);"
+                + " the reach of 30 tests comes from the map"), unchanged::transcript);
+        assertTrue(afterTest.err().contains("reach map: 1 of 4 test classes run"), afterTest::transcript);
+        assertTrue(afterEdit.err().contains("test classes run (new, changed, or reaching 1 changed file)"), afterEdit::transcript);
+        assertFalse(afterEdit.err().contains("reach map: 0 of 3") || afterEdit.err().contains("reach map: 3 of 3"), afterEdit::transcript);
+        assertEquals(cold.results().tests().size(), unchanged.results().tests().size());
+        assertTrue(afterDependency.err().contains("the reach map was made with another build of the tool, Java, classpath, test"
+                + " settings or operators: the whole suite runs"), afterDependency::transcript);
     }
 
     @Test

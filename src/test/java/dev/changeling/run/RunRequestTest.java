@@ -44,7 +44,7 @@ class RunRequestTest {
                 null, null, 7, null);
         RunRequest first = new RunRequest(ProjectLayout.locate(folder, Optional.of(given)), List.of(), selection,
                 Optional.empty(), discovery, 2, new Deadlines(2.5, 400), Optional.of("768m"), 40, List.of("*IT"),
-                List.of("slow"), false, true, Optional.empty(), Optional.empty(), true);
+                List.of("slow"), false, true, Optional.empty(), Optional.empty(), Reuse.DEFAULT);
 
         RunSettings settings = first.settings(new Selection.Chosen(List.of(), 0, false, null), Optional.empty());
         Path file = folder.resolve("results.json");

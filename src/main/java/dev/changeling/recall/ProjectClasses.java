@@ -1,0 +1,110 @@
+package dev.changeling.recall;
+
+import dev.changeling.source.SourceHash;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+
+/**
+ * A project's compiled classes and what surrounds them, read once per run: what the verdict keys and the reach map
+ * compare. The surroundings are one digest of this tool's build, the Java runtime, the tests' JVM settings, every jar
+ * and folder of the test classpath by content, and the resources of the output folders.
+ */
+public final class ProjectClasses {
+
+    private final ClassGraph main;
+    private final ClassGraph tests;
+    private final String surroundings;
+    private final Map<String, String> fileDigests = new HashMap<>();
+    private final Map<String, String> testClassDigests = new HashMap<>();
+
+    private ProjectClasses(ClassGraph main, ClassGraph tests, String surroundings) {
+        this.main = main;
+        this.tests = tests;
+        this.surroundings = surroundings;
+    }
+
+    /**
+     * @param classes   the compiled main classes
+     * @param testRoots the folders of compiled test classes
+     * @param classpath the tests' whole classpath; entries other than the folders above count by their content
+     * @param testJvm   how the tests run (their JVM's options, properties, tags), in words
+     */
+    public static ProjectClasses read(Path classes, List<Path> testRoots, List<Path> classpath, String testJvm) {
+        List<Path> outputs = new ArrayList<>();
+        outputs.add(classes);
+        outputs.addAll(testRoots);
+        StringBuilder text = new StringBuilder("tests run ").append(testJvm).append('\n')
+                .append("tool ").append(ToolBuild.identity()).append('\n')
+                .append("java ").append(System.getProperty("java.vendor")).append(' ').append(System.getProperty("java.version")).append('\n');
+        for (Path entry : classpath) {
+            if (!outputs.contains(entry)) {
+                text.append("classpath ").append(entry).append('\n');
+                contents(entry, false, text);
+            }
+        }
+        outputs.forEach(folder -> contents(folder, true, text));
+        return new ProjectClasses(ClassGraph.read(List.of(classes)), ClassGraph.read(testRoots), SourceHash.sha256(text.toString()));
+    }
+
+    /** The digest of everything around the classes. */
+    String surroundings() {
+        return surroundings;
+    }
+
+    /** The main classes. */
+    ClassGraph main() {
+        return main;
+    }
+
+    /** The classes compiled from one main file, by its project-relative path. */
+    synchronized String fileDigest(String file) {
+        return fileDigests.computeIfAbsent(file, path -> main.digestOf(main.classesOf(path)));
+    }
+
+    /**
+     * A test class (top-level, binary name) with every test class it names, directly or not; for a class unknown here,
+     * every test class.
+     */
+    synchronized String testClassDigest(String testClass) {
+        String owner = testClass == null ? "" : topLevel(testClass);
+        String start = tests.holds(owner) ? owner : "";
+        return testClassDigests.computeIfAbsent(start, name -> tests.digestOf(name.isEmpty() ? tests.names() : tests.closure(name)));
+    }
+
+    /** The top-level class of a binary class name, as an internal name ({@code org/x/FooTest}). */
+    static String topLevel(String binaryName) {
+        String name = binaryName.replace('.', '/');
+        int nested = name.indexOf('$', name.lastIndexOf('/') + 1);
+        return nested < 0 ? name : name.substring(0, nested);
+    }
+
+    /**
+     * Appends every file of a classpath entry by its digest (a jar: the jar's): of an output folder only the files that
+     * are not classes, since the classes count through the graphs.
+     */
+    private static void contents(Path entry, boolean resourcesOnly, StringBuilder text) {
+        try {
+            if (Files.isRegularFile(entry)) {
+                text.append(ClassGraph.digest(Files.readAllBytes(entry))).append('\n');
+            } else if (Files.isDirectory(entry)) {
+                try (Stream<Path> files = Files.walk(entry)) {
+                    for (Path file : files.filter(Files::isRegularFile).sorted().toList()) {
+                        String name = entry.relativize(file).toString().replace('\\', '/');
+                        if (!resourcesOnly || !name.endsWith(".class")) {
+                            text.append(name).append(' ').append(ClassGraph.digest(Files.readAllBytes(file))).append('\n');
+                        }
+                    }
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
