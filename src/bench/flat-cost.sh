@@ -42,7 +42,7 @@ what_else_runs() {
   echo "  busy over one second (%CPU of one core):"
   top -b -n 2 -d 1 -o %CPU -w 512 2>/dev/null | awk '/^top -/ { frame++ } frame == 2 && $1 ~ /^[0-9]+$/ && $9 + 0 >= 1 { print $1, $9 }' \
     | head -n 5 | while read -r pid cpu; do
-        args="$(ps -o args= -p "$pid" 2>/dev/null)" && printf '  %6s%%  pid %-7s %.90s\n' "$cpu" "$pid" "$args"
+        if args="$(ps -o args= -p "$pid" 2>/dev/null)"; then printf '  %6s%%  pid %-7s %.90s\n' "$cpu" "$pid" "$args"; fi
       done
 }
 
