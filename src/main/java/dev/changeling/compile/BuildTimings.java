@@ -6,7 +6,8 @@ package dev.changeling.compile;
  * @param renderMillis   writing the schema sources, over all rounds
  * @param compileMillis  the schema's javac tasks, over all rounds
  * @param fallbackMillis compiling mutants one at a time
- * @param schemaRounds   how many times the schema was compiled before it came out clean
+ * @param schemaRounds   how many times the schema was compiled before it came out clean; 0 when the last build's was
+ *                       taken as it was
  * @param aloneCompiles  how many mutants were compiled from their own files
  * @param aloneTasks     how many javac tasks that took (mutants of different files share one)
  */

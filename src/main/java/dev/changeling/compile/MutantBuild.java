@@ -18,7 +18,8 @@ import java.util.Set;
 /**
  * Compiles mutants: every point that can be switched at run time goes into one schema compiled by
  * one javac task; a mutant whose point cannot is compiled on its own, and one that does not compile
- * on its own is stillborn.
+ * on its own is stillborn. A schema whose points, files and classpath are the last build's is that build's
+ * ({@link SchemaReuse}).
  */
 public final class MutantBuild {
 
@@ -44,7 +45,7 @@ public final class MutantBuild {
      */
     public static SchemaStage compileSchema(BuildRequest request) {
         Path output = request.outputDirectory().toAbsolutePath().normalize();
-        for (String folder : List.of(SCHEMA, SCHEMA_SOURCES, ALONE, SCRATCH)) {
+        for (String folder : List.of(ALONE, SCRATCH)) {
             Outputs.deleteTree(output.resolve(folder));
         }
         Map<String, Placement> placements = new LinkedHashMap<>();
@@ -59,10 +60,20 @@ public final class MutantBuild {
         Set<Point> candidates = new LinkedHashSet<>();
         runnable.values().forEach(mutant -> candidates.addAll(mutant.points()));
 
-        createFolder(output.resolve(SCHEMA));
+        String key = SchemaReuse.key(candidates, request.files(), request.classpath());
+        SchemaCompiler.Outcome kept = SchemaReuse.reuse(output, key, candidates).orElse(null);
+        if (kept == null) {
+            for (String folder : List.of(SCHEMA, SCHEMA_SOURCES)) {
+                Outputs.deleteTree(output.resolve(folder));
+            }
+            createFolder(output.resolve(SCHEMA));
+        }
         try (Javac javac = new Javac(request.classpath())) {
-            SchemaCompiler.Outcome schema = new SchemaCompiler(javac, request.files(), output.resolve(SCHEMA),
+            SchemaCompiler.Outcome schema = kept != null ? kept : new SchemaCompiler(javac, request.files(), output.resolve(SCHEMA),
                     output.resolve(SCHEMA_SOURCES), output.resolve(SCRATCH)).compile(candidates);
+            if (kept == null) {
+                SchemaReuse.keep(output, key, schema);
+            }
             Map<Point, Integer> ids = new HashMap<>();
             schema.points().forEach(point -> ids.put(point, ids.size()));
             List<AloneCompiler.Job> pending = new ArrayList<>();

@@ -5,12 +5,10 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
 import java.util.ArrayDeque;
 import java.util.Collection;
 import java.util.Deque;
 import java.util.HashMap;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -36,7 +34,7 @@ final class ClassGraph {
      * One class file: its digest, the digest of what another class's compilation reads of it (everything but the
      * methods' code and debug information), its source by package path ({@code org/x/Foo.java}), the classes it names.
      */
-    private record Node(String digest, String apiDigest, String source, Set<String> names) {
+    private record Node(String digest, String apiDigest, String source, Set<String> names, TestMethods tests) {
     }
 
     private final Map<String, Node> nodes;
@@ -54,6 +52,15 @@ final class ClassGraph {
 
     /** Every class file below the folders (internal names, {@code org/x/Foo$Bar}); a missing folder has none. */
     static ClassGraph read(Collection<Path> folders) {
+        return read(folders, false);
+    }
+
+    /** Test classes as {@link #read(Collection)} reads classes, each also split into its test methods and the rest. */
+    static ClassGraph readTests(Collection<Path> folders) {
+        return read(folders, true);
+    }
+
+    private static ClassGraph read(Collection<Path> folders, boolean tests) {
         Map<String, Node> nodes = new TreeMap<>();
         for (Path folder : folders) {
             if (!Files.isDirectory(folder)) {
@@ -63,7 +70,7 @@ final class ClassGraph {
                 for (Path file : files.filter(path -> path.toString().endsWith(".class")).toList()) {
                     byte[] bytes = Files.readAllBytes(file);
                     String name = folder.relativize(file).toString().replace('\\', '/');
-                    nodes.putIfAbsent(name.substring(0, name.length() - ".class".length()), node(bytes));
+                    nodes.putIfAbsent(name.substring(0, name.length() - ".class".length()), node(bytes, tests));
                 }
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
@@ -72,7 +79,7 @@ final class ClassGraph {
         return new ClassGraph(nodes);
     }
 
-    private static Node node(byte[] bytes) {
+    private static Node node(byte[] bytes, boolean tests) {
         ClassReader reader = new ClassReader(bytes);
         char[] buffer = new char[reader.getMaxStringLength()];
         Set<String> names = new TreeSet<>();
@@ -96,7 +103,7 @@ final class ClassGraph {
         reader.accept(api, ClassReader.SKIP_CODE | ClassReader.SKIP_DEBUG | ClassReader.SKIP_FRAMES);
         ClassWriter writer = new ClassWriter(0);
         api.accept(writer);
-        return new Node(digest(bytes), digest(writer.toByteArray()), sourcePath, names);
+        return new Node(digest(bytes), digest(writer.toByteArray()), sourcePath, names, tests ? TestMethods.of(bytes) : null);
     }
 
     /** Without a source attribute, the file javac names after the top-level class. */
@@ -116,11 +123,7 @@ final class ClassGraph {
     }
 
     static String digest(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (java.security.NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is required by every Java runtime", e);
-        }
+        return SourceHash.sha256(bytes);
     }
 
     /** Every class the folders hold (internal names). */
@@ -194,6 +197,16 @@ final class ClassGraph {
     /** One digest of what compiling against the classes reads of them: as {@link #digestOf}, without methods' code. */
     String apiDigestOf(Collection<String> classes) {
         return digestOf(classes, Node::apiDigest);
+    }
+
+    /**
+     * One digest of what a test of this method name runs of the classes: each class without the code of its test
+     * methods, with the code of those of this name (its own, or one it inherits); a class read without its tests split
+     * counts whole.
+     */
+    String testDigestOf(Collection<String> classes, String method) {
+        return digestOf(classes, node -> node.tests() == null ? node.digest()
+                : node.tests().rest() + " " + node.tests().methods().getOrDefault(method, "-"));
     }
 
     private String digestOf(Collection<String> classes, java.util.function.Function<Node, String> part) {

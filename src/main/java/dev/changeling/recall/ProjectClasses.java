@@ -1,5 +1,6 @@
 package dev.changeling.recall;
 
+import dev.changeling.ToolBuild;
 import dev.changeling.source.SourceHash;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -9,6 +10,8 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
 import java.util.stream.Stream;
 
 /**
@@ -23,6 +26,7 @@ public final class ProjectClasses {
     private final String surroundings;
     private final Map<String, String> fileDigests = new HashMap<>();
     private final Map<String, String> testClassDigests = new HashMap<>();
+    private final Map<String, String> testMethodDigests = new HashMap<>();
 
     private ProjectClasses(ClassGraph main, ClassGraph tests, String surroundings) {
         this.main = main;
@@ -50,7 +54,7 @@ public final class ProjectClasses {
             }
         }
         outputs.forEach(folder -> contents(folder, true, text));
-        return new ProjectClasses(ClassGraph.read(List.of(classes)), ClassGraph.read(testRoots), SourceHash.sha256(text.toString()));
+        return new ProjectClasses(ClassGraph.read(List.of(classes)), ClassGraph.readTests(testRoots), SourceHash.sha256(text.toString()));
     }
 
     /** The digest of everything around the classes. */
@@ -76,6 +80,28 @@ public final class ProjectClasses {
         String owner = testClass == null ? "" : topLevel(testClass);
         String start = tests.holds(owner) ? owner : "";
         return testClassDigests.computeIfAbsent(start, name -> tests.digestOf(name.isEmpty() ? tests.names() : tests.closure(name)));
+    }
+
+    /**
+     * What one test runs of the test classes: those its class names, directly or not, each without its neighbours' test
+     * methods ({@link TestMethods}); by its whole class when its method is unknown.
+     *
+     * @param testClass its class (binary name), or null when unknown: every test class then counts
+     * @param method    the name of its test method, or null when unknown
+     */
+    synchronized String testDigest(String testClass, String method) {
+        if (method == null) {
+            return testClassDigest(testClass);
+        }
+        String start = testClass == null ? "" : testClass.replace('.', '/');
+        if (!tests.holds(start)) {
+            return testClassDigest(testClass);
+        }
+        return testMethodDigests.computeIfAbsent(start + "#" + method, key -> {
+            Set<String> reach = new TreeSet<>(tests.closure(start));
+            reach.addAll(tests.closure(topLevel(testClass)));
+            return tests.testDigestOf(reach, method);
+        });
     }
 
     /** The top-level class of a binary class name, as an internal name ({@code org/x/FooTest}). */

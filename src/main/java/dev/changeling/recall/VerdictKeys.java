@@ -11,6 +11,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
  * The content a mutant's verdict depends on, as one digest: the mutant (its fingerprint and its file's text), the
@@ -26,6 +28,8 @@ import java.util.TreeSet;
  * are given again; {@code run --run-all} runs every mutant.
  */
 public final class VerdictKeys {
+
+    private static final Pattern TEST_METHOD = Pattern.compile("\\[(?:method|test-template|test-factory|test):([^(\\]]+)\\(");
 
     private final ProjectClasses classes;
     private final String surroundings;
@@ -81,6 +85,19 @@ public final class VerdictKeys {
     }
 
     /**
+     * The name of a test's method in its JUnit unique id ({@code [method:name(…)]}, a template's or a factory's, or a
+     * JUnit 4 runner's {@code [test:name(…)]}), or null.
+     */
+    static String methodOf(String id) {
+        Matcher matcher = TEST_METHOD.matcher(id);
+        String name = null;
+        while (matcher.find()) {
+            name = matcher.group(1);
+        }
+        return name;
+    }
+
+    /**
      * What one test ran: its class and the test classes it names, and the main files whose points it reached; a test
      * the baseline does not know, or of unknown class, counts as naming every test class.
      */
@@ -88,7 +105,8 @@ public final class VerdictKeys {
         return testDigests.computeIfAbsent(id, key -> {
             RecordedTest test = baseline.test(key);
             StringBuilder text = new StringBuilder("test classes ")
-                    .append(classes.testClassDigest(test == null ? null : test.className())).append('\n');
+                    .append(test == null ? classes.testClassDigest(null) : classes.testDigest(test.className(), methodOf(test.id())))
+                    .append('\n');
             if (test != null) {
                 Set<String> files = new TreeSet<>();
                 for (int point : test.reached()) {

@@ -198,9 +198,11 @@ public final class MutationRun {
 
             BuildResult build = clock.time(PhaseClock.COMPILE_ALONE, schema::compileAlone);
             Placements placements = Placements.of(mutants, build, files);
-            listener.phase("compiled: " + build.pointCount() + " points in one schema in "
-                    + build.timings().compileMillis() + " ms (" + build.timings().schemaRounds()
-                    + (build.timings().schemaRounds() == 1 ? " round" : " rounds") + "); " + build.timings().aloneCompiles() + " mutants compiled alone; "
+            int rounds = build.timings().schemaRounds();
+            listener.phase("compiled: " + build.pointCount() + " points in one schema "
+                    + (rounds == 0 ? "(the last run's: the same points, sources and classpath)"
+                            : "in " + build.timings().compileMillis() + " ms (" + rounds + (rounds == 1 ? " round" : " rounds") + ")")
+                    + "; " + build.timings().aloneCompiles() + " mutants compiled alone; "
                     + placements.count(Verdict.STILLBORN) + " stillborn, " + placements.count(Verdict.SKIPPED) + " skipped (run once per JVM)");
             own.putAll(placements.settled());
             checkNotStopped();

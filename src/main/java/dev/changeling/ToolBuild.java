@@ -1,12 +1,13 @@
-package dev.changeling.recall;
+package dev.changeling;
 
+import dev.changeling.source.SourceHash;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.CodeSource;
 
 /** Which build of this tool runs: a verdict found by another build is not taken for one of this build's. */
-final class ToolBuild {
+public final class ToolBuild {
 
     private static String identity;
 
@@ -14,7 +15,7 @@ final class ToolBuild {
     }
 
     /** The digest of the jar the tool runs from; for classes in a folder (a development build), the folder. */
-    static synchronized String identity() {
+    public static synchronized String identity() {
         if (identity == null) {
             identity = find();
         }
@@ -25,7 +26,7 @@ final class ToolBuild {
         CodeSource source = ToolBuild.class.getProtectionDomain().getCodeSource();
         try {
             Path location = Path.of(source.getLocation().toURI());
-            return Files.isRegularFile(location) ? ClassGraph.digest(Files.readAllBytes(location)) : "classes in " + location;
+            return Files.isRegularFile(location) ? SourceHash.sha256(Files.readAllBytes(location)) : "classes in " + location;
         } catch (IOException | java.net.URISyntaxException | RuntimeException e) {
             return "unknown build";
         }
