@@ -33,6 +33,15 @@ ratio() {
   printf '  %s / %s = %.2f (target <= 0.2)\n' "$1" "$2" "$(echo "$(cat "target/$1.ms") / $(cat "target/$2.ms")" | bc -l)"
 }
 
+warm_and_cold() { # what was changed, then run options: a warm run, a --run-all run of the same tree, their figures
+  local change="$1"; shift
+  timed "warm-$change" "$@"
+  timed "cold-$change" --run-all "$@"
+  ratio "warm-$change" cold
+  ratio "warm-$change" "cold-$change"
+  java -cp "$jar:$classes" VerdictDiff "target/cold-$change.json" "target/warm-$change.json" | tail -1
+}
+
 timed cold "$@"
 
 python3 - <<'PY'
@@ -44,11 +53,7 @@ assert anchor in text, "the method to edit is not where it was"
 text = text.replace(anchor, anchor + "\n        final String given = string; // edited by the benchmark", 1)
 open(path, "w").write(text)
 PY
-timed warm-after-method-edit "$@"
-timed cold-after-method-edit --run-all "$@"
-ratio warm-after-method-edit cold
-ratio warm-after-method-edit cold-after-method-edit
-java -cp "$jar:$classes" VerdictDiff target/cold-after-method-edit.json target/warm-after-method-edit.json | tail -1
+warm_and_cold after-method-edit "$@"
 
 python3 - <<'PY'
 path = "src/test/java/org/apache/commons/cli/TypeHandlerTest.java"
@@ -63,8 +68,4 @@ text = text[:-1] + """
 """
 open(path, "w").write(text)
 PY
-timed warm-after-test-added "$@"
-timed cold-after-test-added --run-all "$@"
-ratio warm-after-test-added cold
-ratio warm-after-test-added cold-after-test-added
-java -cp "$jar:$classes" VerdictDiff target/cold-after-test-added.json target/warm-after-test-added.json | tail -1
+warm_and_cold after-test-added "$@"
