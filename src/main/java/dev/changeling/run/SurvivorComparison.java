@@ -68,7 +68,7 @@ final class SurvivorComparison {
     /** One line for the run's progress. */
     static String describe(CompiledAlike alike) {
         return "compared: " + alike.compared() + (alike.compared() == 1 ? " survivor" : " survivors")
-                + " compiled on their own; " + alike.asOriginal().size() + " compile to the original's classes (proposed equivalent), "
+                + " compiled on their own (or as an earlier run found with the same inputs); " + alike.asOriginal().size() + " compile to the original's classes (proposed equivalent), "
                 + alike.duplicateCount() + " repeat another survivor's";
     }
 }

@@ -4,8 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.github.difflib.DiffUtils;
+import com.github.difflib.UnifiedDiffUtils;
 import dev.changeling.ExitCode;
 import dev.changeling.project.ProjectLayout;
+import dev.changeling.recall.ReachMap;
 import dev.changeling.recall.Recall;
 import dev.changeling.results.MutantResult;
 import dev.changeling.results.RunResults;
@@ -13,6 +16,7 @@ import dev.changeling.results.Verdict;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.regex.Matcher;
@@ -43,6 +47,8 @@ class RecallRunTest {
     ToolRun unreadable;
     ToolRun afterEdit;
     ToolRun afterEditCold;
+    ToolRun scoped;
+    ToolRun scopedWholeSuite;
     ToolRun afterTest;
     ToolRun afterTestCold;
     ToolRun afterDependency;
@@ -56,11 +62,20 @@ class RecallRunTest {
         Path recallFile = ProjectLayout.of(project).changelingDirectory().resolve(Recall.FILE_NAME);
         Files.writeString(recallFile, "{\"format\": 1, \"verdicts\": [tr");
         unreadable = ok(ToolRun.onCopyOfProject(project));
+        Path mainBranchMap = Files.copy(ProjectLayout.of(project).changelingDirectory().resolve(ReachMap.FILE_NAME),
+                folder.resolve("main-branch-" + ReachMap.FILE_NAME));
 
-        edit(PACKAGE.formatted("main") + "Zone.java", "return dryBelowPercent - moisturePercent >= 15;",
+        String zone = PACKAGE.formatted("main") + "Zone.java";
+        List<String> before = Files.readAllLines(project.resolve(zone));
+        edit(zone, "return dryBelowPercent - moisturePercent >= 15;",
                 "int shortfall = dryBelowPercent - moisturePercent;\n        return shortfall >= 15;");
         afterEdit = ok(ToolRun.onCopyOfProject(project));
         afterEditCold = ok(ToolRun.onCopyOfProject(project, "--run-all"));
+        List<String> after = Files.readAllLines(project.resolve(zone));
+        Path review = folder.resolve("review.diff");
+        Files.write(review, UnifiedDiffUtils.generateUnifiedDiff("a/" + zone, "b/" + zone, before, DiffUtils.diff(before, after), 3));
+        scoped = ok(ToolRun.onCopyOfProject(project, "--diff-file", review.toString(), "--reach-map", mainBranchMap.toString()));
+        scopedWholeSuite = ok(ToolRun.onCopyOfProject(project, "--diff-file", review.toString(), "--run-all"));
 
         Files.writeString(project.resolve(PACKAGE.formatted("test") + "NineInTheEveningTest.java"), """
                 package dev.changeling.samples.greenhouse;
@@ -136,6 +151,15 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
         assertEquals(cold.results().tests().size(), unchanged.results().tests().size());
         assertTrue(afterDependency.err().contains("the reach map was made with another build of the tool, Java, classpath, test"
                 + " settings or operators: the whole suite runs"), afterDependency::transcript);
+    }
+
+    @Test
+    void aRunScopedToTheEdit_withTheMapOfTheTreeBefore_runsOnlyTheTestClassesReachingTheEditedFile_andGivesTheWholeSuitesVerdicts() {
+        assertTrue(scoped.err().contains("test classes run (new, changed, or reaching 1 changed file)"), scoped::transcript);
+        assertFalse(scoped.err().contains("reach map: 3 of 3") || scoped.err().contains("reach map: 0 of 3"), scoped::transcript);
+        assertFalse(scopedWholeSuite.err().contains("reach map:"), scopedWholeSuite::transcript);
+        assertTrue(scoped.results().mutants().size() > 0);
+        assertEquals(verdicts(scopedWholeSuite.results()), verdicts(scoped.results()));
     }
 
     @Test
