@@ -42,7 +42,7 @@ final class MutantsCommand extends ProjectCommand {
         Optional<ChangeScope> scope = change.spec().map(spec -> spec.resolve(layout.root()));
         Selection selection = ProjectSelection.of(mutants.input(), scope.isPresent(), layout);
         Selection.Chosen chosen = scope.map(changed -> selection.narrowedTo(changed.filter())).orElse(selection)
-                .choose(layout, project.limits(layout));
+                .choose(layout, project.limits(layout), scope.map(ChangeScope::files));
         PrintWriter out = out();
         PrintWriter err = err();
         for (ParseProblem problem : chosen.generated().problems()) {

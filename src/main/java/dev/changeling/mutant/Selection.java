@@ -11,6 +11,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 /**
  * The mutants a command works on: those of the project's main sources (or of the paths named), as
@@ -54,7 +55,15 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
     }
 
     public Chosen choose(ProjectLayout layout, List<Path> only) {
-        Generation.Generated generated = Generation.generate(read(layout, only), request);
+        return choose(layout, only, Optional.empty());
+    }
+
+    /**
+     * The mutants of the main sources (of the paths named), reading and parsing only the files {@code within} names
+     * (project-relative) when it is given: a change's files, whose lines alone can hold its points.
+     */
+    public Chosen choose(ProjectLayout layout, List<Path> only, Optional<Set<String>> within) {
+        Generation.Generated generated = Generation.generate(read(layout, only, within), request);
         List<Mutant> all = generated.mutants();
         if (mix != null) {
             List<Mutant> picked = mix.pick(all, sampleSeed);
@@ -83,9 +92,12 @@ public record Selection(MutantRequest request, Integer sampleSize, Double margin
         return Optional.ofNullable(mix).map(sample -> sample.describe(chosen.mutants(), chosen.generated().mutants()));
     }
 
-    private static List<SourceFile> read(ProjectLayout layout, List<Path> only) {
+    private static List<SourceFile> read(ProjectLayout layout, List<Path> only, Optional<Set<String>> within) {
         List<SourceFile> files = new ArrayList<>();
         for (Path path : layout.mainSources()) {
+            if (within.isPresent() && !within.get().contains(layout.root().relativize(path).toString().replace('\\', '/'))) {
+                continue;
+            }
             if (only.isEmpty() || only.stream().anyMatch(wanted -> path.startsWith(wanted.toAbsolutePath().normalize()))) {
                 try {
                     files.add(JavaSources.read(layout.root(), path));

@@ -291,7 +291,7 @@ public final class MutationRun {
 
     private Selection.Chosen generate(ProjectLayout layout, Optional<ChangeScope> change) {
         Selection selection = change.map(scope -> request.selection().narrowedTo(scope.filter())).orElse(request.selection());
-        Selection.Chosen chosen = selection.choose(layout, request.limits());
+        Selection.Chosen chosen = selection.choose(layout, request.limits(), change.map(ChangeScope::files));
         listener.phase("mutants: " + chosen.mutants().size()
                 + (chosen.sampled() ? " sampled from " + chosen.population() : "")
                 + " " + inFiles(chosen.mutants().stream().map(Mutant::file).toList())
