@@ -61,7 +61,11 @@ final class TinyProject {
                 public static long hog() {
                     if (Probe.on(4)) {
                         List<long[]> hoard = new ArrayList<>();
-                        while (true) { hoard.add(new long[1 << 20]); }
+                        while (true) {
+                            hoard.add(new long[1 << 20]);
+                            long until = System.nanoTime() + 20_000_000L;
+                            while (System.nanoTime() < until) { }
+                        }
                     }
                     return 0;
                 }

@@ -306,18 +306,22 @@ class WorkerPoolTest {
         }
 
         /**
-         * The hoarding loop passes no switch, so the stop sent at its 10 ms deadline cannot end it; the heap running out
-         * does, a failure of the test's own, which kills the mutant as it would under any longer deadline.
+         * The hoarding loop passes no switch, so the stop sent at its 100 ms deadline cannot end it; the heap running out
+         * (an array every 20 ms: after about a quarter of a second in the 96 MB heap) does, a failure of the test's own,
+         * which kills the mutant as it would under any longer deadline. A test of the same class runs first, and the
+         * deadline is long, so that starting the request on a busy machine cannot use up the deadline before the
+         * hoarding test passes its one switch (a stop that arrives before that stops the test, as it should).
          */
         @Test
         void aTestThatFailsByItselfPastItsDeadline_withNoSwitchThrowing_killsTheMutant() {
             try (WorkerPool pool = WorkerPool.open(settings("own-failure"), setup())) {
-                JobResult result = pool.run(List.of(MutantJob.schema("hogs", new int[] {4},
-                        List.of(method("HostileTest", "hogs")), 10)), done -> { }).get(0);
+                JobResult result = pool.run(List.of(
+                        MutantJob.schema("loads the class", new int[0], List.of(method("HostileTest", "measuresDepth")), 10_000),
+                        MutantJob.schema("hogs", new int[] {4}, List.of(method("HostileTest", "hogs")), 100)), done -> { }).get(1);
                 assertEquals(Outcome.KILLED, result.outcome(), result::toString);
                 assertTrue(result.message().startsWith("OutOfMemoryError"), result.message());
                 assertEquals(List.of(TestStatus.FAILED), result.testsRun().stream().map(TestRun::status).toList());
-                assertTrue(result.nanos() > 10_000_000L, "the heap ran out after the deadline: " + result.nanos() / 1_000_000 + " ms");
+                assertTrue(result.nanos() > 100_000_000L, "the heap ran out after the deadline: " + result.nanos() / 1_000_000 + " ms");
             }
         }
 
