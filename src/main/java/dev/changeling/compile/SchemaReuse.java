@@ -8,7 +8,6 @@ import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -19,7 +18,6 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.stream.Collectors;
-import java.util.stream.Stream;
 
 /**
  * The last schema build, kept beside its classes under the key of everything it was compiled from: the points, the
@@ -48,7 +46,7 @@ final class SchemaReuse {
         candidates.stream().map(Point::fingerprint).sorted().forEach(point -> text.append("point ").append(point).append('\n'));
         candidates.stream().map(Point::file).collect(Collectors.toCollection(TreeSet::new))
                 .forEach(file -> text.append("file ").append(file).append(' ').append(SourceHash.sha256(files.get(file).text())).append('\n'));
-        classpath.forEach(entry -> text.append("classpath ").append(entry).append(' ').append(contents(entry)).append('\n'));
+        classpath.forEach(entry -> text.append("classpath ").append(entry).append(' ').append(SourceHash.ofEntry(entry, path -> true)).append('\n'));
         return SourceHash.sha256(text.toString());
     }
 
@@ -60,7 +58,7 @@ final class SchemaReuse {
         }
         try {
             Kept kept = JSON.readValue(file.toFile(), Kept.class);
-            if (!key.equals(kept.key()) || !kept.classes().equals(contents(output.resolve(MutantBuild.SCHEMA)))) {
+            if (!key.equals(kept.key()) || !kept.classes().equals(SourceHash.ofEntry(output.resolve(MutantBuild.SCHEMA), path -> true))) {
                 return Optional.empty();
             }
             Map<String, Point> byFingerprint = new HashMap<>();
@@ -75,7 +73,7 @@ final class SchemaReuse {
 
     /** Keeps a fresh outcome for the next run; a failure to write only means the next run compiles again. */
     static void keep(Path output, String key, SchemaCompiler.Outcome outcome) {
-        Kept kept = new Kept(key, contents(output.resolve(MutantBuild.SCHEMA)), outcome.points().stream().map(Point::fingerprint).toList(),
+        Kept kept = new Kept(key, SourceHash.ofEntry(output.resolve(MutantBuild.SCHEMA), path -> true), outcome.points().stream().map(Point::fingerprint).toList(),
                 fingerprints(outcome.evicted()), fingerprints(outcome.stillborn()), List.copyOf(new TreeSet<>(outcome.classNames())),
                 outcome.watched().stream().map(Point::fingerprint).sorted().toList(), outcome.rounds());
         try {
@@ -95,27 +93,5 @@ final class SchemaReuse {
         Map<String, String> result = new LinkedHashMap<>();
         byPoint.forEach((point, text) -> result.put(point.fingerprint(), text));
         return result;
-    }
-
-    /** A digest of a classpath entry's content: a jar's bytes, or every file of a folder by path and bytes. */
-    private static String contents(Path entry) {
-        try {
-            if (Files.isRegularFile(entry)) {
-                return SourceHash.sha256(Files.readAllBytes(entry));
-            }
-            if (!Files.isDirectory(entry)) {
-                return "absent";
-            }
-            StringBuilder text = new StringBuilder();
-            try (Stream<Path> walk = Files.walk(entry)) {
-                for (Path file : walk.filter(Files::isRegularFile).sorted().toList()) {
-                    text.append(entry.relativize(file).toString().replace('\\', '/')).append(' ')
-                            .append(SourceHash.sha256(Files.readAllBytes(file))).append('\n');
-                }
-            }
-            return SourceHash.sha256(text.toString());
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
     }
 }

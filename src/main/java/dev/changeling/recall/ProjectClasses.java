@@ -2,9 +2,6 @@ package dev.changeling.recall;
 
 import dev.changeling.ToolBuild;
 import dev.changeling.source.SourceHash;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -12,7 +9,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
-import java.util.stream.Stream;
 
 /**
  * A project's compiled classes and what surrounds them, read once per run: what the verdict keys and the reach map
@@ -49,11 +45,12 @@ public final class ProjectClasses {
                 .append("java ").append(System.getProperty("java.vendor")).append(' ').append(System.getProperty("java.version")).append('\n');
         for (Path entry : classpath) {
             if (!outputs.contains(entry)) {
-                text.append("classpath ").append(entry).append('\n');
-                contents(entry, false, text);
+                text.append("classpath ").append(entry).append(' ').append(SourceHash.ofEntry(entry, file -> true)).append('\n');
             }
         }
-        outputs.forEach(folder -> contents(folder, true, text));
+        // of the output folders only the resources: their classes count through the graphs
+        outputs.forEach(folder -> text.append("resources ").append(folder).append(' ')
+                .append(SourceHash.ofEntry(folder, file -> !file.endsWith(".class"))).append('\n'));
         return new ProjectClasses(ClassGraph.read(List.of(classes)), ClassGraph.readTests(testRoots), SourceHash.sha256(text.toString()));
     }
 
@@ -109,28 +106,5 @@ public final class ProjectClasses {
         String name = binaryName.replace('.', '/');
         int nested = name.indexOf('$', name.lastIndexOf('/') + 1);
         return nested < 0 ? name : name.substring(0, nested);
-    }
-
-    /**
-     * Appends every file of a classpath entry by its digest (a jar: the jar's): of an output folder only the files that
-     * are not classes, since the classes count through the graphs.
-     */
-    private static void contents(Path entry, boolean resourcesOnly, StringBuilder text) {
-        try {
-            if (Files.isRegularFile(entry)) {
-                text.append(ClassGraph.digest(Files.readAllBytes(entry))).append('\n');
-            } else if (Files.isDirectory(entry)) {
-                try (Stream<Path> files = Files.walk(entry)) {
-                    for (Path file : files.filter(Files::isRegularFile).sorted().toList()) {
-                        String name = entry.relativize(file).toString().replace('\\', '/');
-                        if (!resourcesOnly || !name.endsWith(".class")) {
-                            text.append(name).append(' ').append(ClassGraph.digest(Files.readAllBytes(file))).append('\n');
-                        }
-                    }
-                }
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
     }
 }

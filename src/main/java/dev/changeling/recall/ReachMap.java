@@ -119,13 +119,10 @@ public final class ReachMap {
                 IntStream.of(mapped.points()).forEach(changedPoints::add);
             }
         }
-        Map<String, Integer> mapNumbers = new HashMap<>();
-        for (int number = 0; number < map.points().size(); number++) {
-            mapNumbers.put(map.points().get(number), number);
-        }
+        Set<String> mapPoints = new HashSet<>(map.points());
         for (Point point : points) {
             String source = main.sourceOf(point.file());
-            if (source != null && !changedFiles.contains(source) && !mapNumbers.containsKey(point.fingerprint())) {
+            if (source != null && !changedFiles.contains(source) && !mapPoints.contains(point.fingerprint())) {
                 return whole("the reach map does not hold every point of " + source + " (made by a narrower run?)");
             }
         }
