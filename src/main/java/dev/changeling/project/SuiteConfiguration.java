@@ -2,8 +2,10 @@ package dev.changeling.project;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import java.util.Optional;
 
 /**
@@ -34,12 +36,20 @@ public record SuiteConfiguration(List<String> testClasses, String origin, int ex
         testClasses = List.copyOf(testClasses);
         includedTags = List.copyOf(includedTags);
         excludedTags = List.copyOf(excludedTags);
-        systemProperties = Map.copyOf(systemProperties);
-        environment = Map.copyOf(environment);
-        configurationParameters = Map.copyOf(configurationParameters);
+        systemProperties = sorted(systemProperties);
+        environment = sorted(environment);
+        configurationParameters = sorted(configurationParameters);
         jvmArguments = List.copyOf(jvmArguments);
         workingDirectory = workingDirectory.toAbsolutePath().normalize();
         notices = List.copyOf(notices);
+    }
+
+    /**
+     * An unmodifiable copy in the order of its keys: the same settings always read, and print, the same way (an
+     * unordered copy's order changes from one JVM to the next, and so would anything keyed by its text).
+     */
+    private static Map<String, String> sorted(Map<String, String> map) {
+        return Collections.unmodifiableMap(new TreeMap<>(map));
     }
 
     /** What was taken from the build, in one line: {@code 47 classes as the pom's Surefire settings select them; 2 excluded by the pom; tags: !slow}. */
