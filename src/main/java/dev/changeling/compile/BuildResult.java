@@ -1,5 +1,6 @@
 package dev.changeling.compile;
 
+import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
 import java.nio.file.Path;
@@ -18,12 +19,14 @@ import java.util.Set;
  * @param schemaClassNames the binary names of every class compiled into it, sorted
  * @param timings          where the time went
  * @param watched          the schema's points whose infection the baseline records ({@link InfectionWatch})
+ * @param entries          the schema's methods whose entry it notes; a method's id is its index
  */
 public record BuildResult(List<Point> points, Map<String, Placement> placements, Path schemaClasses,
-                          List<String> schemaClassNames, BuildTimings timings, Set<Point> watched) {
+                          List<String> schemaClassNames, BuildTimings timings, Set<Point> watched, List<EntryMethod> entries) {
 
     public BuildResult {
         points = List.copyOf(points);
+        entries = List.copyOf(entries);
         placements = Map.copyOf(placements);
         schemaClassNames = List.copyOf(schemaClassNames);
         watched = Set.copyOf(watched);

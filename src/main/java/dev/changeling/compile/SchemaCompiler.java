@@ -3,6 +3,8 @@ package dev.changeling.compile;
 import com.sun.source.tree.CompilationUnitTree;
 import com.sun.source.util.SourcePositions;
 import dev.changeling.UserError;
+import dev.changeling.mutant.EntryMethods;
+import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
 import java.io.IOException;
@@ -19,6 +21,7 @@ import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.NavigableMap;
 import java.util.Set;
 import java.util.TreeMap;
 import java.util.stream.Collectors;
@@ -27,7 +30,8 @@ import javax.tools.JavaFileObject;
 
 /**
  * Compiles the schema in rounds: render every file with points, compile them all in one javac task,
- * move the points javac objects to (or whose branches would change type) out, and repeat until clean.
+ * move the points javac objects to (or whose branches would change type) out, and repeat until clean. The methods
+ * whose entry is noted are numbered across the files in path order, in each file in the order of its text.
  */
 final class SchemaCompiler {
 
@@ -48,9 +52,11 @@ final class SchemaCompiler {
      * @param stillborn  of those, the points whose mutants are certain not to compile, with the error
      * @param classNames the binary names of the classes written
      * @param watched    the schema's points whose infection the baseline records ({@link InfectionWatch})
+     * @param entries    the methods whose entry the schema notes, in id order
      */
     record Outcome(List<Point> points, Map<Point, String> evicted, Map<Point, String> stillborn,
-                   Set<String> classNames, long renderNanos, long compileNanos, int rounds, Set<Point> watched) {
+                   Set<String> classNames, long renderNanos, long compileNanos, int rounds, Set<Point> watched,
+                   List<EntryMethod> entries) {
     }
 
     private final Javac javac;
@@ -61,6 +67,8 @@ final class SchemaCompiler {
     private final Set<String> wholeFiles = new HashSet<>();
     private final Set<String> checkedOriginals = new HashSet<>();
     private final Map<Point, String> stillborn = new LinkedHashMap<>();
+    /** Each file's methods whose entry is noted: the same in every round, so found once. */
+    private final Map<String, List<EntryMethod>> entryMethods = new HashMap<>();
     /** Whether each point rendered so far is watched: the same in every round, so worked out once. */
     private final Map<Point, Boolean> watchable = new HashMap<>();
     private long renderNanos;
@@ -90,7 +98,7 @@ final class SchemaCompiler {
                 continue;
             }
             if (ordered.isEmpty()) {
-                return new Outcome(List.of(), evicted, stillborn, Set.of(), renderNanos, compileNanos, round - 1, Set.of());
+                return new Outcome(List.of(), evicted, stillborn, Set.of(), renderNanos, compileNanos, round - 1, Set.of(), List.of());
             }
             long started = System.nanoTime();
             Javac.Task task = javac.task(rendered.values().stream()
@@ -102,7 +110,8 @@ final class SchemaCompiler {
                 compileNanos += System.nanoTime() - started;
                 writeSources(rendered.values());
                 return new Outcome(ordered, evicted, stillborn, written, renderNanos, compileNanos, round,
-                        ordered.stream().filter(this::watched).collect(Collectors.toUnmodifiableSet()));
+                        ordered.stream().filter(this::watched).collect(Collectors.toUnmodifiableSet()),
+                        rendered.keySet().stream().flatMap(path -> entryMethods.get(path).stream()).toList());
             }
             compileNanos += System.nanoTime() - started;
             if (round >= ROUNDS_BEFORE_WHOLE_FILES || leaving.isEmpty()) {
@@ -122,7 +131,15 @@ final class SchemaCompiler {
         Map<String, List<Point>> byFile = new TreeMap<>();
         ordered.forEach(point -> byFile.computeIfAbsent(point.file(), path -> new ArrayList<>()).add(point));
         Map<String, RenderedFile> rendered = new LinkedHashMap<>();
-        byFile.forEach((path, points) -> rendered.put(path, SchemaRenderer.render(files.get(path), points, ids, this::watched)));
+        int entries = 0;
+        for (Map.Entry<String, List<Point>> file : byFile.entrySet()) {
+            SourceFile source = files.get(file.getKey());
+            NavigableMap<Integer, Integer> notes = new TreeMap<>();
+            for (EntryMethod method : entryMethods.computeIfAbsent(file.getKey(), path -> EntryMethods.of(source))) {
+                notes.put(method.noteAt(), entries++);
+            }
+            rendered.put(file.getKey(), SchemaRenderer.render(source, file.getValue(), ids, this::watched, notes));
+        }
         renderNanos += System.nanoTime() - started;
         return rendered;
     }

@@ -14,11 +14,14 @@ import java.util.Deque;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.NavigableMap;
+import java.util.TreeMap;
 import java.util.function.Predicate;
 
 /**
- * Rewrites one file's original text into its schema: every host becomes a switch over its points
- * and every other character stays as it was, so line numbers and comments survive.
+ * Rewrites one file's original text into its schema: every host becomes a switch over its points, the methods whose
+ * entry is noted ({@link dev.changeling.mutant.EntryMethods}) begin with {@code Probe.enter(id);} on the line of their
+ * opening brace, and every other character stays as it was, so line numbers and comments survive.
  */
 final class SchemaRenderer {
 
@@ -33,13 +36,15 @@ final class SchemaRenderer {
     private final String original;
     private final Map<Point, Integer> ids;
     private final Predicate<Point> watched;
+    private final NavigableMap<Integer, Integer> notes;
     private final StringBuilder out;
     private final List<HostRegion> regions = new ArrayList<>();
 
-    private SchemaRenderer(String original, Map<Point, Integer> ids, Predicate<Point> watched) {
+    private SchemaRenderer(String original, Map<Point, Integer> ids, Predicate<Point> watched, NavigableMap<Integer, Integer> notes) {
         this.original = original;
         this.ids = ids;
         this.watched = watched;
+        this.notes = notes;
         this.out = new StringBuilder(original.length() + original.length() / 4);
     }
 
@@ -48,9 +53,15 @@ final class SchemaRenderer {
      * {@link InfectionWatch}) also compare their mutated value with the original's while the baseline records.
      */
     static RenderedFile render(SourceFile file, Collection<Point> points, Map<Point, Integer> ids, Predicate<Point> watched) {
+        return render(file, points, ids, watched, new TreeMap<>());
+    }
+
+    /** The same, with a note of entry at each offset of {@code notes} (just inside a method's opening brace), under its id. */
+    static RenderedFile render(SourceFile file, Collection<Point> points, Map<Point, Integer> ids, Predicate<Point> watched,
+                               NavigableMap<Integer, Integer> notes) {
         Map<Point, String> rejected = new LinkedHashMap<>();
         List<Host> roots = nest(wholeStatements(file, hosts(points, ids), rejected), rejected);
-        SchemaRenderer renderer = new SchemaRenderer(file.text(), ids, watched);
+        SchemaRenderer renderer = new SchemaRenderer(file.text(), ids, watched, new TreeMap<>(notes));
         renderer.emitRange(0, file.text().length(), roots);
         return new RenderedFile(file, renderer.out.toString(), List.copyOf(renderer.regions), Map.copyOf(rejected));
     }
@@ -107,11 +118,26 @@ final class SchemaRenderer {
     private void emitRange(int from, int to, List<Host> hosts) {
         int cursor = from;
         for (Host host : hosts) {
-            out.append(original, cursor, host.span().begin());
+            copy(cursor, host.span().begin());
             emitHost(host);
             cursor = host.span().end();
         }
-        out.append(original, cursor, to);
+        copy(cursor, to);
+    }
+
+    /**
+     * The original text from {@code from} to {@code to}, with the notes of entry that fall there, one at the end
+     * included: a method's first statement can be a host, and its note must come before it.
+     */
+    private void copy(int from, int to) {
+        int at = from;
+        NavigableMap<Integer, Integer> here = notes.subMap(from, true, to, true);
+        for (Map.Entry<Integer, Integer> note : List.copyOf(here.entrySet())) {
+            out.append(original, at, note.getKey()).append(PROBE).append(".enter(").append(note.getValue()).append("); ");
+            at = note.getKey();
+            notes.remove(note.getKey());
+        }
+        out.append(original, at, to);
     }
 
     private void emitHost(Host host) {

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.changeling.AtomicFiles;
 import dev.changeling.ToolBuild;
+import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
@@ -20,8 +21,8 @@ import java.util.TreeSet;
 import java.util.stream.Collectors;
 
 /**
- * The last schema build, kept beside its classes under the key of everything it was compiled from: the points, the
- * text of their files, the classpath by content, this tool's build and the Java runtime. A run whose key is the same
+ * The last schema build, kept beside its classes (with the methods whose entry it notes) under the key of everything it
+ * was compiled from: the points, the text of their files, the classpath by content, this tool's build and the Java runtime. A run whose key is the same
  * takes the classes and the rounds' outcome as they are, provided the classes are still the ones written (their digest
  * is kept too); anything else compiles again.
  */
@@ -33,7 +34,7 @@ final class SchemaReuse {
 
     /** The outcome as kept, points by fingerprint. */
     record Kept(String key, String classes, List<String> points, Map<String, String> evicted, Map<String, String> stillborn,
-                List<String> classNames, List<String> watched, int rounds) {
+                List<String> classNames, List<String> watched, int rounds, List<EntryMethod> entries) {
     }
 
     private SchemaReuse() {
@@ -65,7 +66,8 @@ final class SchemaReuse {
             candidates.forEach(point -> byFingerprint.put(point.fingerprint(), point));
             return Optional.of(new SchemaCompiler.Outcome(kept.points().stream().map(byFingerprint::get).toList(),
                     points(kept.evicted(), byFingerprint), points(kept.stillborn(), byFingerprint), Set.copyOf(kept.classNames()),
-                    0, 0, 0, kept.watched().stream().map(byFingerprint::get).collect(Collectors.toUnmodifiableSet())));
+                    0, 0, 0, kept.watched().stream().map(byFingerprint::get).collect(Collectors.toUnmodifiableSet()),
+                    List.copyOf(kept.entries())));
         } catch (IOException | RuntimeException e) {
             return Optional.empty();
         }
@@ -75,7 +77,7 @@ final class SchemaReuse {
     static void keep(Path output, String key, SchemaCompiler.Outcome outcome) {
         Kept kept = new Kept(key, SourceHash.ofEntry(output.resolve(MutantBuild.SCHEMA), path -> true), outcome.points().stream().map(Point::fingerprint).toList(),
                 fingerprints(outcome.evicted()), fingerprints(outcome.stillborn()), List.copyOf(new TreeSet<>(outcome.classNames())),
-                outcome.watched().stream().map(Point::fingerprint).sorted().toList(), outcome.rounds());
+                outcome.watched().stream().map(Point::fingerprint).sorted().toList(), outcome.rounds(), outcome.entries());
         try {
             AtomicFiles.write(output.resolve(FILE_NAME), out -> JSON.writeValue(out, kept));
         } catch (IOException | RuntimeException e) {

@@ -35,6 +35,11 @@ public final class SchemaStage {
         return schema.points().size();
     }
 
+    /** How many methods the schema notes the entry of: what {@code Probe.prepare} is given beside the points. */
+    public int methodCount() {
+        return schema.entries().size();
+    }
+
     /** The schema's points; a point's id is its index. */
     public List<Point> points() {
         return schema.points();
@@ -61,7 +66,7 @@ public final class SchemaStage {
         BuildTimings timings = new BuildTimings(millis(schema.renderNanos()), millis(schema.compileNanos()),
                 millis(System.nanoTime() - started), schema.rounds(), pending.size(), tasks);
         return new BuildResult(schema.points(), all, schemaClasses(), new ArrayList<>(schema.classNames()), timings,
-                schema.watched());
+                schema.watched(), schema.entries());
     }
 
     private static long millis(long nanos) {

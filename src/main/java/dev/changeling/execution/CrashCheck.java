@@ -19,11 +19,11 @@ final class CrashCheck {
         long nanos = crash.nanos() + again.nanos();
         if (again.outcome() == Outcome.CRASHED) {
             return new JobResult(again.key(), Outcome.CRASHED, again.testId(), again.message() + "; again in a fresh worker",
-                    again.testsRun(), nanos);
+                    again.testsRun(), nanos, again.entered());
         }
         String note = "the first worker died" + (death == null ? "" : " (" + death + ")")
                 + " and the mutant ran again in a fresh one";
         return new JobResult(again.key(), again.outcome(), again.testId(),
-                again.message() == null ? note : again.message() + "; " + note, again.testsRun(), nanos);
+                again.message() == null ? note : again.message() + "; " + note, again.testsRun(), nanos, again.entered());
     }
 }

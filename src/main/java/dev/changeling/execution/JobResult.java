@@ -1,6 +1,7 @@
 package dev.changeling.execution;
 
 import java.util.ArrayList;
+import java.util.BitSet;
 import java.util.List;
 
 /**
@@ -15,11 +16,29 @@ import java.util.List;
  * @param testsRun the tests that finished, in the order they ran (the one running at a timeout or
  *                 crash is not among them)
  * @param nanos    wall time from sending the job to its answer
+ * @param entered  the schema methods the mutant's run entered (with those its worker entered while initialising the
+ *                 production classes), by id; null when the worker did not say, because it was ended or died
  */
-public record JobResult(String key, Outcome outcome, String testId, String message, List<TestRun> testsRun, long nanos) {
+public record JobResult(String key, Outcome outcome, String testId, String message, List<TestRun> testsRun, long nanos,
+                        BitSet entered) {
 
     public JobResult {
         testsRun = List.copyOf(testsRun);
+        entered = entered == null ? null : (BitSet) entered.clone();
+    }
+
+    /** A result whose worker did not say which methods it entered. */
+    public JobResult(String key, Outcome outcome, String testId, String message, List<TestRun> testsRun, long nanos) {
+        this(key, outcome, testId, message, testsRun, nanos, null);
+    }
+
+    /** The methods a run entered, as the worker lists them. */
+    static BitSet entered(int[] ids) {
+        BitSet methods = new BitSet();
+        for (int id : ids) {
+            methods.set(id);
+        }
+        return methods;
     }
 
     /**
@@ -40,23 +59,28 @@ public record JobResult(String key, Outcome outcome, String testId, String messa
                 .filter(test -> test.status() == TestStatus.FAILED)
                 .findFirst()
                 .map(first -> new JobResult(key, Outcome.KILLED, first.testId(), first.message()
-                        + "; a later test then ended the run: " + message, testsRun, nanos))
+                        + "; a later test then ended the run: " + message, testsRun, nanos, entered))
                 .orElse(this);
     }
 
     /**
      * This result, of a job stopped in place, followed by {@code more}, of its tests after the stopped one: killed when
-     * one of those failed, else still timed out as it was; the tests and the time of both.
+     * one of those failed, else still timed out as it was; the tests, the time and the entered methods of both.
      */
     JobResult resumedWith(JobResult more) {
         List<TestRun> all = new ArrayList<>(testsRun);
         all.addAll(more.testsRun);
         long total = nanos + more.nanos;
+        BitSet both = null;
+        if (entered != null && more.entered != null) {
+            both = (BitSet) entered.clone();
+            both.or(more.entered);
+        }
         if (more.outcome == Outcome.KILLED) {
             return new JobResult(key, Outcome.KILLED, more.testId, more.message + " (an earlier test, stopped at its deadline, "
-                    + "did not decide: " + message + ")", all, total);
+                    + "did not decide: " + message + ")", all, total, both);
         }
-        return new JobResult(key, outcome, testId, message, all, total);
+        return new JobResult(key, outcome, testId, message, all, total, both);
     }
 
     /** Every test stopped in place at its step's deadline, in the order they ran. */

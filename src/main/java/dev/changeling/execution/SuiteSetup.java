@@ -8,6 +8,7 @@ import java.util.Map;
  * production classes to initialise first, and which tests make up the suite.
  *
  * @param pointCount              mutation points in the schema classes (ids 0 to pointCount - 1)
+ * @param methodCount             methods of the schema whose entry is noted (ids 0 to methodCount - 1)
  * @param preinitialise           production classes to initialise once with no mutant on, so their static state
  *                                is the original's; a class that fails to initialise is reported, not fatal
  * @param testClasses             binary names of the test classes whose tests make up the suite, as the build selects them
@@ -18,7 +19,7 @@ import java.util.Map;
  * @param freshJvmPerClass        whether the build runs every test class in a fresh JVM, which the baseline then
  *                                honours for the classes that fail in a shared worker
  */
-public record SuiteSetup(int pointCount, List<String> preinitialise, List<String> testClasses,
+public record SuiteSetup(int pointCount, int methodCount, List<String> preinitialise, List<String> testClasses,
                          List<String> includedTags, List<String> excludedTags, Map<String, String> configurationParameters,
                          boolean freshJvmPerClass) {
 
@@ -35,22 +36,26 @@ public record SuiteSetup(int pointCount, List<String> preinitialise, List<String
 
     /** These test classes, every tag, nothing pre-initialised. */
     public static SuiteSetup of(int pointCount, List<String> testClasses) {
-        return new SuiteSetup(pointCount, List.of(), testClasses, List.of(), List.of(), Map.of(), false);
+        return new SuiteSetup(pointCount, 0, List.of(), testClasses, List.of(), List.of(), Map.of(), false);
+    }
+
+    public SuiteSetup withMethodCount(int methods) {
+        return new SuiteSetup(pointCount, methods, preinitialise, testClasses, includedTags, excludedTags, configurationParameters, freshJvmPerClass);
     }
 
     public SuiteSetup withPreinitialise(List<String> classNames) {
-        return new SuiteSetup(pointCount, classNames, testClasses, includedTags, excludedTags, configurationParameters, freshJvmPerClass);
+        return new SuiteSetup(pointCount, methodCount, classNames, testClasses, includedTags, excludedTags, configurationParameters, freshJvmPerClass);
     }
 
     public SuiteSetup withTags(List<String> included, List<String> excluded) {
-        return new SuiteSetup(pointCount, preinitialise, testClasses, included, excluded, configurationParameters, freshJvmPerClass);
+        return new SuiteSetup(pointCount, methodCount, preinitialise, testClasses, included, excluded, configurationParameters, freshJvmPerClass);
     }
 
     public SuiteSetup withFreshJvmPerClass(boolean fresh) {
-        return new SuiteSetup(pointCount, preinitialise, testClasses, includedTags, excludedTags, configurationParameters, fresh);
+        return new SuiteSetup(pointCount, methodCount, preinitialise, testClasses, includedTags, excludedTags, configurationParameters, fresh);
     }
 
     public SuiteSetup withConfigurationParameters(Map<String, String> parameters) {
-        return new SuiteSetup(pointCount, preinitialise, testClasses, includedTags, excludedTags, parameters, freshJvmPerClass);
+        return new SuiteSetup(pointCount, methodCount, preinitialise, testClasses, includedTags, excludedTags, parameters, freshJvmPerClass);
     }
 }

@@ -19,6 +19,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.BitSet;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -190,6 +191,7 @@ final class WorkerProcess {
         try {
             out.writeByte(Wire.PREPARE);
             out.writeInt(setup.pointCount());
+            out.writeInt(setup.methodCount());
             Wire.writeStrings(out, setup.preinitialise());
             Wire.writeStrings(out, setup.includedTags());
             Wire.writeStrings(out, setup.excludedTags());
@@ -259,6 +261,7 @@ final class WorkerProcess {
         long mark = logSize();
         boolean stopSent = false;
         List<TestRun> runs = new ArrayList<>();
+        BitSet entered;
         try {
             out.writeByte(Wire.RUN);
             Wire.writeInts(out, job.points());
@@ -287,6 +290,7 @@ final class WorkerProcess {
                 }
                 if (code != Wire.TEST_DONE) {
                     expect(Wire.RUN_DONE, code);
+                    entered = JobResult.entered(Wire.readInts(in));
                     break;
                 }
                 String id = Wire.readString(in);
@@ -308,15 +312,15 @@ final class WorkerProcess {
         for (TestRun test : runs) {
             if (test.status() == TestStatus.STOPPED) {
                 return new JobResult(job.key(), Outcome.TIMED_OUT, test.testId(),
-                        "no answer within " + allowed + " ms; stopped in place", runs, nanos).decidedByAnEarlierFailure();
+                        "no answer within " + allowed + " ms; stopped in place", runs, nanos, entered).decidedByAnEarlierFailure();
             }
         }
         for (TestRun test : runs) {
             if (test.status() == TestStatus.FAILED) {
-                return new JobResult(job.key(), Outcome.KILLED, test.testId(), test.message(), runs, nanos);
+                return new JobResult(job.key(), Outcome.KILLED, test.testId(), test.message(), runs, nanos, entered);
             }
         }
-        return new JobResult(job.key(), Outcome.SURVIVED, null, null, runs, nanos);
+        return new JobResult(job.key(), Outcome.SURVIVED, null, null, runs, nanos, entered);
     }
 
     /** Whether the JVM still runs: after a step was stopped in place, say, where a timeout used to mean a kill. */

@@ -2,8 +2,9 @@ package dev.changeling.probe;
 
 /**
  * The switch that schema-rewritten code calls: {@code Probe.on(17)} is true while mutation point 17
- * is switched on, and records that point 17 was reached. JDK only, and tiny, because it sits on the
- * hot path of every mutated expression.
+ * is switched on, and records that point 17 was reached; {@code Probe.enter(4)}, the first statement of method 4 of
+ * the schema, notes that the method ran. JDK only, and tiny, because it sits on the hot path of every mutated
+ * expression and every call of a schema method.
  */
 public final class Probe {
 
@@ -12,6 +13,9 @@ public final class Probe {
     private static int[] reached = new int[16];
     private static int reachedCount;
     private static boolean recording;
+    private static boolean[] entered = new boolean[0];
+    private static int[] enteredList = new int[16];
+    private static int enteredCount;
     private static final Object LOCK = new Object();
     /** The step of tests the worker is running; it counts up, so a stop meant for an earlier step matches nothing. */
     private static volatile int step;
@@ -39,13 +43,50 @@ public final class Probe {
         return id < now.length && now[id];
     }
 
-    /** Sizes the tables for {@code points} mutation points and switches everything off. */
-    public static void prepare(int points) {
+    /**
+     * Notes that method {@code id} of the schema was entered, whether or not reach is recorded: what ran under a mutant
+     * is what its verdict depends on.
+     */
+    public static void enter(int id) {
+        boolean[] now = entered;
+        if (id < now.length && !now[id]) {
+            note(id);
+        }
+    }
+
+    /** Sizes the tables for {@code points} mutation points and {@code methods} noted methods, and switches everything off. */
+    public static void prepare(int points, int methods) {
         synchronized (LOCK) {
             active = new boolean[points];
             // a point's infection is recorded as the reach of id points + point
             seen = new boolean[2 * points];
             reachedCount = 0;
+            entered = new boolean[methods];
+            enteredCount = 0;
+        }
+    }
+
+    /** The methods entered since the last drain, each once, and forgets them. */
+    public static int[] drainEntered() {
+        synchronized (LOCK) {
+            int[] out = java.util.Arrays.copyOf(enteredList, enteredCount);
+            for (int id : out) {
+                entered[id] = false;
+            }
+            enteredCount = 0;
+            return out;
+        }
+    }
+
+    private static void note(int id) {
+        synchronized (LOCK) {
+            if (id < entered.length && !entered[id]) {
+                entered[id] = true;
+                if (enteredCount == enteredList.length) {
+                    enteredList = java.util.Arrays.copyOf(enteredList, enteredCount * 2);
+                }
+                enteredList[enteredCount++] = id;
+            }
         }
     }
 

@@ -13,7 +13,9 @@ import dev.changeling.source.SourceFile;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Collection;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -32,23 +34,27 @@ import java.util.function.Predicate;
  *   reaches it, or a changed one, runs it again);</li>
  *   <li>a killed or timed-out mutant: the test that failed or was stopped, which must still be one that would run;</li>
  *   <li>with every test run (the kill matrix): every test, as for a survivor;</li>
- *   <li>a crashed mutant is never kept: a crash can come from outside.</li>
+ *   <li>a crashed mutant is never kept: a crash can come from outside; nor is one whose worker was ended at a deadline
+ *   before it could say which methods the run entered.</li>
  * </ul>
  * A file that cannot be read, of another format or of another program, is set aside with a notice and the run goes on
  * without it; the file is replaced whole (written beside, then renamed), so two runs at once leave one of them.
  */
 public final class Recall {
 
-    public static final int FORMAT = 1;
+    public static final int FORMAT = 2;
     public static final String FILE_NAME = "recall.json";
 
     private static final ObjectMapper JSON = new ObjectMapper()
             .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
             .disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
 
-    /** A verdict as kept: the key, the tests that decided it, and what the results file records for it. */
-    record KeptVerdict(String key, String file, Verdict verdict, List<String> decidedBy, String killedBy, String detail,
-                       List<String> testsRun, double millis, List<String> killers) {
+    /**
+     * A verdict as kept: the key, the tests that decided it, the methods its run entered (by their place in the file's
+     * list of methods), and what the results file records for it.
+     */
+    record KeptVerdict(String key, String file, Verdict verdict, List<String> decidedBy, List<Integer> entered, String killedBy,
+                       String detail, List<String> testsRun, double millis, List<String> killers) {
     }
 
     /**
@@ -58,49 +64,59 @@ public final class Recall {
     public record KeptComparison(String key, String file, String match, String shape) {
     }
 
-    /** The file's layout. */
-    record Contents(int format, Map<String, KeptVerdict> verdicts, Map<String, KeptComparison> comparisons) {
+    /** The file's layout: every method a kept verdict's run entered is named once, in {@code methods}. */
+    record Contents(int format, List<String> methods, Map<String, KeptVerdict> verdicts, Map<String, KeptComparison> comparisons) {
     }
 
     private final Path file;
+    private final List<String> methods;
+    private final Map<String, Integer> methodIds = new HashMap<>();
     private final Map<String, KeptVerdict> verdicts;
     private final Map<String, KeptComparison> comparisons;
     private final boolean giving;
 
-    private Recall(Path file, Map<String, KeptVerdict> verdicts, Map<String, KeptComparison> comparisons) {
-        this(file, verdicts, comparisons, true);
+    private Recall(Path file, Contents contents) {
+        this(file, contents.methods(), contents.verdicts(), contents.comparisons(), true);
     }
 
-    private Recall(Path file, Map<String, KeptVerdict> verdicts, Map<String, KeptComparison> comparisons, boolean giving) {
+    private Recall(Path file, List<String> methods, Map<String, KeptVerdict> verdicts, Map<String, KeptComparison> comparisons,
+                   boolean giving) {
         this.giving = giving;
         this.file = file;
+        this.methods = new ArrayList<>(methods);
+        this.methods.forEach(name -> methodIds.putIfAbsent(name, methodIds.size()));
         this.verdicts = new ConcurrentHashMap<>(verdicts);
         this.comparisons = new ConcurrentHashMap<>(comparisons);
+    }
+
+    private static Recall empty(Path file) {
+        return new Recall(file, new Contents(FORMAT, List.of(), Map.of(), Map.of()));
     }
 
     /** What the file keeps; nothing when there is no file, or, after a one-line notice, when it cannot be trusted. */
     public static Recall open(Path file, Consumer<String> notice) {
         if (!Files.isRegularFile(file)) {
-            return new Recall(file, Map.of(), Map.of());
+            return empty(file);
         }
         try {
             Contents contents = JSON.readValue(file.toFile(), Contents.class);
-            if (contents.format() != FORMAT || contents.verdicts() == null || contents.comparisons() == null) {
+            if (contents.format() != FORMAT || contents.methods() == null || contents.verdicts() == null
+                    || contents.comparisons() == null) {
                 notice.accept(file + ": not a file of this version (format " + contents.format() + ", not " + FORMAT
                         + "); set aside, every mutant runs and it is written again");
-                return new Recall(file, Map.of(), Map.of());
+                return empty(file);
             }
-            return new Recall(file, contents.verdicts(), contents.comparisons());
+            return new Recall(file, contents);
         } catch (IOException | RuntimeException e) {
             notice.accept(file + ": cannot read it (" + Text.firstLine(String.valueOf(e.getMessage()))
                     + "); set aside, every mutant runs and it is written again");
-            return new Recall(file, Map.of(), Map.of());
+            return empty(file);
         }
     }
 
     /** The same file, giving nothing back: every mutant runs and is compared, and what is found is kept as usual. */
     public Recall withoutGiving() {
-        return new Recall(file, verdicts, comparisons, false);
+        return new Recall(file, methods, verdicts, comparisons, false);
     }
 
     /**
@@ -116,7 +132,8 @@ public final class Recall {
             return Optional.empty();
         }
         Collection<String> decidedBy = decidingAll(kept.verdict(), everyTest) ? tests : kept.decidedBy();
-        if (!Set.copyOf(tests).containsAll(decidedBy) || !kept.key().equals(keys.forVerdict(mutant, file.text(), decidedBy))) {
+        if (!Set.copyOf(tests).containsAll(decidedBy)
+                || !kept.key().equals(keys.forVerdict(mutant, file.text(), decidedBy, namesOf(kept.entered())))) {
             return Optional.empty();
         }
         MutantResult base = Records.of(mutant, file, kept.verdict(), kept.detail());
@@ -127,19 +144,33 @@ public final class Recall {
     }
 
     /**
-     * Keeps a verdict the tests just gave, under the key of the tests that decided it: for a survivor, or with every test
-     * run, the tests it ran (a survivor runs every test it is given).
+     * Keeps a verdict the tests just gave, under the key of the tests that decided it (for a survivor, or with every test
+     * run, the tests it ran: a survivor runs every test it is given) and of the methods its run entered.
+     *
+     * @param entered the names of the schema's methods the run entered; null when the worker did not say (it was
+     *                ended at a deadline), and then the verdict is not kept
      */
-    public void keep(Mutant mutant, SourceFile file, MutantResult result, boolean everyTest, VerdictKeys keys) {
+    public void keep(Mutant mutant, SourceFile file, MutantResult result, List<String> entered, boolean everyTest, VerdictKeys keys) {
         boolean all = decidingAll(result.verdict(), everyTest);
-        if (result.verdict() == Verdict.CRASHED || !all && result.killedBy() == null) {
+        if (result.verdict() == Verdict.CRASHED || entered == null || !all && result.killedBy() == null) {
             verdicts.remove(mutant.fingerprint());
             return;
         }
         List<String> decidedBy = all ? result.testsRun() : List.of(result.killedBy());
-        verdicts.put(mutant.fingerprint(), new KeptVerdict(keys.forVerdict(mutant, file.text(), decidedBy), mutant.file(),
-                result.verdict(), all ? List.of() : decidedBy, result.killedBy(),
+        verdicts.put(mutant.fingerprint(), new KeptVerdict(keys.forVerdict(mutant, file.text(), decidedBy, entered), mutant.file(),
+                result.verdict(), all ? List.of() : decidedBy, idsOf(entered), result.killedBy(),
                 result.detail(), result.testsRun(), result.millis(), result.killers()));
+    }
+
+    private synchronized List<Integer> idsOf(List<String> names) {
+        return names.stream().map(name -> methodIds.computeIfAbsent(name, unknown -> {
+            methods.add(name);
+            return methods.size() - 1;
+        })).toList();
+    }
+
+    private synchronized List<String> namesOf(List<Integer> ids) {
+        return ids.stream().map(id -> id >= 0 && id < methods.size() ? methods.get(id) : "unknown method " + id).toList();
     }
 
     private static boolean decidingAll(Verdict verdict, boolean everyTest) {
@@ -184,7 +215,11 @@ public final class Recall {
         });
         try {
             Files.createDirectories(file.getParent());
-            AtomicFiles.write(file, out -> JSON.writeValue(out, new Contents(FORMAT, keptVerdicts, keptComparisons)));
+            List<String> names;
+            synchronized (this) {
+                names = List.copyOf(methods);
+            }
+            AtomicFiles.write(file, out -> JSON.writeValue(out, new Contents(FORMAT, names, keptVerdicts, keptComparisons)));
         } catch (IOException | RuntimeException e) {
             notice.accept(file + ": could not write it (" + Text.firstLine(String.valueOf(e.getMessage()))
                     + "); the next run runs every mutant again");

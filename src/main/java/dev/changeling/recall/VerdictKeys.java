@@ -2,9 +2,13 @@ package dev.changeling.recall;
 
 import dev.changeling.execution.Baseline;
 import dev.changeling.execution.RecordedTest;
+import dev.changeling.mutant.EntryMethods;
+import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
+import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
+import java.util.BitSet;
 import java.util.Collection;
 import java.util.HashMap;
 import java.util.List;
@@ -13,19 +17,21 @@ import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import java.util.stream.Collectors;
 
 /**
  * The content a mutant's verdict depends on, as one digest: the mutant (its fingerprint and its file's text), the
- * original classes of its file, every test that decided it with what that test ran, and the surroundings. What a test
- * ran: its class with every test class it names (through their constant pools), and the classes of each main file
- * whose mutation points it reached in the baseline. The surroundings: those of {@link ProjectClasses}, the run's
- * settings, and the classes of every main file that has no point in the schema (no reach is known there, so any test
- * may run them). Equal digests mean equal inputs; nothing is keyed by time.
+ * original classes of its file, every test that decided it, the code its run ran, and the surroundings. A test: its
+ * class with every test class it names (through their constant pools). The code the run ran: the schema's files less
+ * the bodies of the methods whose entry the schema notes ({@link EntryMethods}), and the bodies of those the mutant's
+ * run entered (the worker lists them; those entered while the production classes were initialised are among them).
+ * The surroundings: those of {@link ProjectClasses}, the run's settings, and the classes of every main file that has
+ * no point in the schema (nothing is noted there, so any test may run them). Equal digests mean equal inputs; nothing
+ * is keyed by time.
  *
- * <p>What this cannot see, because reach is known only where there are points: a change confined to code without
- * points (a field's initial value, a constructor that only assigns fields) in a file a test reaches no point of, and
- * code that only the mutant's own run enters (a branch the unmutated test never takes). Verdicts resting on such code
- * are given again; {@code run --run-all} runs every mutant.
+ * <p>So an edit of a method body changes the key of the verdicts whose runs entered that method, and of no other;
+ * any other edit of a schema file changes every key. What this cannot see: state that an earlier test left in the
+ * worker (a cache filled by a method only that test entered), and code run through reflection on its text.
  */
 public final class VerdictKeys {
 
@@ -34,35 +40,62 @@ public final class VerdictKeys {
     private final ProjectClasses classes;
     private final String surroundings;
     private final Baseline baseline;
-    private final List<Point> points;
+    private final List<EntryMethod> entries;
+    private final Map<String, String> bodies;
     private final Map<String, String> testDigests = new HashMap<>();
 
-    private VerdictKeys(ProjectClasses classes, String surroundings, Baseline baseline, List<Point> points) {
+    private VerdictKeys(ProjectClasses classes, String surroundings, Baseline baseline, List<EntryMethod> entries,
+                        Map<String, String> bodies) {
         this.classes = classes;
         this.surroundings = surroundings;
         this.baseline = baseline;
-        this.points = points;
+        this.entries = entries;
+        this.bodies = bodies;
     }
 
     /**
      * @param settings every run setting beyond the tests' JVM that can change a verdict (deadlines, say), in words
-     * @param points   the schema's points, by id: what the baseline's reach is in
+     * @param points   the schema's points
+     * @param entries  the schema's methods whose entry it notes, by id
+     * @param files    the original files, by project-relative path: every file of a point among them
      */
-    public static VerdictKeys of(ProjectClasses classes, String settings, Baseline baseline, List<Point> points) {
+    public static VerdictKeys of(ProjectClasses classes, String settings, Baseline baseline, List<Point> points,
+                                 List<EntryMethod> entries, Map<String, SourceFile> files) {
         ClassGraph main = classes.main();
+        Set<String> schemaFiles = points.stream().map(Point::file).collect(Collectors.toCollection(TreeSet::new));
         Set<String> unreachable = new TreeSet<>(main.names());
-        points.stream().map(Point::file).distinct().forEach(file -> main.classesOf(file).forEach(unreachable::remove));
+        schemaFiles.forEach(file -> main.classesOf(file).forEach(unreachable::remove));
+        Map<String, List<EntryMethod>> byFile = entries.stream().collect(Collectors.groupingBy(EntryMethod::file));
+        Map<String, String> bodies = new HashMap<>();
+        StringBuilder skeletons = new StringBuilder();
+        for (String path : schemaFiles) {
+            SourceFile file = files.get(path);
+            List<EntryMethod> methods = byFile.getOrDefault(path, List.of());
+            methods.forEach(method -> bodies.put(method.name(), SourceHash.sha256(file.textOf(method.body()))));
+            skeletons.append(path).append(' ').append(SourceHash.sha256(EntryMethods.skeleton(file, methods))).append('\n');
+        }
         String surroundings = SourceHash.sha256(classes.surroundings() + "\nsettings " + settings + "\nwithout points "
-                + main.digestOf(unreachable) + "\n");
-        return new VerdictKeys(classes, surroundings, baseline, points);
+                + main.digestOf(unreachable) + "\nschema files\n" + skeletons);
+        return new VerdictKeys(classes, surroundings, baseline, List.copyOf(entries), bodies);
     }
 
-    /** The key of a verdict the tests gave: equal keys, equal verdict. */
-    public synchronized String forVerdict(Mutant mutant, String fileText, Collection<String> tests) {
+    /** The names of the schema's methods with these ids, as a verdict's key takes them. */
+    public List<String> namesOf(BitSet ids) {
+        return ids.stream().filter(id -> id < entries.size()).mapToObj(id -> entries.get(id).name()).toList();
+    }
+
+    /**
+     * The key of a verdict the tests gave: equal keys, equal verdict.
+     *
+     * @param entered the names of the schema's methods the mutant's run entered ({@link #namesOf})
+     */
+    public synchronized String forVerdict(Mutant mutant, String fileText, Collection<String> tests, Collection<String> entered) {
         StringBuilder text = new StringBuilder(ofMutant(mutant, fileText));
         mutant.points().stream().map(Point::file).distinct().sorted()
                 .forEach(file -> text.append("classes ").append(classes.fileDigest(file)).append('\n'));
         new TreeSet<>(tests).forEach(test -> text.append("test ").append(test).append(' ').append(testDigest(test)).append('\n'));
+        new TreeSet<>(entered).forEach(method -> text.append("entered ").append(method).append(' ')
+                .append(bodies.getOrDefault(method, "gone")).append('\n'));
         return SourceHash.sha256(text.toString());
     }
 
@@ -97,26 +130,11 @@ public final class VerdictKeys {
         return name;
     }
 
-    /**
-     * What one test ran: its class and the test classes it names, and the main files whose points it reached; a test
-     * the baseline does not know, or of unknown class, counts as naming every test class.
-     */
+    /** A test: its class and the test classes it names; a test the baseline does not know counts as naming every one. */
     private String testDigest(String id) {
         return testDigests.computeIfAbsent(id, key -> {
             RecordedTest test = baseline.test(key);
-            StringBuilder text = new StringBuilder("test classes ")
-                    .append(test == null ? classes.testClassDigest(null) : classes.testDigest(test.className(), methodOf(test.id())))
-                    .append('\n');
-            if (test != null) {
-                Set<String> files = new TreeSet<>();
-                for (int point : test.reached()) {
-                    if (point < points.size()) {
-                        files.add(points.get(point).file());
-                    }
-                }
-                files.forEach(file -> text.append(file).append(' ').append(classes.fileDigest(file)).append('\n'));
-            }
-            return SourceHash.sha256(text.toString());
+            return test == null ? classes.testClassDigest(null) : classes.testDigest(test.className(), methodOf(test.id()));
         });
     }
 }

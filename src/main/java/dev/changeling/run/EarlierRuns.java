@@ -99,7 +99,7 @@ final class EarlierRuns {
     /** The plan less the mutants whose verdicts are kept under today's inputs, said in a line. */
     JobPlan recalling(JobPlan planned, Baseline baseline, BuildResult build, Map<String, SourceFile> files) {
         keys = VerdictKeys.of(classes, request.deadlines() + "; " + request.mutantsPerWorker() + " mutants per worker; every test "
-                + request.everyTest(), baseline, build.points());
+                + request.everyTest(), baseline, build.points(), build.entries(), files);
         JobPlan plan = planned.recalling(recall, keys, files);
         int recalled = plan.settled().size() - planned.settled().size();
         if (recalled > 0) {

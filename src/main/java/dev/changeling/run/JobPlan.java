@@ -98,9 +98,10 @@ record JobPlan(List<MutantJob> jobs, Map<String, Mutant> mutants, Map<String, Li
     }
 
     /** Keeps the verdict of a job that ran, for later runs. */
-    void keep(MutantResult result, Recall recall, VerdictKeys keys, Map<String, SourceFile> files) {
+    void keep(JobResult job, MutantResult result, Recall recall, VerdictKeys keys, Map<String, SourceFile> files) {
         Mutant mutant = mutants.get(result.id());
-        recall.keep(mutant, files.get(mutant.file()), result, everyTest, keys);
+        recall.keep(mutant, files.get(mutant.file()), result, job.entered() == null ? null : keys.namesOf(job.entered()),
+                everyTest, keys);
     }
 
     /** A watched mutant whose expression gave the original's value for every reaching test: it survives them all. */

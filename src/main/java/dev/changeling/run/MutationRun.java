@@ -182,7 +182,8 @@ public final class MutationRun {
         List<TestRecord> tests;
         boolean complete;
         EarlierRuns earlier = EarlierRuns.open(request, listener, project, work, chosen);
-        SuiteSetup setup = TestJvm.setup(project.suite(), request, schema.pointCount(), project.productionClasses(), listener);
+        SuiteSetup setup = TestJvm.setup(project.suite(), request, schema.pointCount(), project.productionClasses(), listener)
+                .withMethodCount(schema.methodCount());
         try (WorkerPool workers = WorkerPool.open(workerSettings(project, schema.schemaClasses(), work), setup)) {
             pool = workers;
             checkNotStopped();
@@ -216,7 +217,7 @@ public final class MutationRun {
             mutantsStarted = true;
             List<JobResult> finished = clock.time(PhaseClock.EXECUTE, () -> workers.run(plan.jobs(), job -> {
                 MutantResult result = plan.resultOf(job, files);
-                plan.keep(result, earlier.recall(), earlier.keys(), files);
+                plan.keep(job, result, earlier.recall(), earlier.keys(), files);
                 own.put(job.key(), result);
                 results.put(job.key(), result);
                 listener.finished(result);

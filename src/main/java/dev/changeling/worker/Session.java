@@ -15,6 +15,8 @@ final class Session {
     private final DataInputStream in;
     private final DataOutputStream out;
     private Suite suite;
+    /** The schema methods entered while the production classes were initialised: part of what every mutant ran. */
+    private int[] enteredWhilePreparing = new int[0];
 
     Session(DataInputStream in, DataOutputStream out) {
         this.in = in;
@@ -56,6 +58,7 @@ final class Session {
 
     private void prepare() throws IOException {
         int points = in.readInt();
+        int methods = in.readInt();
         List<String> preinitialise = Wire.readStrings(in);
         List<String> includedTags = Wire.readStrings(in);
         List<String> excludedTags = Wire.readStrings(in);
@@ -66,11 +69,12 @@ final class Session {
         }
         suite = new Suite(includedTags, excludedTags, configurationParameters);
         suite.warmUp();
-        Probe.prepare(points);
+        Probe.prepare(points, methods);
         Probe.record(true);
         List<String> failures = ClassWarmer.initialise(preinitialise);
         Probe.record(false);
         int[] reached = Probe.drainReached();
+        enteredWhilePreparing = Probe.drainEntered();
         out.writeByte(Wire.PREPARED);
         Wire.writeInts(out, reached);
         Wire.writeStrings(out, failures);
@@ -81,6 +85,7 @@ final class Session {
         List<String> tests = Wire.readStrings(in);
         boolean everyTest = in.readByte() != 0;
         Suite current = requireSuite();
+        Probe.drainEntered();
         Probe.activate(points);
         try {
             // Tests run in chunks of doubling size, fastest first: the first alone (the likeliest to kill;
@@ -110,6 +115,15 @@ final class Session {
             Probe.activate();
         }
         out.writeByte(Wire.RUN_DONE);
+        Wire.writeInts(out, entered());
+    }
+
+    /** The schema methods this run entered, and those entered while the classes were initialised. */
+    private int[] entered() {
+        int[] during = Probe.drainEntered();
+        int[] all = java.util.Arrays.copyOf(enteredWhilePreparing, enteredWhilePreparing.length + during.length);
+        System.arraycopy(during, 0, all, enteredWhilePreparing.length, during.length);
+        return all;
     }
 
     /**

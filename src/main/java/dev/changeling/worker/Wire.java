@@ -17,7 +17,7 @@ import java.util.List;
  *                            (the worker's switches then throw until that step ends; steps count from 1 per worker),
  *                            or EXIT (-1) when the tool is done with the worker, whatever it runs: the worker exits
  *                            through System.exit, so its shutdown hooks run (deleteOnExit files go) as in a test JVM
- * tool -> worker  PREPARE    points:int preinitialise:strs includedTags:strs excludedTags:strs parameters:strs (name, value, name, …)
+ * tool -> worker  PREPARE    points:int methods:int preinitialise:strs includedTags:strs excludedTags:strs parameters:strs (name, value, name, …)
  *                   reply    PREPARED reachedWhileInitialising:ints failures:strs
  * tool -> worker  BASELINE   testClasses:strs
  *                   reply    PROGRESS name:str (once per finished test) ... then
@@ -26,7 +26,8 @@ import java.util.List;
  *                                          excludedTagsThatLeftOutTests:strs
  * tool -> worker  RUN        points:ints tests:strs everyTest:byte (1: go on after a failing test; 0: stop after its step)
  *                   reply    STEP count:int (before each group of tests run in one request: the next count tests)
- *                            TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then RUN_DONE
+ *                            TEST_DONE id:str status:byte nanos:long message:str (per test run) ... then
+ *                            RUN_DONE entered:ints (the schema methods the run entered, and those entered while preparing)
  *                            (status STOPPED: the step was stopped at its deadline; it is the last test reported)
  * tool -> worker  QUIT       (no reply; the worker closes its launcher session and exits through System.exit)
  * any reply may instead be   FAILURE message:str   (the command failed inside the worker; the worker goes on)
@@ -37,7 +38,7 @@ import java.util.List;
  */
 public final class Wire {
 
-    public static final int VERSION = 7;
+    public static final int VERSION = 8;
     private static final int MAX_SIZE = 1 << 26;
 
     public static final byte HELLO = 1;

@@ -33,7 +33,7 @@ final class Outcomes {
         try {
             Class<?> probe = loader.loadClass("dev.changeling.probe.Probe");
             int highest = Arrays.stream(active).max().orElse(0);
-            probe.getMethod("prepare", int.class).invoke(null, highest + 1);
+            probe.getMethod("prepare", int.class, int.class).invoke(null, highest + 1, 0);
             probe.getMethod("activate", int[].class).invoke(null, (Object) active);
             return run(loader.loadClass(className));
         } catch (ReflectiveOperationException e) {
