@@ -14,6 +14,7 @@ rm -rf "$copy"
 cp -r "$project" "$copy"
 rm -rf "$copy/target/changeling"
 cd "$copy"
+mkdir -p target
 echo "load before: $(cut -d' ' -f1-3 /proc/loadavg) (2 cores; anything else running distorts the figures)"
 
 timed() { # name, then run options; prints one line, keeps the output and results

@@ -1,5 +1,6 @@
 package dev.changeling.compile;
 
+import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
@@ -17,13 +18,21 @@ import java.util.Map;
  *                        {@code dev.changeling.probe.Probe}
  * @param outputDirectory a folder of the tool's own (below {@code target/changeling/}); its
  *                        {@code schema}, {@code schema-sources} and {@code alone} subfolders are replaced
+ * @param entryMethods    the methods whose entry the schema notes, of the files whose methods are known already (from
+ *                        their trees); the others' are found by parsing them
  */
 public record BuildRequest(List<Mutant> mutants, Map<String, SourceFile> files, List<Path> classpath,
-                           Path outputDirectory) {
+                           Path outputDirectory, Map<String, List<EntryMethod>> entryMethods) {
+
+    /** A request whose files' methods are found by parsing them. */
+    public BuildRequest(List<Mutant> mutants, Map<String, SourceFile> files, List<Path> classpath, Path outputDirectory) {
+        this(mutants, files, classpath, outputDirectory, Map.of());
+    }
 
     public BuildRequest {
         mutants = List.copyOf(mutants);
         files = Map.copyOf(files);
+        entryMethods = Map.copyOf(entryMethods);
         classpath = List.copyOf(classpath);
         for (Mutant mutant : mutants) {
             SourceFile file = files.get(mutant.file());

@@ -1,5 +1,7 @@
 package dev.changeling.compile;
 
+import dev.changeling.mutant.EntryMethods;
+import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
 import java.io.IOException;
@@ -14,6 +16,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 
 /**
  * Compiles mutants: every point that can be switched at run time goes into one schema compiled by
@@ -60,8 +63,11 @@ public final class MutantBuild {
         Set<Point> candidates = new LinkedHashSet<>();
         runnable.values().forEach(mutant -> candidates.addAll(mutant.points()));
 
-        String key = SchemaReuse.key(candidates, request.files(), request.classpath());
-        SchemaCompiler.Outcome kept = SchemaReuse.reuse(output, key, candidates).orElse(null);
+        Map<String, List<EntryMethod>> methods = new TreeMap<>();
+        candidates.stream().map(Point::file).distinct().forEach(path -> methods.put(path,
+                request.entryMethods().containsKey(path) ? request.entryMethods().get(path) : EntryMethods.of(request.files().get(path))));
+        SchemaReuse.Inputs inputs = SchemaReuse.inputs(candidates, request.files(), methods, request.classpath());
+        SchemaCompiler.Outcome kept = SchemaReuse.reuse(output, inputs, candidates).orElse(null);
         if (kept == null) {
             for (String folder : List.of(SCHEMA, SCHEMA_SOURCES)) {
                 Outputs.deleteTree(output.resolve(folder));
@@ -69,10 +75,11 @@ public final class MutantBuild {
             createFolder(output.resolve(SCHEMA));
         }
         try (Javac javac = new Javac(request.classpath())) {
-            SchemaCompiler.Outcome schema = kept != null ? kept : new SchemaCompiler(javac, request.files(), output.resolve(SCHEMA),
-                    output.resolve(SCHEMA_SOURCES), output.resolve(SCRATCH)).compile(candidates);
-            if (kept == null) {
-                SchemaReuse.keep(output, key, schema);
+            SchemaCompiler.Outcome schema = kept;
+            if (schema == null) {
+                schema = new SchemaCompiler(javac, request.files(), methods, output.resolve(SCHEMA), output.resolve(SCHEMA_SOURCES),
+                        output.resolve(SCRATCH)).compile(candidates, SchemaReuse.carried(output, inputs, candidates));
+                SchemaReuse.keep(output, inputs, schema);
             }
             Map<Point, Integer> ids = new HashMap<>();
             schema.points().forEach(point -> ids.put(point, ids.size()));

@@ -3,7 +3,6 @@ package dev.changeling.compile;
 import com.sun.source.tree.CompilationUnitTree;
 import com.sun.source.util.SourcePositions;
 import dev.changeling.UserError;
-import dev.changeling.mutant.EntryMethods;
 import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
@@ -67,24 +66,29 @@ final class SchemaCompiler {
     private final Set<String> wholeFiles = new HashSet<>();
     private final Set<String> checkedOriginals = new HashSet<>();
     private final Map<Point, String> stillborn = new LinkedHashMap<>();
-    /** Each file's methods whose entry is noted: the same in every round, so found once. */
-    private final Map<String, List<EntryMethod>> entryMethods = new HashMap<>();
+    private final Map<String, List<EntryMethod>> entryMethods;
     /** Whether each point rendered so far is watched: the same in every round, so worked out once. */
     private final Map<Point, Boolean> watchable = new HashMap<>();
     private long renderNanos;
     private long compileNanos;
 
-    SchemaCompiler(Javac javac, Map<String, SourceFile> files, Path classes, Path sources, Path scratch) {
+    /** @param entryMethods the methods whose entry the schema notes, of every file with points */
+    SchemaCompiler(Javac javac, Map<String, SourceFile> files, Map<String, List<EntryMethod>> entryMethods, Path classes,
+                   Path sources, Path scratch) {
         this.javac = javac;
         this.files = files;
+        this.entryMethods = Map.copyOf(entryMethods);
         this.classes = classes;
         this.sources = sources;
         this.scratch = scratch;
     }
 
-    Outcome compile(Collection<Point> candidates) {
+    /** The schema of the candidates less the {@code carried} points, which leave it before the first round. */
+    Outcome compile(Collection<Point> candidates, SchemaReuse.Carried carried) {
         Set<Point> schema = new LinkedHashSet<>(candidates);
         Map<Point, String> evicted = new LinkedHashMap<>();
+        stillborn.putAll(carried.stillborn());
+        leave(schema, evicted, carried.evicted());
         for (int round = 1; ; round++) {
             List<Point> ordered = schema.stream().sorted(ID_ORDER).toList();
             Map<Point, Integer> ids = new HashMap<>();
@@ -135,7 +139,7 @@ final class SchemaCompiler {
         for (Map.Entry<String, List<Point>> file : byFile.entrySet()) {
             SourceFile source = files.get(file.getKey());
             NavigableMap<Integer, Integer> notes = new TreeMap<>();
-            for (EntryMethod method : entryMethods.computeIfAbsent(file.getKey(), path -> EntryMethods.of(source))) {
+            for (EntryMethod method : entryMethods.getOrDefault(file.getKey(), List.of())) {
                 notes.put(method.noteAt(), entries++);
             }
             rendered.put(file.getKey(), SchemaRenderer.render(source, file.getValue(), ids, this::watched, notes));

@@ -45,8 +45,12 @@ public final class EntryMethods {
 
     /** The file's methods whose entry is noted, in the order of the text; none when the file does not parse. */
     public static List<EntryMethod> of(SourceFile file) {
-        JavaSources.Parsed parsed = JavaSources.parse(file);
-        return parsed.ok() ? of(file, parsed.unit()) : List.of();
+        return of(JavaSources.parse(file));
+    }
+
+    /** The same, from the file's tree. */
+    public static List<EntryMethod> of(JavaSources.Parsed parsed) {
+        return parsed.ok() ? of(parsed.file(), parsed.unit()) : List.of();
     }
 
     private static List<EntryMethod> of(SourceFile file, CompilationUnit unit) {

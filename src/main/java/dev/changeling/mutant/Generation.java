@@ -16,11 +16,13 @@ public final class Generation {
     /**
      * The mutants of a set of files, the files they were made from, and the files that were skipped.
      *
-     * @param notMade points in scope not made, by reason: code that only serves diagnostics, a suppression rule, or
-     *                a line's budget
+     * @param notMade      points in scope not made, by reason: code that only serves diagnostics, a suppression rule,
+     *                     or a line's budget
+     * @param entryMethods each parsed file's methods whose entry a schema notes ({@link EntryMethods}), found while
+     *                     the file's tree was at hand
      */
     public record Generated(List<Mutant> mutants, Map<String, SourceFile> files, List<ParseProblem> problems,
-                            long lines, Map<String, Integer> notMade) {
+                            long lines, Map<String, Integer> notMade, Map<String, List<EntryMethods.EntryMethod>> entryMethods) {
     }
 
     private Generation() {
@@ -32,6 +34,7 @@ public final class Generation {
         Map<String, SourceFile> files = new LinkedHashMap<>();
         List<ParseProblem> problems = new ArrayList<>();
         Map<String, Integer> notMade = new TreeMap<>();
+        Map<String, List<EntryMethods.EntryMethod>> entryMethods = new LinkedHashMap<>();
         long lines = 0;
         for (SourceFile source : sources) {
             lines += source.lines().lineCount();
@@ -41,6 +44,7 @@ public final class Generation {
                 continue;
             }
             files.put(source.path(), source);
+            entryMethods.put(source.path(), EntryMethods.of(parsed));
             for (Point point : finder.find(parsed)) {
                 if (!request.pointFilter().test(point)) {
                     continue;
@@ -63,6 +67,6 @@ public final class Generation {
             }
         }
         finder.notMade().forEach((reason, count) -> notMade.merge(reason, count, Integer::sum));
-        return new Generated(mutants, files, problems, lines, notMade);
+        return new Generated(mutants, files, problems, lines, notMade, entryMethods);
     }
 }

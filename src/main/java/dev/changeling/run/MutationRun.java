@@ -312,7 +312,7 @@ public final class MutationRun {
 
     private static SchemaStage compileSchema(List<Mutant> mutants, Selection.Chosen chosen, List<Path> compileClasspath, Path work) {
         return MutantBuild.compileSchema(new BuildRequest(mutants, chosen.generated().files(), compileClasspath,
-                work.resolve("build")));
+                work.resolve("build"), chosen.generated().entryMethods()));
     }
 
     private WorkerSettings workerSettings(DiscoveredProject project, Path schemaClasses, Path work) {
