@@ -1,5 +1,6 @@
 package dev.changeling.compile;
 
+import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Point;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -38,6 +39,11 @@ public final class SchemaStage {
     /** How many methods the schema notes the entry of: what {@code Probe.prepare} is given beside the points. */
     public int methodCount() {
         return schema.entries().size();
+    }
+
+    /** The methods whose entry the schema notes; a method's id is its index. */
+    public List<EntryMethod> entries() {
+        return schema.entries();
     }
 
     /** The schema's points; a point's id is its index. */

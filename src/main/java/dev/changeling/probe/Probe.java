@@ -45,12 +45,16 @@ public final class Probe {
 
     /**
      * Notes that method {@code id} of the schema was entered, whether or not reach is recorded: what ran under a mutant
-     * is what its verdict depends on.
+     * is what its verdict depends on. While reach is recorded, the entry is also recorded as the reach of id
+     * {@code 2 * points + id}, so that the baseline knows which methods each test entered.
      */
     public static void enter(int id) {
         boolean[] now = entered;
         if (id < now.length && !now[id]) {
             note(id);
+        }
+        if (recording) {
+            reach(2 * active.length + id);
         }
     }
 
@@ -58,8 +62,8 @@ public final class Probe {
     public static void prepare(int points, int methods) {
         synchronized (LOCK) {
             active = new boolean[points];
-            // a point's infection is recorded as the reach of id points + point
-            seen = new boolean[2 * points];
+            // a point's infection is recorded as the reach of id points + point, a method's entry as 2 * points + method
+            seen = new boolean[2 * points + methods];
             reachedCount = 0;
             entered = new boolean[methods];
             enteredCount = 0;

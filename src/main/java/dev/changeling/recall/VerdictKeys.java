@@ -2,11 +2,9 @@ package dev.changeling.recall;
 
 import dev.changeling.execution.Baseline;
 import dev.changeling.execution.RecordedTest;
-import dev.changeling.mutant.EntryMethods;
 import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Mutant;
 import dev.changeling.mutant.Point;
-import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
 import java.util.BitSet;
 import java.util.Collection;
@@ -17,7 +15,6 @@ import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import java.util.stream.Collectors;
 
 /**
  * The content a mutant's verdict depends on, as one digest: the mutant (its fingerprint and its file's text), the
@@ -40,48 +37,34 @@ public final class VerdictKeys {
     private final ProjectClasses classes;
     private final String surroundings;
     private final Baseline baseline;
-    private final List<EntryMethod> entries;
-    private final Map<String, String> bodies;
+    private final SchemaCode schema;
     private final Map<String, String> testDigests = new HashMap<>();
 
-    private VerdictKeys(ProjectClasses classes, String surroundings, Baseline baseline, List<EntryMethod> entries,
-                        Map<String, String> bodies) {
+    private VerdictKeys(ProjectClasses classes, String surroundings, Baseline baseline, SchemaCode schema) {
         this.classes = classes;
         this.surroundings = surroundings;
         this.baseline = baseline;
-        this.entries = entries;
-        this.bodies = bodies;
+        this.schema = schema;
     }
 
-    /**
-     * @param settings every run setting beyond the tests' JVM that can change a verdict (deadlines, say), in words
-     * @param points   the schema's points
-     * @param entries  the schema's methods whose entry it notes, by id
-     * @param files    the original files, by project-relative path: every file of a point among them
-     */
-    public static VerdictKeys of(ProjectClasses classes, String settings, Baseline baseline, List<Point> points,
-                                 List<EntryMethod> entries, Map<String, SourceFile> files) {
+    /** @param settings every run setting beyond the tests' JVM that can change a verdict (deadlines, say), in words */
+    public static VerdictKeys of(ProjectClasses classes, String settings, Baseline baseline, SchemaCode schema) {
         ClassGraph main = classes.main();
-        Set<String> schemaFiles = points.stream().map(Point::file).collect(Collectors.toCollection(TreeSet::new));
         Set<String> unreachable = new TreeSet<>(main.names());
-        schemaFiles.forEach(file -> main.classesOf(file).forEach(unreachable::remove));
-        Map<String, List<EntryMethod>> byFile = entries.stream().collect(Collectors.groupingBy(EntryMethod::file));
-        Map<String, String> bodies = new HashMap<>();
         StringBuilder skeletons = new StringBuilder();
-        for (String path : schemaFiles) {
-            SourceFile file = files.get(path);
-            List<EntryMethod> methods = byFile.getOrDefault(path, List.of());
-            methods.forEach(method -> bodies.put(method.name(), SourceHash.sha256(file.textOf(method.body()))));
-            skeletons.append(path).append(' ').append(SourceHash.sha256(EntryMethods.skeleton(file, methods))).append('\n');
+        for (String path : schema.paths()) {
+            main.classesOf(path).forEach(unreachable::remove);
+            skeletons.append(path).append(' ').append(schema.skeleton(path)).append('\n');
         }
         String surroundings = SourceHash.sha256(classes.surroundings() + "\nsettings " + settings + "\nwithout points "
                 + main.digestOf(unreachable) + "\nschema files\n" + skeletons);
-        return new VerdictKeys(classes, surroundings, baseline, List.copyOf(entries), bodies);
+        return new VerdictKeys(classes, surroundings, baseline, schema);
     }
 
     /** The names of the schema's methods with these ids, as a verdict's key takes them. */
     public List<String> namesOf(BitSet ids) {
-        return ids.stream().filter(id -> id < entries.size()).mapToObj(id -> entries.get(id).name()).toList();
+        List<EntryMethod> methods = schema.methods();
+        return ids.stream().filter(id -> id < methods.size()).mapToObj(id -> methods.get(id).name()).toList();
     }
 
     /**
@@ -95,7 +78,7 @@ public final class VerdictKeys {
                 .forEach(file -> text.append("classes ").append(classes.fileDigest(file)).append('\n'));
         new TreeSet<>(tests).forEach(test -> text.append("test ").append(test).append(' ').append(testDigest(test)).append('\n'));
         new TreeSet<>(entered).forEach(method -> text.append("entered ").append(method).append(' ')
-                .append(bodies.getOrDefault(method, "gone")).append('\n'));
+                .append(schema.bodies().getOrDefault(method, "gone")).append('\n'));
         return SourceHash.sha256(text.toString());
     }
 

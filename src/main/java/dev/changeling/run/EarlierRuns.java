@@ -1,16 +1,15 @@
 package dev.changeling.run;
 
-import dev.changeling.compile.BuildResult;
 import dev.changeling.execution.Baseline;
 import dev.changeling.execution.SuiteSetup;
 import dev.changeling.execution.WorkerPool;
-import dev.changeling.mutant.Point;
 import dev.changeling.mutant.Selection;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.SuiteConfiguration;
 import dev.changeling.recall.ProjectClasses;
 import dev.changeling.recall.ReachMap;
 import dev.changeling.recall.Recall;
+import dev.changeling.recall.SchemaCode;
 import dev.changeling.recall.VerdictKeys;
 import dev.changeling.results.RunSettings;
 import dev.changeling.source.SourceFile;
@@ -64,10 +63,10 @@ final class EarlierRuns {
      * The unmutated suite: the test classes the reach map cannot vouch for run, the others' tests come from the map; a
      * run of every point then writes the map for later runs.
      */
-    Baseline baseline(WorkerPool workers, List<Point> points, SuiteSetup setup) {
+    Baseline baseline(WorkerPool workers, SchemaCode schema, SuiteSetup setup) {
         Path map = request.reuse().reachMap().orElse(work.resolve(ReachMap.FILE_NAME));
         ReachMap.Choice choice = request.reuse().selectsTests()
-                ? ReachMap.choose(map, classes, generation, points, setup.testClasses())
+                ? ReachMap.choose(map, classes, generation, schema, setup.testClasses())
                 : new ReachMap.Choice(null, List.of(), "");
         if (choice.runs() != null || Files.isRegularFile(map) && request.reuse().selectsTests()) {
             listener.phase(choice.summary());
@@ -80,15 +79,15 @@ final class EarlierRuns {
     }
 
     /** Writes the reach map after a green baseline of every point; says so when the run does nothing else. */
-    void map(List<Point> points, Baseline baseline) {
+    void map(SchemaCode schema, Baseline baseline) {
         if (!wholeProject) {
             return;
         }
         Path file = work.resolve(ReachMap.FILE_NAME);
         try {
-            ReachMap.write(file, classes, generation, points, baseline);
+            ReachMap.write(file, classes, generation, schema, baseline);
             if (request.reuse().mapOnly()) {
-                listener.phase("reach map: " + baseline.tests().size() + " tests over " + points.size() + " points written to "
+                listener.phase("reach map: " + baseline.tests().size() + " tests over " + schema.points().size() + " points written to "
                         + file + "; hand it to later runs with --reach-map FILE, or leave it where it is");
             }
         } catch (IOException | RuntimeException e) {
@@ -97,9 +96,9 @@ final class EarlierRuns {
     }
 
     /** The plan less the mutants whose verdicts are kept under today's inputs, said in a line. */
-    JobPlan recalling(JobPlan planned, Baseline baseline, BuildResult build, Map<String, SourceFile> files) {
+    JobPlan recalling(JobPlan planned, Baseline baseline, SchemaCode schema, Map<String, SourceFile> files) {
         keys = VerdictKeys.of(classes, request.deadlines() + "; " + request.mutantsPerWorker() + " mutants per worker; every test "
-                + request.everyTest(), baseline, build.points(), build.entries(), files);
+                + request.everyTest(), baseline, schema);
         JobPlan plan = planned.recalling(recall, keys, files);
         int recalled = plan.settled().size() - planned.settled().size();
         if (recalled > 0) {

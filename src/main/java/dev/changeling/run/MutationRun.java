@@ -20,6 +20,7 @@ import dev.changeling.project.DiscoveredModule;
 import dev.changeling.project.DiscoveredProject;
 import dev.changeling.project.ProjectDiscovery;
 import dev.changeling.project.ProjectLayout;
+import dev.changeling.recall.SchemaCode;
 import dev.changeling.results.CompiledAlike;
 import dev.changeling.results.ModuleRecord;
 import dev.changeling.results.MutantResult;
@@ -182,17 +183,18 @@ public final class MutationRun {
         List<TestRecord> tests;
         boolean complete;
         EarlierRuns earlier = EarlierRuns.open(request, listener, project, work, chosen);
+        SchemaCode code = new SchemaCode(schema.points(), schema.entries(), files);
         SuiteSetup setup = TestJvm.setup(project.suite(), request, schema.pointCount(), project.productionClasses(), listener)
                 .withMethodCount(schema.methodCount());
         try (WorkerPool workers = WorkerPool.open(workerSettings(project, schema.schemaClasses(), work), setup)) {
             pool = workers;
             checkNotStopped();
-            Baseline baseline = clock.time(PhaseClock.BASELINE, () -> earlier.baseline(workers, schema.points(), setup));
+            Baseline baseline = clock.time(PhaseClock.BASELINE, () -> earlier.baseline(workers, code, setup));
             GreenBaseline.require(baseline, setup, project.layout().root().resolve(module.path()));
             tests = baseline.tests().stream().map(test -> new TestRecord(test.id(), test.name(), test.nanos() / 1e6)).toList();
             listener.phase(String.format(Locale.ROOT, "baseline: %d tests green in %.1f s%s",
                     baseline.tests().size(), baseline.nanos() / 1e9, GreenBaseline.freshWorkers(baseline)));
-            earlier.map(schema.points(), baseline);
+            earlier.map(code, baseline);
             if (request.reuse().mapOnly()) {
                 return new ModuleOutcome(tests, true, CompiledAlike.NONE);
             }
@@ -209,7 +211,7 @@ public final class MutationRun {
             checkNotStopped();
 
             JobPlan plan = earlier.recalling(JobPlan.of(placements.runnable(), build, baseline, request.deadlines(), files,
-                    request.everyTest()), baseline, build, files);
+                    request.everyTest()), baseline, code, files);
             own.putAll(plan.settled());
             results.putAll(own);
             own.values().forEach(listener::finished);
