@@ -57,6 +57,23 @@ class SchemaRendererTest {
     }
 
     @Nested
+    class EntryNotes {
+
+        @Test
+        void aNotedMethodBeginsWithItsNote_onTheLineOfItsBrace_beforeAStatementHostThatOpensIt() {
+            Sketch sketch = new Sketch("class A {\n    void f(int a) {g(a);\n    }\n    int h() { return 1; }\n}")
+                    .point("g(a);", "g(a);", "", HostKind.STATEMENT);
+            java.util.NavigableMap<Integer, Integer> notes = new java.util.TreeMap<>();
+            notes.put(sketch.file.text().indexOf("{g") + 1, 0);
+            notes.put(sketch.file.text().indexOf("{ return 1") + 1, 1);
+            String schema = SchemaRenderer.render(sketch.file, sketch.points, sketch.ids, point -> false, notes).text();
+            assertEquals("class A {\n    void f(int a) {" + P + ".enter(0); { if (!" + P + ".on(0)) { g(a); } }\n    }\n"
+                    + "    int h() {" + P + ".enter(1);  return 1; }\n}", schema);
+            assertEquals(sketch.file.text().lines().count(), schema.lines().count(), "line numbers survive");
+        }
+    }
+
+    @Nested
     class ExpressionHosts {
 
         @Test

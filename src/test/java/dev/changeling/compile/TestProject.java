@@ -86,6 +86,27 @@ final class TestProject {
         return project;
     }
 
+    /** Replaces text in a source (path below src/main/java) and compiles the project again, as a developer's edit would. */
+    void edit(String name, String from, String to) {
+        String text = file(name).text();
+        if (!text.contains(from)) {
+            throw new IllegalArgumentException(name + " does not hold " + from);
+        }
+        try {
+            Path path = root.resolve(SOURCE_ROOT + name);
+            Files.writeString(path, text.replace(from, to), StandardCharsets.UTF_8);
+            files.put(SOURCE_ROOT + name, JavaSources.read(root, path));
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        Map<String, String> texts = new LinkedHashMap<>();
+        files.forEach((path, file) -> texts.put(path, file.text()));
+        List<String> errors = compile(texts, classes);
+        if (!errors.isEmpty()) {
+            throw new IllegalArgumentException("the edited project does not compile: " + errors);
+        }
+    }
+
     SourceFile file(String name) {
         return files.get(SOURCE_ROOT + name);
     }
@@ -125,7 +146,7 @@ final class TestProject {
             fileManager.setLocationFromPaths(StandardLocation.CLASS_OUTPUT, List.of(folder));
             fileManager.setLocationFromPaths(StandardLocation.CLASS_PATH, List.of(classes, probe));
             List<Path> written = new ArrayList<>();
-            Path sourceCopy = folder.resolve("src");
+            Path sourceCopy = folder.resolveSibling(folder.getFileName() + "-sources");
             for (Map.Entry<String, String> text : texts.entrySet()) {
                 Path file = sourceCopy.resolve(text.getKey());
                 Files.createDirectories(file.getParent());

@@ -16,8 +16,10 @@ import dev.changeling.results.Verdict;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -127,6 +129,17 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
                 .filter(mutant -> mutant.file().endsWith("Zone.java") && !mutant.testsRun().isEmpty()).count();
         assertTrue(ranInZone > 0 && recalled(afterEdit) <= ran(afterEdit) - ranInZone,
                 "every mutant of the edited file runs again: " + afterEdit.transcript());
+        Set<String> reachingZone = new HashSet<>();
+        afterEdit.results().mutants().stream().filter(mutant -> mutant.file().endsWith("Zone.java"))
+                .forEach(mutant -> reachingZone.addAll(mutant.reachedBy()));
+        long decidedWithoutZone = afterEdit.results().mutants().stream()
+                .filter(mutant -> !mutant.file().endsWith("Zone.java") && !mutant.testsRun().isEmpty())
+                .filter(mutant -> (mutant.verdict() == Verdict.SURVIVED ? mutant.testsRun() : List.of(String.valueOf(mutant.killedBy())))
+                        .stream().noneMatch(reachingZone::contains))
+                .count();
+        assertTrue(recalled(afterEdit) > decidedWithoutZone, "verdicts whose tests reach Zone but whose runs did not enter the"
+                + " edited method are recalled too: " + recalled(afterEdit) + " recalled, " + decidedWithoutZone
+                + " decided by tests that reach no point of Zone");
     }
 
     @Test
