@@ -9,14 +9,12 @@ package dev.changeling.probe;
 public final class Probe {
 
     private static boolean[] active = new boolean[0];
-    private static boolean[] seen = new boolean[0];
-    private static int[] reached = new int[16];
-    private static int reachedCount;
     private static boolean recording;
-    private static boolean[] entered = new boolean[0];
-    private static int[] enteredList = new int[16];
-    private static int enteredCount;
     private static final Object LOCK = new Object();
+    /** The points reached (and infections and entries, recorded as reach) since the last drain. */
+    private static final Notes REACHED = new Notes();
+    /** The methods entered since the last drain. */
+    private static final Notes ENTERED = new Notes();
     /** The step of tests the worker is running; it counts up, so a stop meant for an earlier step matches nothing. */
     private static volatile int step;
     /** The step whose deadline passed: while it runs, every switch throws. */
@@ -37,7 +35,7 @@ public final class Probe {
             throw new MutantStopped();
         }
         if (recording) {
-            reach(id);
+            REACHED.add(id);
         }
         boolean[] now = active;
         return id < now.length && now[id];
@@ -49,12 +47,9 @@ public final class Probe {
      * {@code 2 * points + id}, so that the baseline knows which methods each test entered.
      */
     public static void enter(int id) {
-        boolean[] now = entered;
-        if (id < now.length && !now[id]) {
-            note(id);
-        }
+        ENTERED.add(id);
         if (recording) {
-            reach(2 * active.length + id);
+            REACHED.add(2 * active.length + id);
         }
     }
 
@@ -63,35 +58,14 @@ public final class Probe {
         synchronized (LOCK) {
             active = new boolean[points];
             // a point's infection is recorded as the reach of id points + point, a method's entry as 2 * points + method
-            seen = new boolean[2 * points + methods];
-            reachedCount = 0;
-            entered = new boolean[methods];
-            enteredCount = 0;
+            REACHED.size(2 * points + methods);
+            ENTERED.size(methods);
         }
     }
 
     /** The methods entered since the last drain, each once, and forgets them. */
     public static int[] drainEntered() {
-        synchronized (LOCK) {
-            int[] out = java.util.Arrays.copyOf(enteredList, enteredCount);
-            for (int id : out) {
-                entered[id] = false;
-            }
-            enteredCount = 0;
-            return out;
-        }
-    }
-
-    private static void note(int id) {
-        synchronized (LOCK) {
-            if (id < entered.length && !entered[id]) {
-                entered[id] = true;
-                if (enteredCount == enteredList.length) {
-                    enteredList = java.util.Arrays.copyOf(enteredList, enteredCount * 2);
-                }
-                enteredList[enteredCount++] = id;
-            }
-        }
+        return ENTERED.drain();
     }
 
     /** Switches exactly the given points on (none for the unmutated program). */
@@ -136,7 +110,7 @@ public final class Probe {
      */
     public static boolean differs(int id, boolean differs) {
         if (differs && recording) {
-            reach(active.length + id);
+            REACHED.add(active.length + id);
         }
         return false;
     }
@@ -147,27 +121,48 @@ public final class Probe {
 
     /** The points reached since the last drain, each once, and forgets them. */
     public static int[] drainReached() {
-        synchronized (LOCK) {
-            int[] out = java.util.Arrays.copyOf(reached, reachedCount);
-            for (int id : out) {
-                seen[id] = false;
-            }
-            reachedCount = 0;
-            return out;
-        }
+        return REACHED.drain();
     }
 
-    private static void reach(int id) {
-        if (id >= seen.length || seen[id]) {
-            return;
+    /** Ids noted once each until drained, in the order first noted. */
+    private static final class Notes {
+
+        private boolean[] seen = new boolean[0];
+        private int[] ids = new int[16];
+        private int count;
+
+        void size(int idCount) {
+            synchronized (LOCK) {
+                seen = new boolean[idCount];
+                count = 0;
+            }
         }
-        synchronized (LOCK) {
-            if (!seen[id]) {
-                seen[id] = true;
-                if (reachedCount == reached.length) {
-                    reached = java.util.Arrays.copyOf(reached, reachedCount * 2);
+
+        /** Notes the id, once until the next drain; an id past the size is ignored. Cheap when already noted. */
+        void add(int id) {
+            boolean[] now = seen;
+            if (id >= now.length || now[id]) {
+                return;
+            }
+            synchronized (LOCK) {
+                if (id < seen.length && !seen[id]) {
+                    seen[id] = true;
+                    if (count == ids.length) {
+                        ids = java.util.Arrays.copyOf(ids, count * 2);
+                    }
+                    ids[count++] = id;
                 }
-                reached[reachedCount++] = id;
+            }
+        }
+
+        int[] drain() {
+            synchronized (LOCK) {
+                int[] out = java.util.Arrays.copyOf(ids, count);
+                for (int id : out) {
+                    seen[id] = false;
+                }
+                count = 0;
+                return out;
             }
         }
     }

@@ -66,11 +66,10 @@ final class TestProject {
                 Files.writeString(file, source.getValue(), StandardCharsets.UTF_8);
                 project.files.put(SOURCE_ROOT + source.getKey(), JavaSources.read(root, file));
             }
-            for (Class<?> probePart : List.of(Probe.class, MutantStopped.class)) {
-                String name = probePart.getSimpleName() + ".class";
+            for (String name : List.of("Probe.class", "Probe$Notes.class", MutantStopped.class.getSimpleName() + ".class")) {
                 Path probeClass = project.probe.resolve("dev/changeling/probe/" + name);
                 Files.createDirectories(probeClass.getParent());
-                try (InputStream in = probePart.getResourceAsStream(name)) {
+                try (InputStream in = Probe.class.getResourceAsStream(name)) {
                     Files.write(probeClass, in.readAllBytes());
                 }
             }
