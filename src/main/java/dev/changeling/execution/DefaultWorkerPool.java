@@ -88,7 +88,8 @@ final class DefaultWorkerPool implements WorkerPool {
         }
         JobResult[] results = new JobResult[jobs.size()];
         AtomicInteger next = new AtomicInteger();
-        onSlots(jobs.size(), slot -> work(slot, jobs, next, results, onResult));
+        RecentKillers recent = new RecentKillers();
+        onSlots(jobs.size(), slot -> work(slot, jobs, next, recent, results, onResult));
         List<JobResult> finished = new ArrayList<>();
         for (JobResult result : results) {
             if (result != null) {
@@ -98,9 +99,11 @@ final class DefaultWorkerPool implements WorkerPool {
         return finished;
     }
 
-    private void work(WorkerSlot slot, List<MutantJob> jobs, AtomicInteger next, JobResult[] results, Consumer<JobResult> onResult) {
+    private void work(WorkerSlot slot, List<MutantJob> jobs, AtomicInteger next, RecentKillers recent, JobResult[] results,
+                      Consumer<JobResult> onResult) {
         for (int index = next.getAndIncrement(); index < jobs.size() && !stopped; index = next.getAndIncrement()) {
-            JobResult result = slot.execute(jobs.get(index));
+            JobResult result = slot.execute(recent.first(jobs.get(index)));
+            recent.note(result);
             boolean lostToStop = stopped && (result.outcome() == Outcome.CRASHED || result.outcome() == Outcome.TIMED_OUT);
             if (lostToStop) {
                 return;

@@ -1,6 +1,7 @@
 package dev.changeling.execution;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
@@ -71,6 +72,27 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
         int at = tests.indexOf(test);
         return new MutantJob(key, points, tests.subList(at + 1, tests.size()),
                 Arrays.copyOfRange(testNanos, at + 1, testNanos.length), deadlines.resumed(), aloneClasses, everyTest);
+    }
+
+    /** The same job with those of {@code first} that are among its tests moved to the front, in that order. */
+    public MutantJob withFirst(List<String> first) {
+        List<Integer> order = new ArrayList<>();
+        for (String test : first) {
+            int at = tests.indexOf(test);
+            if (at >= 0 && !order.contains(at)) {
+                order.add(at);
+            }
+        }
+        if (order.isEmpty() || order.size() == 1 && order.get(0) == 0) {
+            return this;
+        }
+        for (int at = 0; at < tests.size(); at++) {
+            if (!order.contains(at)) {
+                order.add(at);
+            }
+        }
+        return new MutantJob(key, points, order.stream().map(tests::get).toList(), order.stream().mapToLong(at -> testNanos[at]).toArray(),
+                deadlines, aloneClasses, everyTest);
     }
 
     /** The same job running every one of its tests, not stopping at the first failure. */
