@@ -53,7 +53,7 @@ public final class Recall {
      * A verdict as kept: the key, the tests that decided it, the methods its run entered (by their place in the file's
      * list of methods), and what the results file records for it.
      */
-    record KeptVerdict(String key, String file, Verdict verdict, List<String> decidedBy, List<Integer> entered, String killedBy,
+    record KeptVerdict(String key, String file, Verdict verdict, List<String> decidedBy, int[] entered, String killedBy,
                        String detail, List<String> testsRun, double millis, List<String> killers) {
     }
 
@@ -128,7 +128,7 @@ public final class Recall {
     public Optional<MutantResult> verdict(Mutant mutant, SourceFile file, List<String> tests, boolean everyTest,
                                           VerdictKeys keys, List<String> reachedBy, List<String> infectedBy) {
         KeptVerdict kept = giving ? verdicts.get(mutant.fingerprint()) : null;
-        if (kept == null) {
+        if (kept == null || kept.entered() == null || kept.decidedBy() == null) {
             return Optional.empty();
         }
         Collection<String> decidedBy = decidingAll(kept.verdict(), everyTest) ? tests : kept.decidedBy();
@@ -162,15 +162,15 @@ public final class Recall {
                 result.detail(), result.testsRun(), result.millis(), result.killers()));
     }
 
-    private synchronized List<Integer> idsOf(List<String> names) {
-        return names.stream().map(name -> methodIds.computeIfAbsent(name, unknown -> {
+    private synchronized int[] idsOf(List<String> names) {
+        return names.stream().mapToInt(name -> methodIds.computeIfAbsent(name, unknown -> {
             methods.add(name);
             return methods.size() - 1;
-        })).toList();
+        })).toArray();
     }
 
-    private synchronized List<String> namesOf(List<Integer> ids) {
-        return ids.stream().map(id -> id >= 0 && id < methods.size() ? methods.get(id) : "unknown method " + id).toList();
+    private synchronized List<String> namesOf(int[] ids) {
+        return java.util.Arrays.stream(ids).mapToObj(id -> id >= 0 && id < methods.size() ? methods.get(id) : "unknown method " + id).toList();
     }
 
     private static boolean decidingAll(Verdict verdict, boolean everyTest) {
