@@ -28,23 +28,56 @@ public final class Generation {
     private Generation() {
     }
 
+    /**
+     * The mutants of the files. Files are parsed and their points found on every core, each file on its own; the
+     * outcomes are joined in the order the files are given, so the result is the same as one file after another.
+     */
     public static Generated generate(List<SourceFile> sources, MutantRequest request) {
-        PointFinder finder = new PointFinder(request.operators(), request.mutateDiagnostics(), request.pointFilter());
+        List<FileOutcome> outcomes = sources.parallelStream().map(source -> FileOutcome.of(source, request)).toList();
         List<Point> points = new ArrayList<>();
         Map<String, SourceFile> files = new LinkedHashMap<>();
         List<ParseProblem> problems = new ArrayList<>();
         Map<String, Integer> notMade = new TreeMap<>();
         Map<String, List<EntryMethods.EntryMethod>> entryMethods = new LinkedHashMap<>();
         long lines = 0;
-        for (SourceFile source : sources) {
-            lines += source.lines().lineCount();
-            JavaSources.Parsed parsed = JavaSources.parse(source);
-            if (!parsed.ok()) {
-                problems.add(parsed.problem());
+        for (FileOutcome outcome : outcomes) {
+            lines += outcome.source().lines().lineCount();
+            if (outcome.problem() != null) {
+                problems.add(outcome.problem());
                 continue;
             }
-            files.put(source.path(), source);
-            entryMethods.put(source.path(), EntryMethods.of(parsed));
+            files.put(outcome.source().path(), outcome.source());
+            entryMethods.put(outcome.source().path(), outcome.entryMethods());
+            points.addAll(outcome.points());
+            outcome.notMade().forEach((reason, count) -> notMade.merge(reason, count, Integer::sum));
+        }
+        points = request.budget().keep(points, notMade);
+        List<Mutant> mutants = new ArrayList<>();
+        for (int order : request.orders()) {
+            if (order == 1) {
+                points.stream().map(Mutant::firstOrder).forEach(mutants::add);
+            } else {
+                mutants.addAll(HigherOrder.combine(points, order, request.scope(), request.seed()));
+            }
+        }
+        return new Generated(mutants, files, problems, lines, notMade, entryMethods);
+    }
+
+    /**
+     * What one file gave: a problem when it does not parse; else its points in scope and not suppressed, the points
+     * not made by reason, and its methods whose entry a schema notes.
+     */
+    private record FileOutcome(SourceFile source, ParseProblem problem, List<Point> points, Map<String, Integer> notMade,
+                               List<EntryMethods.EntryMethod> entryMethods) {
+
+        static FileOutcome of(SourceFile source, MutantRequest request) {
+            JavaSources.Parsed parsed = JavaSources.parse(source);
+            if (!parsed.ok()) {
+                return new FileOutcome(source, parsed.problem(), List.of(), Map.of(), List.of());
+            }
+            PointFinder finder = new PointFinder(request.operators(), request.mutateDiagnostics(), request.pointFilter());
+            List<Point> points = new ArrayList<>();
+            Map<String, Integer> notMade = new TreeMap<>();
             for (Point point : finder.find(parsed)) {
                 if (!request.pointFilter().test(point)) {
                     continue;
@@ -56,17 +89,8 @@ public final class Generation {
                     points.add(point);
                 }
             }
+            finder.notMade().forEach((reason, count) -> notMade.merge(reason, count, Integer::sum));
+            return new FileOutcome(source, null, points, notMade, EntryMethods.of(parsed));
         }
-        points = request.budget().keep(points, notMade);
-        List<Mutant> mutants = new ArrayList<>();
-        for (int order : request.orders()) {
-            if (order == 1) {
-                points.stream().map(Mutant::firstOrder).forEach(mutants::add);
-            } else {
-                mutants.addAll(HigherOrder.combine(points, order, request.scope(), request.seed()));
-            }
-        }
-        finder.notMade().forEach((reason, count) -> notMade.merge(reason, count, Integer::sum));
-        return new Generated(mutants, files, problems, lines, notMade, entryMethods);
     }
 }
