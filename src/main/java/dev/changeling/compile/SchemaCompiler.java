@@ -115,7 +115,7 @@ final class SchemaCompiler {
                 writeSources(rendered.values());
                 return new Outcome(ordered, evicted, stillborn, written, renderNanos, compileNanos, round,
                         ordered.stream().filter(this::watched).collect(Collectors.toUnmodifiableSet()),
-                        rendered.keySet().stream().flatMap(path -> entryMethods.get(path).stream()).toList());
+                        rendered.keySet().stream().flatMap(path -> entryMethods.getOrDefault(path, List.of()).stream()).toList());
             }
             compileNanos += System.nanoTime() - started;
             if (round >= ROUNDS_BEFORE_WHOLE_FILES || leaving.isEmpty()) {

@@ -169,7 +169,7 @@ final class SchemaReuse {
         }
         try {
             Kept kept = JSON.readValue(file.toFile(), Kept.class);
-            return kept.points() == null || kept.evicted() == null || kept.stillborn() == null || kept.classNames() == null
+            return kept.key() == null || kept.classes() == null || kept.points() == null || kept.evicted() == null || kept.stillborn() == null || kept.classNames() == null
                     || kept.watched() == null || kept.entries() == null ? Optional.empty() : Optional.of(kept);
         } catch (IOException | RuntimeException e) {
             return Optional.empty();

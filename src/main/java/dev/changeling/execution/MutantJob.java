@@ -77,9 +77,11 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
     /** The same job with those of {@code first} that are among its tests moved to the front, in that order. */
     public MutantJob withFirst(List<String> first) {
         List<Integer> order = new ArrayList<>();
+        boolean[] moved = new boolean[tests.size()];
         for (String test : first) {
             int at = tests.indexOf(test);
-            if (at >= 0 && !order.contains(at)) {
+            if (at >= 0 && !moved[at]) {
+                moved[at] = true;
                 order.add(at);
             }
         }
@@ -87,7 +89,7 @@ public record MutantJob(String key, int[] points, List<String> tests, long[] tes
             return this;
         }
         for (int at = 0; at < tests.size(); at++) {
-            if (!order.contains(at)) {
+            if (!moved[at]) {
                 order.add(at);
             }
         }

@@ -88,9 +88,8 @@ public final class EntryMethods {
     }
 
     private static boolean holdsDeferredCode(BlockStmt body) {
-        return !body.findAll(LambdaExpr.class).isEmpty()
-                || body.findAll(ObjectCreationExpr.class).stream().anyMatch(creation -> creation.getAnonymousClassBody().isPresent())
-                || !body.findAll(LocalClassDeclarationStmt.class).isEmpty()
-                || !body.findAll(LocalRecordDeclarationStmt.class).isEmpty();
+        return body.stream().anyMatch(node -> node instanceof LambdaExpr || node instanceof LocalClassDeclarationStmt
+                || node instanceof LocalRecordDeclarationStmt
+                || node instanceof ObjectCreationExpr creation && creation.getAnonymousClassBody().isPresent());
     }
 }

@@ -157,8 +157,7 @@ public final class ReachMap {
         for (Point point : points) {
             String source = main.sourceOf(point.file());
             boolean rerunWhereItIs = source != null && changedFiles.contains(source) && (!changedBodiesOnly.contains(point.file())
-                    || schema.methodAt(point.file(), point.host().begin()) != null
-                    && changedMethods.contains(schema.methodAt(point.file(), point.host().begin()).name()));
+                    || isOneOf(schema.methodAt(point.file(), point.host().begin()), changedMethods));
             if (source != null && !rerunWhereItIs && !mapPoints.contains(point.fingerprint())) {
                 return whole("the reach map does not hold every point of " + source + " (made by a narrower run?)");
             }
@@ -192,6 +191,11 @@ public final class ReachMap {
         return new Choice(runs, mapped, "reach map: " + runs.size() + " of " + suiteClasses.size() + " test classes run (new, changed,"
                 + " or reaching " + changedFiles.size() + (changedFiles.size() == 1 ? " changed file" : " changed files") + "); the reach of "
                 + mapped.size() + " tests comes from the map");
+    }
+
+    /** Whether the method (null: none) is among the named ones. */
+    private static boolean isOneOf(EntryMethod method, Set<String> names) {
+        return method != null && names.contains(method.name());
     }
 
     private static Choice whole(String why) {

@@ -22,7 +22,6 @@ public final class SchemaCode {
 
     private final List<Point> points;
     private final List<EntryMethod> methods;
-    private final Map<String, SourceFile> files;
     private final Map<String, String> bodies = new HashMap<>();
     private final Map<String, String> skeletons = new TreeMap<>();
 
@@ -34,7 +33,6 @@ public final class SchemaCode {
     public SchemaCode(List<Point> points, List<EntryMethod> methods, Map<String, SourceFile> files) {
         this.points = List.copyOf(points);
         this.methods = List.copyOf(methods);
-        this.files = files;
         Map<String, List<EntryMethod>> byFile = methods.stream().collect(Collectors.groupingBy(EntryMethod::file));
         for (String path : paths()) {
             SourceFile file = files.get(path);
@@ -82,10 +80,5 @@ public final class SchemaCode {
             }
         }
         return null;
-    }
-
-    /** The text of a file with points. */
-    SourceFile file(String path) {
-        return files.get(path);
     }
 }
