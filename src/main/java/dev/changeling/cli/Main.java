@@ -5,6 +5,7 @@ import dev.changeling.UserError;
 import java.io.PrintWriter;
 import java.util.Comparator;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeMap;
 import picocli.CommandLine;
 import picocli.CommandLine.Model.UsageMessageSpec;
@@ -16,7 +17,8 @@ public final class Main {
     }
 
     public static void main(String[] args) {
-        System.exit(execute(new PrintWriter(System.out, true), new PrintWriter(System.err, true), args));
+        Optional<Integer> elsewhere = ToolJvm.relaunch(args).flatMap(ToolJvm::runIn);
+        System.exit(elsewhere.orElseGet(() -> execute(new PrintWriter(System.out, true), new PrintWriter(System.err, true), args)));
     }
 
     /** Runs a command line with the given output streams and returns the exit code. */
