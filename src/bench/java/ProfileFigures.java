@@ -75,6 +75,7 @@ public final class ProfileFigures {
             String command = events.stream().filter(event -> event.getEventType().getName().equals("jdk.JVMInformation"))
                     .map(event -> event.getString("javaArguments")).findFirst().orElse("");
             boolean worker = command.contains("dev.changeling.worker.WorkerMain");
+            // the JVM the user started, and the one it started again with the client compiler only (ToolJvm)
             boolean isTool = command.contains("changeling") && command.contains(" run");
             if (!worker && !isTool) {
                 continue;
@@ -93,8 +94,7 @@ public final class ProfileFigures {
             }
             tally.jitNanos += jit;
         }
-        print("workers", workers, workersStarted < 0 ? "" : " of " + workersStarted + " started (a worker ended at a deadline or"
-                + " replaced by a kill leaves none)");
+        print("workers", workers, workersStarted < 0 ? "" : " of " + workersStarted + " started (a worker the tool had to kill leaves none)");
         print("tool", tool, "");
     }
 
