@@ -15,8 +15,8 @@ import sun.misc.Signal;
 /**
  * The JVM that {@code run} works in. A run compiles with javac and parses with JavaParser for seconds, not minutes, and
  * the optimising JIT spent a fifth of the run's CPU compiling that code on two cores (26.7 s of 120 s on commons-cli's
- * full run), on the cores the workers need. With the client compiler only, the whole run took 0.83 of the time
- * ({@code farm-bench -n 3}). A running JVM cannot change its compiler and a jar cannot name JVM options, so {@code run}
+ * full run), on the cores the workers need. With the client compiler only, the whole run took 0.85 of the time
+ * ({@code farm-bench -n 5}, median of the pairs). A running JVM cannot change its compiler and a jar cannot name JVM options, so {@code run}
  * starts itself once more in a JVM with {@value #CLIENT_COMPILER_ONLY} and the options this one was given, passes
  * Ctrl-C and termination on, and exits as that JVM does.
  *
