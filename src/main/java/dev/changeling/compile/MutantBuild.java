@@ -15,6 +15,7 @@ import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeMap;
 
@@ -67,7 +68,8 @@ public final class MutantBuild {
         candidates.stream().map(Point::file).distinct().forEach(path -> methods.put(path,
                 request.entryMethods().containsKey(path) ? request.entryMethods().get(path) : EntryMethods.of(request.files().get(path))));
         SchemaReuse.Inputs inputs = SchemaReuse.inputs(candidates, request.files(), methods, request.classpath());
-        SchemaCompiler.Outcome kept = SchemaReuse.reuse(output, inputs, candidates).orElse(null);
+        Optional<SchemaReuse.Kept> last = SchemaReuse.read(output);
+        SchemaCompiler.Outcome kept = SchemaReuse.reuse(last, output, inputs, candidates).orElse(null);
         if (kept == null) {
             for (String folder : List.of(SCHEMA, SCHEMA_SOURCES)) {
                 Outputs.deleteTree(output.resolve(folder));
@@ -78,7 +80,7 @@ public final class MutantBuild {
             SchemaCompiler.Outcome schema = kept;
             if (schema == null) {
                 schema = new SchemaCompiler(javac, request.files(), methods, output.resolve(SCHEMA), output.resolve(SCHEMA_SOURCES),
-                        output.resolve(SCRATCH)).compile(candidates, SchemaReuse.carried(output, inputs, candidates));
+                        output.resolve(SCRATCH)).compile(candidates, SchemaReuse.carried(last, inputs, candidates));
                 SchemaReuse.keep(output, inputs, schema);
             }
             Map<Point, Integer> ids = new HashMap<>();

@@ -12,6 +12,7 @@ import dev.changeling.source.SourceHash;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Collection;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -27,8 +28,9 @@ import java.util.stream.Collectors;
 /**
  * The last schema build, kept beside its classes (with the methods whose entry it notes) under the key of everything it
  * was compiled from: the points, the text of their files, the classpath by content (less the classes of the files with
- * points, which javac compiles from their text), this tool's build and the Java runtime. A run whose key is the same takes the classes and the rounds' outcome as they are, provided the classes are
- * still the ones written (their digest is kept too); anything else compiles again. When only method bodies changed
+ * points, which javac compiles from their text), this tool's build and the Java runtime. A run whose key is the same
+ * takes the classes and the rounds' outcome as they are, provided the classes are still the ones written (their digest
+ * is kept too); anything else compiles again. When only method bodies changed
  * (every changed file's text without them is as it was), the points that left the schema last time from the files that
  * did not change leave it again at once, for the same reasons: javac reads other files' signatures, never their bodies,
  * so their rounds would find the same errors; the schema then usually compiles in one round.
@@ -111,9 +113,12 @@ final class SchemaReuse {
         };
     }
 
-    /** The kept outcome, when its key is that of {@code inputs} and the schema's classes in {@code output} are those it wrote. */
-    static Optional<SchemaCompiler.Outcome> reuse(Path output, Inputs inputs, Set<Point> candidates) {
-        return read(output).filter(kept -> inputs.key().equals(kept.key())
+    /**
+     * The kept outcome ({@link #read}), when its key is that of {@code inputs} and the schema's classes in {@code output}
+     * are those it wrote.
+     */
+    static Optional<SchemaCompiler.Outcome> reuse(Optional<Kept> last, Path output, Inputs inputs, Set<Point> candidates) {
+        return last.filter(kept -> inputs.key().equals(kept.key())
                         && kept.classes().equals(SourceHash.ofEntry(output.resolve(MutantBuild.SCHEMA), path -> true)))
                 .map(kept -> {
                     Map<String, Point> byFingerprint = byFingerprint(candidates);
@@ -129,8 +134,8 @@ final class SchemaReuse {
      * method bodies: the same tool, Java, classpath and files, and every changed file the same without its methods'
      * bodies. Otherwise none. An unchanged file is one with the same text and the same points.
      */
-    static Carried carried(Path output, Inputs inputs, Set<Point> candidates) {
-        Kept kept = read(output).orElse(null);
+    static Carried carried(Optional<Kept> last, Inputs inputs, Set<Point> candidates) {
+        Kept kept = last.orElse(null);
         if (kept == null || kept.files() == null || !inputs.base().equals(kept.base()) || !inputs.files().keySet().equals(kept.files().keySet())) {
             return Carried.NONE;
         }
@@ -162,7 +167,8 @@ final class SchemaReuse {
         }
     }
 
-    private static Optional<Kept> read(Path output) {
+    /** The last build's outcome as kept in {@code output}, if there is one that reads whole. */
+    static Optional<Kept> read(Path output) {
         Path file = output.resolve(FILE_NAME);
         if (!Files.isRegularFile(file)) {
             return Optional.empty();
@@ -176,7 +182,7 @@ final class SchemaReuse {
         }
     }
 
-    private static Map<String, Point> byFingerprint(java.util.Collection<Point> points) {
+    private static Map<String, Point> byFingerprint(Collection<Point> points) {
         Map<String, Point> result = new HashMap<>();
         points.forEach(point -> result.put(point.fingerprint(), point));
         return result;

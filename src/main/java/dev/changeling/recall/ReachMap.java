@@ -113,13 +113,7 @@ public final class ReachMap {
             return whole("the reach map was made with another build of the tool, Java, classpath, test settings or operators");
         }
         ClassGraph main = classes.main();
-        Map<String, String> schemaPaths = new HashMap<>();
-        schema.paths().forEach(path -> {
-            String source = main.sourceOf(path);
-            if (source != null) {
-                schemaPaths.put(source, path);
-            }
-        });
+        Map<String, String> schemaPaths = schemaPathsBySource(main, schema);
         Set<String> sources = new TreeSet<>(main.sources());
         sources.addAll(map.files().keySet());
         Set<Integer> changedPoints = new HashSet<>();
@@ -193,6 +187,18 @@ public final class ReachMap {
                 + mapped.size() + " tests comes from the map");
     }
 
+    /** The project-relative path of each schema file, by its main source's package path (where the classes know it). */
+    private static Map<String, String> schemaPathsBySource(ClassGraph main, SchemaCode schema) {
+        Map<String, String> paths = new HashMap<>();
+        for (String path : schema.paths()) {
+            String source = main.sourceOf(path);
+            if (source != null) {
+                paths.put(source, path);
+            }
+        }
+        return paths;
+    }
+
     /** Whether the method (null: none) is among the named ones. */
     private static boolean isOneOf(EntryMethod method, Set<String> names) {
         return method != null && names.contains(method.name());
@@ -233,14 +239,13 @@ public final class ReachMap {
         ClassGraph main = classes.main();
         Map<String, List<Integer>> pointsBySource = new TreeMap<>();
         main.sources().forEach(source -> pointsBySource.put(source, new ArrayList<>()));
-        Map<String, String> schemaPaths = new HashMap<>();
         for (int id = 0; id < pointCount; id++) {
             String source = main.sourceOf(points.get(id).file());
             if (source != null) {
                 pointsBySource.get(source).add(id);
-                schemaPaths.put(source, points.get(id).file());
             }
         }
+        Map<String, String> schemaPaths = schemaPathsBySource(main, schema);
         Map<String, MappedFile> files = new TreeMap<>();
         pointsBySource.forEach((source, ids) -> {
             String path = schemaPaths.get(source);

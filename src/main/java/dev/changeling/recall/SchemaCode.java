@@ -5,6 +5,7 @@ import dev.changeling.mutant.EntryMethods.EntryMethod;
 import dev.changeling.mutant.Point;
 import dev.changeling.source.SourceFile;
 import dev.changeling.source.SourceHash;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -23,6 +24,7 @@ public final class SchemaCode {
     private final List<Point> points;
     private final List<EntryMethod> methods;
     private final Map<String, String> bodies = new HashMap<>();
+    /** The skeleton's digest of each file with points, by path (so its keys are those paths, sorted). */
     private final Map<String, String> skeletons = new TreeMap<>();
 
     /**
@@ -34,7 +36,7 @@ public final class SchemaCode {
         this.points = List.copyOf(points);
         this.methods = List.copyOf(methods);
         Map<String, List<EntryMethod>> byFile = methods.stream().collect(Collectors.groupingBy(EntryMethod::file));
-        for (String path : paths()) {
+        for (String path : points.stream().map(Point::file).collect(Collectors.toCollection(TreeSet::new))) {
             SourceFile file = files.get(path);
             List<EntryMethod> own = byFile.getOrDefault(path, List.of());
             own.forEach(method -> bodies.put(method.name(), SourceHash.sha256(file.textOf(method.body()))));
@@ -52,7 +54,7 @@ public final class SchemaCode {
 
     /** The project-relative paths of the files with points, sorted. */
     public Set<String> paths() {
-        return points.stream().map(Point::file).collect(Collectors.toCollection(TreeSet::new));
+        return Collections.unmodifiableSet(skeletons.keySet());
     }
 
     /** The digest of a file with points, less the bodies of its noted methods. */
